@@ -1,0 +1,18 @@
+import { conductivity } from '../../physics';
+import { counterDoping, dopant, doping, material, resistivityModel, sampleOf, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const CONDUCTIVITY = elementwise({
+  name: 'CONDUCTIVITY',
+  summary: 'Conductivity σ = q(nμn + pμp) of a doped sample, in S/cm.',
+  help: `Returns σ = q(n·μn + p·μp), with n and p from charge neutrality with incomplete ionization and μ from the selected mobility model (see DRIFT.MOBILITY for how the two are combined without double-counting). With model astm-f723 it returns 1/ρ from the ASTM F723 conversion instead (B and P only, room temperature, no counter-doping).`,
+  result: { unit: 'S/cm', description: 'Conductivity σ' },
+  parameters: [doping, dopant, temperature, resistivityModel, material, counterDoping] as const,
+  examples: [
+    { formula: '=DRIFT.CONDUCTIVITY(1e16,"P")', note: 'about 1.9 S/cm' },
+    { formula: '=DRIFT.CONDUCTIVITY(1e16,"P",{250,300,350})', note: 'across a row of temperatures' },
+  ],
+  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723'],
+  compute: (density, dopantCode, temperatureK, model, materialValue, counter) =>
+    conductivity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), model),
+});

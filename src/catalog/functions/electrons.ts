@@ -1,0 +1,18 @@
+import { solveEquilibrium } from '../../physics';
+import { acceptors, donors, genericDoping, material, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const ELECTRONS = elementwise({
+  name: 'ELECTRONS',
+  summary: 'Equilibrium electron density n from donor and acceptor densities, in cm⁻³.',
+  help: `Solves charge neutrality p + Nd⁺ = n + Na⁻ for the Fermi level, with incomplete ionization of both dopant types, and returns the electron density n. Donors and acceptors are treated as generic n- and p-type dopants (phosphorus-like and boron-like ionization energies). Freeze-out at low temperature and intrinsic conduction at high temperature come out of the same equations.`,
+  result: { unit: 'cm⁻³', description: 'Electron density n' },
+  parameters: [donors, acceptors, temperature, material] as const,
+  examples: [
+    { formula: '=DRIFT.ELECTRONS(1e16,0)', note: 'n-type 1e16 cm⁻³ at 300 K: nearly all donors ionized' },
+    { formula: '=DRIFT.ELECTRONS(1e16,0,77)', note: 'the same at 77 K: partly frozen out' },
+  ],
+  models: ['altermatt-2006', 'misiakos'],
+  compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
+    solveEquilibrium(materialValue, temperatureK, genericDoping(materialValue, donorDensity, acceptorDensity)).electrons,
+});

@@ -1,0 +1,18 @@
+import { solveEquilibrium } from '../../physics';
+import { acceptors, donors, genericDoping, material, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const FERMILEVEL = elementwise({
+  name: 'FERMILEVEL',
+  summary: 'Equilibrium Fermi level relative to the intrinsic level, Ef − Ei, in eV.',
+  help: `Solves charge neutrality with incomplete ionization and returns the Fermi level measured from the intrinsic level Ei: positive in n-type material, negative in p-type, zero when intrinsic. With Boltzmann statistics Ef − Ei = kT·ln(n/ni).`,
+  result: { unit: 'eV', description: 'Ef − Ei' },
+  parameters: [donors, acceptors, temperature, material] as const,
+  examples: [
+    { formula: '=DRIFT.FERMILEVEL(1e16,0)', note: 'n-type 1e16 cm⁻³ at 300 K, about +0.35 eV' },
+    { formula: '=DRIFT.FERMILEVEL(0,1e16,B1:H1)', note: 'p-type across a row of temperatures' },
+  ],
+  models: ['altermatt-2006', 'misiakos'],
+  compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
+    solveEquilibrium(materialValue, temperatureK, genericDoping(materialValue, donorDensity, acceptorDensity)).fermiLevel,
+});

@@ -1,0 +1,18 @@
+import { solveEquilibrium } from '../../physics';
+import { acceptors, donors, genericDoping, material, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const HOLES = elementwise({
+  name: 'HOLES',
+  summary: 'Equilibrium hole density p from donor and acceptor densities, in cm⁻³.',
+  help: `Solves charge neutrality p + Nd⁺ = n + Na⁻ for the Fermi level, with incomplete ionization of both dopant types, and returns the hole density p. Donors and acceptors are treated as generic n- and p-type dopants (phosphorus-like and boron-like ionization energies).`,
+  result: { unit: 'cm⁻³', description: 'Hole density p' },
+  parameters: [donors, acceptors, temperature, material] as const,
+  examples: [
+    { formula: '=DRIFT.HOLES(0,5e15)', note: 'p-type 5e15 cm⁻³ at 300 K' },
+    { formula: '=DRIFT.HOLES(1e16,0)', note: 'minority holes in n-type 1e16 cm⁻³: ni²/n' },
+  ],
+  models: ['altermatt-2006', 'misiakos'],
+  compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
+    solveEquilibrium(materialValue, temperatureK, genericDoping(materialValue, donorDensity, acceptorDensity)).holes,
+});

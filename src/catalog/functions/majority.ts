@@ -1,0 +1,22 @@
+import { carrierFor, sampleDopants, solveEquilibrium } from '../../physics';
+import { counterDoping, dopant, doping, material, sampleOf, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const MAJORITY = elementwise({
+  name: 'MAJORITY',
+  summary: 'Density of the carriers the dopant supplies (electrons for donors, holes for acceptors), in cm⁻³.',
+  help: `Solves charge neutrality with incomplete ionization for a sample doped with the given dopant (and, optionally, counter-doped with the opposite type) and returns the density of the carrier type that dopant supplies: electrons for P, As, Sb and n; holes for B, Al, Ga, In and p. If counter_doping exceeds doping the sample changes type and this carrier is then the minority one.`,
+  result: { unit: 'cm⁻³', description: 'Majority-carrier density' },
+  parameters: [doping, dopant, temperature, material, counterDoping] as const,
+  examples: [
+    { formula: '=DRIFT.MAJORITY(1e17,"P")', note: 'electrons in 1e17 cm⁻³ phosphorus-doped Si at 300 K' },
+    { formula: '=DRIFT.MAJORITY(1e17,"B",77)', note: 'holes at 77 K: freeze-out lowers them' },
+    { formula: '=DRIFT.MAJORITY(1e16,"P",300,,4e15)', note: 'compensated: about 6e15 cm⁻³' },
+  ],
+  models: ['altermatt-2006', 'misiakos'],
+  compute: (density, dopantCode, temperatureK, materialValue, counter) => {
+    const sample = sampleOf(materialValue, temperatureK, dopantCode, density, counter);
+    const state = solveEquilibrium(materialValue, temperatureK, sampleDopants(sample));
+    return carrierFor(sample.dopant, 'majority') === 'electron' ? state.electrons : state.holes;
+  },
+});

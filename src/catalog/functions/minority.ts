@@ -1,0 +1,21 @@
+import { carrierFor, sampleDopants, solveEquilibrium } from '../../physics';
+import { counterDoping, dopant, doping, material, sampleOf, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const MINORITY = elementwise({
+  name: 'MINORITY',
+  summary: 'Density of the carriers opposite to the dopant’s type, in cm⁻³.',
+  help: `Solves charge neutrality with incomplete ionization and returns the density of the carrier type opposite to the one the dopant supplies (holes for donors, electrons for acceptors). In equilibrium it equals ni² divided by the majority density.`,
+  result: { unit: 'cm⁻³', description: 'Minority-carrier density' },
+  parameters: [doping, dopant, temperature, material, counterDoping] as const,
+  examples: [
+    { formula: '=DRIFT.MINORITY(1e15,"B")', note: 'electrons in 1e15 cm⁻³ boron-doped Si, about 9e4 cm⁻³' },
+    { formula: '=DRIFT.MINORITY(1e15,"B",{300,400,500})', note: 'the rise with temperature along a row' },
+  ],
+  models: ['altermatt-2006', 'misiakos'],
+  compute: (density, dopantCode, temperatureK, materialValue, counter) => {
+    const sample = sampleOf(materialValue, temperatureK, dopantCode, density, counter);
+    const state = solveEquilibrium(materialValue, temperatureK, sampleDopants(sample));
+    return carrierFor(sample.dopant, 'minority') === 'electron' ? state.electrons : state.holes;
+  },
+});

@@ -1,0 +1,19 @@
+import { resistivity } from '../../physics';
+import { counterDoping, dopant, doping, material, resistivityModel, sampleOf, temperature } from '../common';
+import { elementwise } from '../types';
+
+export const RESISTIVITY = elementwise({
+  name: 'RESISTIVITY',
+  summary: 'Resistivity ρ = 1/σ of a doped sample, in Ω·cm.',
+  help: `Returns ρ = 1/[q(n·μn + p·μp)] for the given dopant density, temperature and mobility model. At 300 K the default agrees with the ASTM F723 conversion for boron and phosphorus within a few percent from 1e13 to 1e20 cm⁻³ (see the reference tests). A doping column against a temperature row spills the whole table: =DRIFT.RESISTIVITY(A2:A40,"B",B1:H1). With model astm-f723 it returns the standard's conversion directly (B and P, room temperature, no counter-doping).`,
+  result: { unit: 'Ω·cm', description: 'Resistivity ρ' },
+  parameters: [doping, dopant, temperature, resistivityModel, material, counterDoping] as const,
+  examples: [
+    { formula: '=DRIFT.RESISTIVITY(1e15,"B")', note: 'about 13 Ω·cm' },
+    { formula: '=DRIFT.RESISTIVITY(1e15,"B",,"astm-f723")', note: 'the ASTM F723 value for comparison' },
+    { formula: '=DRIFT.RESISTIVITY(A2:A40,"B",B1:H1)', note: 'doping down, temperature across: a full table' },
+  ],
+  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723'],
+  compute: (density, dopantCode, temperatureK, model, materialValue, counter) =>
+    resistivity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), model),
+});

@@ -1,0 +1,166 @@
+/**
+ * Parameter builders shared by catalog entries. Each returns a ParameterSpec
+ * whose `parse` validates one element once, at the boundary, and throws an
+ * InputError whose message names the argument, the value and what is allowed.
+ */
+import type { ParameterSpec } from './types';
+import { InputError, type CellInput } from './values';
+
+type Plain = Exclude<CellInput, { kind: 'failure' }>;
+
+/** Shows a value as the user typed it, for messages. */
+export function describeValue(value: Plain): string {
+  if (value === null) return 'blank';
+  if (typeof value === 'string') return `"${value}"`;
+  if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
+  return String(value);
+}
+
+/** Reads a number from a cell element: numbers as they are, numeric text trimmed; blanks give null. */
+function readNumber(name: string, value: Plain): number | null {
+  if (value === null || (typeof value === 'string' && value.trim() === '')) return null;
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new InputError(`${name} must be a finite number; got ${value}`);
+    return value;
+  }
+  if (typeof value === 'string') {
+    const parsed = Number(value.trim());
+    if (Number.isFinite(parsed)) return parsed;
+  }
+  throw new InputError(`${name} must be a number; got ${describeValue(value)}`);
+}
+
+export interface NumberRule {
+  /** Lowest allowed value. */
+  readonly min?: number;
+  /** Whether `min` itself is excluded (e.g. > 0). */
+  readonly minExclusive?: boolean;
+  readonly max?: number;
+  /** Unit shown in range messages; null for dimensionless values. */
+  readonly unit?: string | null;
+}
+
+function rangeText(rule: NumberRule): string {
+  const unit = rule.unit ? ` ${rule.unit}` : '';
+  const parts: string[] = [];
+  if (rule.min !== undefined) parts.push(`${rule.minExclusive ? '>' : '≥'} ${rule.min}${unit}`);
+  if (rule.max !== undefined) parts.push(`≤ ${rule.max}${unit}`);
+  return parts.join(' and ');
+}
+
+function checkRange(name: string, value: number, rule: NumberRule): number {
+  const belowMin =
+    rule.min !== undefined && (rule.minExclusive ? value <= rule.min : value < rule.min);
+  const aboveMax = rule.max !== undefined && value > rule.max;
+  if (belowMin || aboveMax) {
+    throw new InputError(`${name} must be ${rangeText(rule)}; got ${value}`);
+  }
+  return value;
+}
+
+interface NumberOptions extends NumberRule {
+  readonly name: string;
+  readonly unit: string | null;
+  readonly description: string;
+}
+
+/** A required number. */
+export function requiredNumber(options: NumberOptions): ParameterSpec<number> {
+  const { name, unit, description } = options;
+  return {
+    name,
+    type: 'number',
+    unit,
+    description,
+    optional: false,
+    parse(value) {
+      const n = readNumber(name, value);
+      if (n === null) throw new InputError(`${name} is required (${description.replace(/\.$/, '')})`);
+      return checkRange(name, n, options);
+    },
+  };
+}
+
+/** An optional number with a default used for blank or omitted arguments. */
+export function optionalNumber(options: NumberOptions & { readonly defaultValue: number }): ParameterSpec<number> {
+  const { name, unit, description, defaultValue } = options;
+  return {
+    name,
+    type: 'number',
+    unit,
+    description,
+    optional: true,
+    defaultText: String(defaultValue),
+    parse(value) {
+      const n = readNumber(name, value);
+      return n === null ? defaultValue : checkRange(name, n, options);
+    },
+  };
+}
+
+interface CodeOptions<T> {
+  readonly name: string;
+  readonly description: string;
+  /** Allowed codes in display form. */
+  readonly choices: () => readonly string[];
+  /** Default code for blanks, or undefined if the argument is required. */
+  readonly defaultCode?: string;
+  /** Maps a canonical code to the value the implementation receives. */
+  readonly resolve: (code: string) => T;
+}
+
+/** A text code (case-insensitive) from a fixed list. */
+export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
+  const { name, description, choices, defaultCode, resolve } = options;
+  const optional = defaultCode !== undefined;
+  return {
+    name,
+    type: 'text',
+    unit: null,
+    description,
+    optional,
+    defaultText: defaultCode,
+    choices,
+    parse(value) {
+      if (value === null || (typeof value === 'string' && value.trim() === '')) {
+        if (optional) return resolve(defaultCode);
+        throw new InputError(`${name} is required; allowed: ${choices().join(', ')}`);
+      }
+      if (typeof value !== 'string') {
+        throw new InputError(`${name} must be a text code; got ${describeValue(value)}; allowed: ${choices().join(', ')}`);
+      }
+      const wanted = value.trim().toLowerCase();
+      const match = choices().find((c) => c.toLowerCase() === wanted);
+      if (match === undefined) {
+        throw new InputError(`${name} "${value}" is not known; allowed: ${choices().join(', ')}`);
+      }
+      return resolve(match);
+    },
+  };
+}
+
+/**
+ * A required code whose meaning depends on another argument (a dopant is
+ * known only per material), so the implementation resolves it. This parser
+ * only insists on non-blank text and hands it on trimmed.
+ */
+export function requiredCode(options: { readonly name: string; readonly description: string; readonly choices: () => readonly string[] }): ParameterSpec<string> {
+  const { name, description, choices } = options;
+  return {
+    name,
+    type: 'text',
+    unit: null,
+    description,
+    optional: false,
+    choices,
+    parse(value) {
+      if (value === null || (typeof value === 'string' && value.trim() === '')) {
+        throw new InputError(`${name} is required; allowed: ${choices().join(', ')}`);
+      }
+      if (typeof value !== 'string') {
+        throw new InputError(`${name} must be a text code; got ${describeValue(value)}; allowed: ${choices().join(', ')}`);
+      }
+      return value.trim();
+    },
+  };
+}

@@ -1,0 +1,83 @@
+/**
+ * The shape of a catalog entry. One FunctionSpec per spreadsheet function is
+ * the single source of truth from which Excel metadata, the engine plugin,
+ * help pages and the README table are generated.
+ */
+import type { CellInput, CellOutput, Grid } from './values';
+
+export type ParameterType = 'number' | 'text';
+
+export interface ParameterSpec<T = unknown> {
+  /** Argument name as the user sees it, e.g. `temperature_K`. */
+  readonly name: string;
+  readonly type: ParameterType;
+  /** Unit in display form (cm⁻³, Ω·cm, K), or null for codes and fractions. */
+  readonly unit: string | null;
+  /** One sentence, shown in Excel's argument tooltip and the help page. */
+  readonly description: string;
+  readonly optional: boolean;
+  /** Display form of the default, for help and metadata (e.g. `300`, `Si`). */
+  readonly defaultText?: string;
+  /** Allowed codes, for text parameters that take a code. */
+  readonly choices?: () => readonly string[];
+  /**
+   * Turns one element into the value the implementation receives. `null`
+   * means blank. Throws InputError with a message naming the argument, the
+   * value and what is allowed.
+   */
+  readonly parse: (value: Exclude<CellInput, { kind: 'failure' }>) => T;
+}
+
+export type ParsedArguments<P extends readonly ParameterSpec[]> = {
+  [K in keyof P]: P[K] extends ParameterSpec<infer T> ? T : never;
+};
+
+export interface Example {
+  /** A formula exactly as typed in a cell. */
+  readonly formula: string;
+  /** What it shows, in words. */
+  readonly note: string;
+}
+
+interface SpecCommon {
+  /** Name without the namespace, upper case, e.g. `RESISTIVITY`. */
+  readonly name: string;
+  /** One line for Excel's function list. */
+  readonly summary: string;
+  /** Help page body: paragraphs separated by blank lines. */
+  readonly help: string;
+  readonly result: { readonly unit: string | null; readonly description: string };
+  readonly examples: readonly Example[];
+  /** Model codes whose citations belong on this function's help page. */
+  readonly models: readonly string[];
+}
+
+/** A function evaluated element by element over broadcast arguments. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- erased argument types for the catalog list
+export type AnyParameters = readonly ParameterSpec<any>[];
+
+export interface ElementwiseSpec<P extends readonly ParameterSpec[] = AnyParameters> extends SpecCommon {
+  readonly kind: 'elementwise';
+  readonly parameters: P;
+  readonly compute: (...args: ParsedArguments<P>) => number;
+}
+
+/** A function that returns a whole table (no broadcasting), e.g. MODELS. */
+export interface TableSpec extends SpecCommon {
+  readonly kind: 'table';
+  readonly parameters: readonly [];
+  readonly table: () => Grid<CellOutput>;
+}
+
+export type FunctionSpec = ElementwiseSpec<AnyParameters> | TableSpec;
+
+/** Declares an elementwise function with its argument types inferred. */
+export function elementwise<const P extends readonly ParameterSpec[]>(
+  spec: Omit<ElementwiseSpec<P>, 'kind'>,
+): ElementwiseSpec<P> {
+  return { kind: 'elementwise', ...spec };
+}
+
+export function tableFunction(spec: Omit<TableSpec, 'kind' | 'parameters'>): TableSpec {
+  return { kind: 'table', parameters: [], ...spec };
+}

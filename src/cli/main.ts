@@ -1,0 +1,167 @@
+#!/usr/bin/env node
+/**
+ * The `driftcell` command: DRIFT formulas without a spreadsheet program.
+ * Subcommands: calc (one formula), recalc (a whole .xlsx workbook), demo
+ * (writes a demo workbook). Errors end in one line on stderr, never a stack
+ * trace; exit statuses are listed in the help.
+ */
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { Command, CommanderError } from 'commander';
+import { runCalc } from './calc';
+import { DEFAULT_DEMO_FILE, runDemo } from './demo';
+import { CliFailure, EXIT_CANNOT_RUN, EXIT_OK, EXIT_RESULT_ERROR, PROCESS_OUTPUT, type Output } from './failure';
+import { runRecalc } from './recalc';
+
+function packageVersion(): string {
+  try {
+    // dist/node/cli/main.js → package.json at the package root.
+    const text = readFileSync(join(__dirname, '..', '..', '..', 'package.json'), 'utf8');
+    return (JSON.parse(text) as { version?: string }).version ?? 'unknown';
+  } catch {
+    return 'unknown';
+  }
+}
+
+const EXIT_STATUS_HELP = `
+Exit status:
+  ${EXIT_OK}  done
+  ${EXIT_RESULT_ERROR}  calc only: the formula's result is an error (every element of it, for a spill)
+  ${EXIT_CANNOT_RUN}  the command could not run: wrong usage, a missing or unreadable workbook,
+     or an output that would replace the input or an existing file`;
+
+const CALC_HELP = `
+The leading "=" is optional. Quote the formula for your shell. A formula that
+begins with "-" needs "--" before it (driftcell calc -- '-1*DRIFT.NI(300)').
+
+Examples:
+  driftcell calc 'DRIFT.RESISTIVITY(1e15,"B")'
+  driftcell calc '=DRIFT.RESISTIVITY({1e15;1e16},"P",{250,300,350})'
+  driftcell calc 'DRIFT.RESISTOR(DRIFT.RESISTIVITY(2e18,"B"),450,15,2.5)/1000'`;
+
+const RECALC_HELP = `
+Every formula is recalculated (DRIFT functions, spreadsheet built-ins,
+references between sheets) and stored with its result, so any reader shows
+the values without recalculating. A formula whose result spills is written as
+a dynamic array over exactly its result; where a spill would cover a filled
+cell, the formula shows #SPILL! and the cell keeps its content. Values,
+formulas and cell formatting are kept; charts, pivot tables and macros are not
+carried into the copy. Cells that show errors are listed on stderr.
+
+The input is never changed: -o must name another file. An existing output is
+only replaced with --force. The output is written to a temporary file in the
+same folder first and then renamed into place.
+
+Example:
+  driftcell recalc lots.xlsx -o lots-calculated.xlsx`;
+
+const DEMO_HELP = `
+The demo is invented from start to end: a fictional pressure-sensor maker
+checks incoming wafers against their ordered resistivity windows and sizes a
+boron-diffused resistor from -40 to 150 °C. Every result cell holds a live
+formula with its result stored. An existing file is never replaced.
+
+Example:
+  driftcell demo -o sensor-demo.xlsx`;
+
+/**
+ * Builds the command-line program; actions report their exit status through `setStatus`.
+ *
+ * @param output - where the commands print
+ * @param setStatus - receives each command's exit status
+ */
+export function buildProgram(output: Output, setStatus: (status: number) => void): Command {
+  const program = new Command();
+  program
+    .name('driftcell')
+    .description(
+      'Semiconductor transport physics (carrier densities, mobility, resistivity, doping …) as spreadsheet ' +
+        'formulas, without a spreadsheet program: evaluate one DRIFT formula, recalculate an .xlsx workbook, ' +
+        'or write a demo workbook.',
+    )
+    .version(packageVersion(), '-V, --version', 'print the version')
+    .helpOption('-h, --help', 'show this help')
+    .helpCommand('help [command]', 'show help for a command')
+    .addHelpText('after', EXIT_STATUS_HELP)
+    .showHelpAfterError('(run with --help to see how it is used)')
+    .exitOverride()
+    .configureOutput({
+      writeOut: (text) => output.out(text.replace(/\n$/, '')),
+      writeErr: (text) => output.err(text.replace(/\n$/, '')),
+    });
+
+  program
+    .command('calc')
+    .description('evaluate one formula and print its result')
+    .argument('<formula>', 'a formula such as DRIFT.NI(300) or =SUM(DRIFT.SHEETRES({1,2},10))')
+    .addHelpText('after', CALC_HELP)
+    .action((formula: string) => setStatus(runCalc(formula, output)));
+
+  program
+    .command('recalc')
+    .description('recalculate a workbook and write a copy with every result stored')
+    .argument('<input>', 'the .xlsx workbook to read (it is not changed)')
+    .requiredOption('-o, --output <file>', 'the .xlsx file to write')
+    .option('-f, --force', 'replace the output file if it exists (never the input)', false)
+    .addHelpText('after', RECALC_HELP)
+    .action(async (input: string, options: { output: string; force: boolean }) =>
+      setStatus(await runRecalc(input, options, output)),
+    );
+
+  program
+    .command('demo')
+    .description('write a demo workbook with invented data and print its resistor sweep')
+    .option('-o, --output <file>', 'the .xlsx file to write', DEFAULT_DEMO_FILE)
+    .addHelpText('after', DEMO_HELP)
+    .action(async (options: { output: string }) => setStatus(await runDemo(options.output, output)));
+
+  program.commands.forEach((command) => {
+    command.exitOverride().configureOutput({
+      writeOut: (text) => output.out(text.replace(/\n$/, '')),
+      writeErr: (text) => output.err(text.replace(/\n$/, '')),
+    });
+    command.helpOption('-h, --help', 'show this help');
+  });
+  return program;
+}
+
+/**
+ * Runs the command line.
+ *
+ * @param args - the arguments after the program name
+ * @param output - where to print (default stdout/stderr)
+ * @returns the exit status
+ * @example await main(['calc', 'DRIFT.SHEETRES(1,10)']) // prints 1000, returns 0
+ */
+export async function main(args: readonly string[], output: Output = PROCESS_OUTPUT): Promise<number> {
+  let status = EXIT_OK;
+  const program = buildProgram(output, (s) => (status = s));
+  try {
+    if (args.length === 0) {
+      program.outputHelp();
+      return EXIT_CANNOT_RUN;
+    }
+    await program.parseAsync([...args], { from: 'user' });
+    return status;
+  } catch (e) {
+    if (e instanceof CommanderError) return e.exitCode === 0 ? EXIT_OK : EXIT_CANNOT_RUN;
+    if (e instanceof CliFailure) {
+      output.err(`driftcell: ${e.message}`);
+      return e.exitCode;
+    }
+    const detail = e instanceof Error ? e.message : String(e);
+    output.err(`driftcell: unexpected failure: ${detail.split('\n')[0]}`);
+    return EXIT_CANNOT_RUN;
+  }
+}
+
+if (require.main === module) {
+  // A reader that stops early (driftcell demo | head) is not a failure.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code === 'EPIPE') process.exit(EXIT_OK);
+    throw e;
+  });
+  void main(process.argv.slice(2)).then((status) => {
+    process.exitCode = status;
+  });
+}

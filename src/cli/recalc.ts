@@ -1,0 +1,67 @@
+/**
+ * `driftcell recalc in.xlsx -o out.xlsx`: recalculates a workbook and writes
+ * a copy with every formula's result cached.
+ */
+import { existsSync, statSync } from 'node:fs';
+import { WorkbookReadError, readWorkbookFile, recalculateWorkbook, workbookBytes, type RecalcSummary } from '../engine/xlsx';
+import { CliFailure, EXIT_OK, type Output } from './failure';
+import { checkOutputAgainstInput, writeFileAtomically } from './files';
+import { formatError } from './format';
+
+/** How many cells with errors are listed before the rest are only counted. */
+const LISTED_PROBLEMS = 20;
+
+export interface RecalcOptions {
+  readonly output: string;
+  readonly force: boolean;
+}
+
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
+}
+
+/** The lines `recalc` prints about what it did. */
+export function describeSummary(summary: RecalcSummary, written: string): { lines: string[]; notes: string[] } {
+  const spills = summary.arrays.filter((a) => a.rows * a.columns > 1).length;
+  const lines = [
+    `wrote ${written}: ${plural(summary.sheets.length, 'sheet')}, ${plural(summary.formulas, 'formula')}, ${plural(spills, 'spilled result')}`,
+  ];
+  const notes: string[] = [];
+  if (summary.problems.length > 0) {
+    notes.push(`${plural(summary.problems.length, 'cell')} ${summary.problems.length === 1 ? 'shows' : 'show'} errors:`);
+    for (const problem of summary.problems.slice(0, LISTED_PROBLEMS)) {
+      const quoted = /^[A-Za-z0-9_]+$/.test(problem.sheet) ? problem.sheet : `'${problem.sheet.replace(/'/g, "''")}'`;
+      notes.push(`  ${quoted}!${problem.address}: ${formatError({ kind: 'error', code: problem.code, message: problem.message })}`);
+    }
+    if (summary.problems.length > LISTED_PROBLEMS) notes.push(`  … and ${summary.problems.length - LISTED_PROBLEMS} more`);
+  }
+  return { lines, notes };
+}
+
+/**
+ * Recalculates `input` and writes the result to `options.output`.
+ *
+ * @returns the exit status (0); failures are thrown as CliFailure
+ */
+export async function runRecalc(input: string, options: RecalcOptions, output: Output): Promise<number> {
+  if (!existsSync(input)) throw new CliFailure(`${input}: no such file`);
+  if (!statSync(input).isFile()) throw new CliFailure(`${input} is not a file`);
+  const target = checkOutputAgainstInput(input, options.output, options.force);
+  let summary: RecalcSummary;
+  let bytes: Buffer;
+  try {
+    const workbook = await readWorkbookFile(input);
+    summary = recalculateWorkbook(workbook);
+    bytes = await workbookBytes(workbook, summary);
+  } catch (e) {
+    if (e instanceof WorkbookReadError) throw new CliFailure(e.message);
+    throw e;
+  }
+  // Checked again just before writing: the output may have appeared meanwhile.
+  checkOutputAgainstInput(input, options.output, options.force);
+  writeFileAtomically(target, bytes, options.force);
+  const { lines, notes } = describeSummary(summary, options.output);
+  lines.forEach(output.out);
+  notes.forEach(output.err);
+  return EXIT_OK;
+}

@@ -1,0 +1,134 @@
+/**
+ * The catalog as a HyperFormula function plugin: every `DRIFT.NAME` of the
+ * catalog, with the catalog's argument order. The plugin only converts values;
+ * broadcasting, argument checks and error messages all come from the
+ * catalog's evaluate(), so a formula gives the same result here as in Excel.
+ *
+ * HyperFormula fixes the size of a formula's spill when it reads the formula,
+ * before any value is known. The size is predicted the way the catalog
+ * broadcasts: as many rows as the tallest argument and as many columns as the
+ * widest, where an argument's shape comes from the formula text (a range, an
+ * inline array {1,2,3}, array arithmetic such as A2:A9*1e15, or a nested call,
+ * DRIFT or built-in, whose own size is predicted the same way).
+ */
+import { ArraySize, CellError, ErrorType, FunctionArgumentType, FunctionPlugin, HyperFormula } from 'hyperformula';
+import type { FunctionArgument, ImplementedFunctions } from 'hyperformula';
+import type { InterpreterState } from 'hyperformula/typings/interpreter/InterpreterState';
+import type { InterpreterValue } from 'hyperformula/typings/interpreter/InterpreterValue';
+import type { Ast, ProcedureAst } from 'hyperformula/typings/parser';
+import { CATALOG } from '../catalog';
+import { NAMESPACE, evaluate } from '../catalog/broadcast';
+import type { FunctionSpec } from '../catalog/types';
+import { toArgumentInput, toInterpreterValue } from './convert';
+
+/** Name of the plugin method every DRIFT function is evaluated by. */
+const EVALUATE_METHOD = 'evaluateDriftFunction';
+/** Name of the plugin method that predicts every DRIFT function's result size. */
+const SIZE_METHOD = 'predictDriftResultSize';
+
+/**
+ * The name a catalog entry has in formulas.
+ *
+ * @example qualifiedName(RESISTIVITY) // 'DRIFT.RESISTIVITY'
+ */
+export function qualifiedName(spec: FunctionSpec): string {
+  return `${NAMESPACE}.${spec.name}`;
+}
+
+const SPEC_BY_QUALIFIED_NAME = new Map(CATALOG.map((spec) => [qualifiedName(spec), spec]));
+
+function specFor(procedureName: string): FunctionSpec {
+  const spec = SPEC_BY_QUALIFIED_NAME.get(procedureName.toUpperCase());
+  // HyperFormula only calls the plugin for names it registered, so a miss is a wiring fault.
+  if (spec === undefined) throw new Error(`${procedureName} is not a catalog function`);
+  return spec;
+}
+
+function argumentMetadata(spec: FunctionSpec): FunctionArgument[] {
+  // ANY: the plugin receives ranges whole and broadcasts through the catalog, never through HyperFormula.
+  return spec.parameters.map((parameter) => ({ argumentType: FunctionArgumentType.ANY, optionalArg: parameter.optional }));
+}
+
+function implementedFunctions(): ImplementedFunctions {
+  const functions: ImplementedFunctions = {};
+  for (const spec of CATALOG) {
+    functions[qualifiedName(spec)] = {
+      method: EVALUATE_METHOD,
+      sizeOfResultArrayMethod: SIZE_METHOD,
+      parameters: argumentMetadata(spec),
+      // Arguments are evaluated as arrays (A2:A9*1e15 stays a column), as in Excel's dynamic arrays.
+      enableArrayArithmeticForArguments: true,
+      vectorizationForbidden: true,
+    };
+  }
+  return functions;
+}
+
+/** The same state with array arithmetic on, as the arguments are evaluated. */
+function arrayState(state: InterpreterState): InterpreterState {
+  return { formulaAddress: state.formulaAddress, arraysFlag: true, formulaVertex: state.formulaVertex };
+}
+
+/** The catalog's functions as one HyperFormula plugin class. */
+export class DriftFunctionPlugin extends FunctionPlugin {
+  static override implementedFunctions: ImplementedFunctions = implementedFunctions();
+
+  /** Evaluates any DRIFT function: arguments to catalog inputs, catalog evaluate(), result back. */
+  evaluateDriftFunction(ast: ProcedureAst, state: InterpreterState): InterpreterValue {
+    const spec = specFor(ast.procedureName);
+    const argumentState = arrayState(state);
+    const args = ast.args.map((argument) => toArgumentInput(this.evaluateAst(argument, argumentState)));
+    const grid = evaluate(spec, args);
+    const predicted = this.predictDriftResultSize(ast, state);
+    const rows = grid.length;
+    const columns = grid[0].length;
+    if (rows > predicted.height || columns > predicted.width) {
+      // The spill area was fixed when the formula was read; a larger result cannot be shown in it.
+      return new CellError(
+        ErrorType.VALUE,
+        `${qualifiedName(spec)} gives ${rows}×${columns} values, but its arguments' shapes could only be ` +
+          `foreseen as ${predicted.height}×${predicted.width} (an argument's size depends on computed values); ` +
+          `pass ranges or inline arrays of the wanted size instead`,
+      );
+    }
+    return toInterpreterValue(grid);
+  }
+
+  /** Predicts a DRIFT function's result size from its arguments' shapes, as the catalog broadcasts. */
+  predictDriftResultSize(ast: ProcedureAst, state: InterpreterState): ArraySize {
+    const spec = specFor(ast.procedureName);
+    // Too many arguments: the catalog answers with one error.
+    if (ast.args.length > spec.parameters.length) return ArraySize.scalar();
+    if (spec.kind === 'table') {
+      const table = spec.table();
+      return new ArraySize(table[0]?.length ?? 1, table.length || 1);
+    }
+    const argumentState = arrayState(state);
+    let width = 1;
+    let height = 1;
+    for (const argument of ast.args as Ast[]) {
+      const size = this.arraySizeForAst(argument, argumentState);
+      width = Math.max(width, size.width);
+      height = Math.max(height, size.height);
+    }
+    return new ArraySize(width, height);
+  }
+}
+
+/** Function names in every registered language: DRIFT names are not translated. */
+function translations(): Record<string, Record<string, string>> {
+  const names = Object.fromEntries(CATALOG.map((spec) => [qualifiedName(spec), qualifiedName(spec)]));
+  return Object.fromEntries(HyperFormula.getRegisteredLanguagesCodes().map((code) => [code, names]));
+}
+
+/**
+ * Registers the catalog with HyperFormula (process-wide), once; later calls do
+ * nothing. Engines built afterwards know every DRIFT function.
+ *
+ * @example registerDriftFunctions(); HyperFormula.buildEmpty({ licenseKey: 'gpl-v3' })
+ */
+export function registerDriftFunctions(): void {
+  const first = qualifiedName(CATALOG[0]);
+  if (HyperFormula.getFunctionPlugin(first) === DriftFunctionPlugin) return;
+  HyperFormula.registerFunctionPlugin(DriftFunctionPlugin, translations());
+}

@@ -1,0 +1,342 @@
+/**
+ * Workbooks in and out of the engine: read every sheet of an .xlsx (values,
+ * formulas, cross-sheet references, workbook names) into one engine,
+ * recalculate, and write every formula back with its cached result.
+ *
+ * A formula whose result spills is written as Excel writes a dynamic-array
+ * formula: an array formula on its anchor cell with `ref` over exactly the
+ * result's range, the cached values in every cell of that range, and the
+ * dynamic-array mark (see dynamicArrays.ts). The cells a spill covered when
+ * the file was read hold its old results, not user data, and are cleared
+ * before recalculating. A spill that would cover a user's cell is not
+ * written over it: the anchor shows #SPILL! and the user's cell keeps its value.
+ */
+import { readFile } from 'node:fs/promises';
+import ExcelJS from 'exceljs';
+import { CellError, CellType, DetailedCellError, ErrorType } from 'hyperformula';
+import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, SimpleCellRange } from 'hyperformula';
+import { createEngine } from './engine';
+import { markDynamicArrays } from './dynamicArrays';
+import { fileErrorText } from './errorTypes';
+import { engineContent, fileValue, type FileValue, type StoredFormula } from './workbookCells';
+
+/** A file that cannot be read as a workbook; the message is one line for the user. */
+export class WorkbookReadError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'WorkbookReadError';
+  }
+}
+
+/** A cell (or spill element) that shows an error after recalculation. */
+export interface CellProblem {
+  readonly sheet: string;
+  /** A1-style address. */
+  readonly address: string;
+  /** As the engine shows it, e.g. `#VALUE!`. */
+  readonly code: string;
+  readonly message: string;
+}
+
+/** An array formula as written: its anchor and the range it fills. */
+export interface ArrayFormulaPlacement {
+  readonly sheet: string;
+  /** Anchor cell, A1 style. */
+  readonly anchor: string;
+  /** Filled range, e.g. `C8:C27` (just the anchor when the spill is blocked). */
+  readonly ref: string;
+  readonly rows: number;
+  readonly columns: number;
+}
+
+/** What a recalculation did. */
+export interface RecalcSummary {
+  readonly sheets: readonly string[];
+  readonly formulas: number;
+  readonly arrays: readonly ArrayFormulaPlacement[];
+  readonly problems: readonly CellProblem[];
+}
+
+/** A1 column letters of a 1-based column number. */
+export function columnLetters(column: number): string {
+  let letters = '';
+  for (let n = column; n > 0; n = Math.floor((n - 1) / 26)) {
+    letters = String.fromCharCode(65 + ((n - 1) % 26)) + letters;
+  }
+  return letters;
+}
+
+/** A1 address of a 1-based row and column. */
+export function cellAddress(row: number, column: number): string {
+  return `${columnLetters(column)}${row}`;
+}
+
+interface Box {
+  readonly top: number;
+  readonly left: number;
+  readonly bottom: number;
+  readonly right: number;
+}
+
+function columnNumber(letters: string): number {
+  return [...letters.toUpperCase()].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0);
+}
+
+/** A1 form of an engine range: `C8:C27`, or `C8` for one cell, as Excel writes it. */
+function rangeAddress(range: SimpleCellRange): string {
+  const start = cellAddress(range.start.row + 1, range.start.col + 1);
+  const end = cellAddress(range.end.row + 1, range.end.col + 1);
+  return start === end ? start : `${start}:${end}`;
+}
+
+/** 1-based bounds of an A1 range such as `C1:D5` or `$C$1`. */
+function parseRange(ref: string): Box | undefined {
+  const match = /^\$?([A-Za-z]{1,3})\$?(\d+)(?::\$?([A-Za-z]{1,3})\$?(\d+))?$/.exec(ref.trim());
+  if (!match) return undefined;
+  const left = columnNumber(match[1]);
+  const top = Number(match[2]);
+  const right = match[3] ? columnNumber(match[3]) : left;
+  const bottom = match[4] ? Number(match[4]) : top;
+  return { top: Math.min(top, bottom), left: Math.min(left, right), bottom: Math.max(top, bottom), right: Math.max(left, right) };
+}
+
+/**
+ * Reads an .xlsx workbook from bytes.
+ *
+ * @throws WorkbookReadError when the bytes are not an .xlsx package
+ */
+export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
+  const workbook = new ExcelJS.Workbook();
+  try {
+    await workbook.xlsx.load(bytes as unknown as ExcelJS.Buffer);
+  } catch (e) {
+    const detail = e instanceof Error ? e.message.split('\n')[0] : String(e);
+    // The zip reader's own wording ends in a link to its manual; say plainly what it means instead.
+    const reason = /central directory|zip/i.test(detail) ? 'it is not a zip package' : detail;
+    throw new WorkbookReadError(`not an .xlsx workbook (${reason})`);
+  }
+  if (workbook.worksheets.length === 0) throw new WorkbookReadError('not an .xlsx workbook (it has no worksheets)');
+  return workbook;
+}
+
+/**
+ * Reads an .xlsx workbook from a file.
+ *
+ * @throws WorkbookReadError when the file is missing, unreadable or not an .xlsx package
+ */
+export async function readWorkbookFile(path: string): Promise<ExcelJS.Workbook> {
+  let bytes: Buffer;
+  try {
+    bytes = await readFile(path);
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') throw new WorkbookReadError(`${path}: no such file`);
+    if (code === 'EISDIR') throw new WorkbookReadError(`${path} is a folder, not a workbook`);
+    throw new WorkbookReadError(`${path} cannot be read (${code ?? String(e)})`);
+  }
+  try {
+    return await loadWorkbook(bytes);
+  } catch (e) {
+    if (e instanceof WorkbookReadError) throw new WorkbookReadError(`${path}: ${e.message}`);
+    throw e;
+  }
+}
+
+/** A formula cell as read, with what is needed to write it back. */
+interface FormulaCell {
+  readonly sheet: string;
+  readonly row: number;
+  readonly column: number;
+  readonly cell: ExcelJS.Cell;
+  /** Formula text as stored in the file (no `=`), kept as it was. */
+  readonly stored: string;
+  readonly wasArray: boolean;
+}
+
+interface SheetInput {
+  readonly name: string;
+  readonly worksheet: ExcelJS.Worksheet;
+  readonly content: RawCellContent[][];
+  readonly formulas: FormulaCell[];
+  /** Cells that held an earlier spill's results. */
+  readonly oldSpillCells: ExcelJS.Cell[];
+}
+
+function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
+  const content: RawCellContent[][] = [];
+  const formulas: FormulaCell[] = [];
+  const oldSpills: { anchorRow: number; anchorColumn: number; box: Box }[] = [];
+  worksheet.eachRow({ includeEmpty: false }, (row) => {
+    row.eachCell({ includeEmpty: false }, (cell) => {
+      const r = Number(cell.row);
+      const c = Number(cell.col);
+      const value = engineContent(cell);
+      if (value === null) return;
+      (content[r - 1] ??= [])[c - 1] = value;
+      if (cell.type === ExcelJS.ValueType.Formula) {
+        const stored = cell.value as StoredFormula;
+        const wasArray = stored.shareType === 'array';
+        formulas.push({ sheet: worksheet.name, row: r, column: c, cell, stored: cell.formula, wasArray });
+        const box = wasArray && stored.ref ? parseRange(stored.ref) : undefined;
+        if (box) oldSpills.push({ anchorRow: r, anchorColumn: c, box });
+      }
+    });
+  });
+  const oldSpillCells: ExcelJS.Cell[] = [];
+  for (const { anchorRow, anchorColumn, box } of oldSpills) {
+    for (let r = box.top; r <= box.bottom; r++) {
+      for (let c = box.left; c <= box.right; c++) {
+        if (r === anchorRow && c === anchorColumn) continue;
+        const cell = worksheet.findCell(r, c);
+        // Merged cells are skipped: writing one in exceljs writes its merge's first cell.
+        if (cell === undefined || cell.type === ExcelJS.ValueType.Formula || cell.type === ExcelJS.ValueType.Merge) continue;
+        if (content[r - 1]) content[r - 1][c - 1] = null;
+        oldSpillCells.push(cell);
+      }
+    }
+  }
+  // The engine wants every row present, even an empty one.
+  for (let r = 0; r < content.length; r++) content[r] ??= [];
+  return { name: worksheet.name, worksheet, content, formulas, oldSpillCells };
+}
+
+/** Workbook-level defined names that refer to one range, as engine expressions. */
+function workbookNames(workbook: ExcelJS.Workbook): { name: string; expression: string }[] {
+  const model = workbook.definedNames.model as { name: string; ranges: string[]; localSheetId?: number }[];
+  return model
+    .filter((entry) => entry.ranges.length === 1 && entry.localSheetId === undefined && !entry.name.startsWith('_xlnm.'))
+    .map((entry) => ({ name: entry.name, expression: `=${entry.ranges[0]}` }));
+}
+
+function addNames(engine: HyperFormula, names: { name: string; expression: string }[]): void {
+  engine.batch(() => {
+    for (const { name, expression } of names) {
+      if (engine.isItPossibleToAddNamedExpression(name, expression)) engine.addNamedExpression(name, expression);
+    }
+  });
+}
+
+/**
+ * The range an array formula fills, read from the engine's array bookkeeping
+ * (HyperFormula has no public call for it; arrayMapping is typed but internal,
+ * so this is the one place that relies on it).
+ */
+function arrayRange(engine: HyperFormula, address: SimpleCellAddress): SimpleCellRange {
+  const vertex = engine.arrayMapping.getArrayByCorner(address);
+  if (vertex === undefined) return { start: address, end: address };
+  const range = vertex.getRange();
+  return { start: range.start, end: range.end };
+}
+
+/** The error a spill gets where Excel would refuse to spill (into merged cells). */
+function mergedCellsSpillError(): DetailedCellError {
+  return new DetailedCellError(new CellError(ErrorType.SPILL, 'the spill range contains merged cells'), fileErrorText(ErrorType.SPILL));
+}
+
+/**
+ * Recalculates a workbook in place: every formula gets its result cached,
+ * spilled results fill their ranges, old spill results are cleared.
+ *
+ * @param workbook - as read by {@link loadWorkbook}; changed in place
+ * @returns sheets, formula count, where arrays were placed, and every cell that shows an error
+ * @example const summary = recalculateWorkbook(await readWorkbookFile('in.xlsx'))
+ */
+export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
+  const inputs = workbook.worksheets.map(readSheet);
+  const engine = createEngine(Object.fromEntries(inputs.map((input) => [input.name, input.content])));
+  try {
+    const names = workbookNames(workbook);
+    if (names.length > 0) addNames(engine, names);
+
+    const arrays: ArrayFormulaPlacement[] = [];
+    const problems: CellProblem[] = [];
+    const note = (sheet: string, row: number, column: number, value: CellValue) => {
+      if (value instanceof DetailedCellError) {
+        problems.push({ sheet, address: cellAddress(row, column), code: value.value, message: value.message ?? '' });
+      }
+    };
+
+    for (const input of inputs) input.oldSpillCells.forEach((cell) => (cell.value = null));
+
+    for (const input of inputs) {
+      const sheetId = engine.getSheetId(input.name);
+      if (sheetId === undefined) throw new Error(`sheet "${input.name}" did not reach the engine`);
+      for (const formula of input.formulas) {
+        const address = { sheet: sheetId, row: formula.row - 1, col: formula.column - 1 };
+        const isArray = engine.getCellType(address) === CellType.ARRAYFORMULA;
+        if (!isArray && !formula.wasArray) {
+          const value = engine.getCellValue(address);
+          formula.cell.value = formulaValue(formula.stored, value);
+          note(input.name, formula.row, formula.column, value);
+          continue;
+        }
+        let range = isArray ? arrayRange(engine, address) : { start: address, end: address };
+        let values = engine.getRangeValues(range);
+        if (coversMergedCells(input.worksheet, range)) {
+          // Excel does not spill into merged cells; the engine does not know about merges.
+          range = { start: address, end: address };
+          values = [[mergedCellsSpillError()]];
+        }
+        const rows = values.length;
+        const columns = values[0].length;
+        const ref = rangeAddress(range);
+        formula.cell.value = {
+          ...formulaValue(formula.stored, values[0][0]),
+          shareType: 'array',
+          ref,
+        } as ExcelJS.CellFormulaValue;
+        for (let r = 0; r < rows; r++) {
+          for (let c = 0; c < columns; c++) {
+            const row = range.start.row + r + 1;
+            const column = range.start.col + c + 1;
+            if (r > 0 || c > 0) input.worksheet.getCell(row, column).value = fileValue(values[r][c]) as ExcelJS.CellValue;
+            note(input.name, row, column, values[r][c]);
+          }
+        }
+        arrays.push({ sheet: input.name, anchor: cellAddress(formula.row, formula.column), ref, rows, columns });
+      }
+    }
+    return {
+      sheets: inputs.map((input) => input.name),
+      formulas: inputs.reduce((n, input) => n + input.formulas.length, 0),
+      arrays,
+      problems,
+    };
+  } finally {
+    engine.destroy();
+  }
+}
+
+function coversMergedCells(worksheet: ExcelJS.Worksheet, range: SimpleCellRange): boolean {
+  for (let r = range.start.row; r <= range.end.row; r++) {
+    for (let c = range.start.col; c <= range.end.col; c++) {
+      if (worksheet.findCell(r + 1, c + 1)?.isMerged) return true;
+    }
+  }
+  return false;
+}
+
+function formulaValue(stored: string, result: CellValue): ExcelJS.CellFormulaValue {
+  const cached: FileValue = fileValue(result);
+  return cached === null
+    ? { formula: stored }
+    : { formula: stored, result: cached as ExcelJS.CellFormulaValue['result'] };
+}
+
+/**
+ * Writes a recalculated workbook as .xlsx bytes, with every array formula
+ * marked as a dynamic array.
+ *
+ * @param workbook - after {@link recalculateWorkbook}
+ * @param summary - what that recalculation returned (for the array anchors)
+ */
+export async function workbookBytes(workbook: ExcelJS.Workbook, summary: RecalcSummary): Promise<Buffer> {
+  const written = Buffer.from(await workbook.xlsx.writeBuffer());
+  const anchors = new Map<string, string[]>();
+  for (const placement of summary.arrays) {
+    const list = anchors.get(placement.sheet) ?? [];
+    list.push(placement.anchor);
+    anchors.set(placement.sheet, list);
+  }
+  return markDynamicArrays(written, anchors);
+}

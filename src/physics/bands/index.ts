@@ -1,0 +1,29 @@
+/**
+ * Band structure of the host: Eg(T), Nc(T), Nv(T), ni(T), the band-edge
+ * description used by the solver, carrier statistics and model descriptions.
+ */
+
+export { bandgap } from './bandgap';
+export {
+  conductionBandDensity,
+  valenceBandDensity,
+  logConductionBandDensity,
+  logValenceBandDensity,
+} from './densityOfStates';
+export {
+  INTRINSIC_MODEL_CODES,
+  DOS_INTRINSIC_MODEL,
+  intrinsicDensity,
+  intrinsicModelCodes,
+  logIntrinsicDensity,
+  resolveIntrinsicModel,
+} from './intrinsicDensity';
+export { bandEdges, type BandEdges } from './bandEdges';
+export {
+  BOLTZMANN_STATISTICS,
+  DEFAULT_CARRIER_STATISTICS,
+  levelOccupancy,
+  type CarrierStatistics,
+  type LevelOccupancy,
+} from './statistics';
+export { BAND_MODELS, type BandModelInfo } from './modelInfo';

@@ -1,0 +1,78 @@
+/**
+ * Descriptions of the band-structure, ni, statistics and ionization models, for
+ * the model registry (models.ts) and DRIFT.MODELS(). Citations and validity
+ * come from the parameter tables themselves so they cannot drift apart.
+ */
+
+import { SILICON } from '../materials/silicon';
+import { IONIZATION_MODEL_CODE } from '../ionization';
+import { BOLTZMANN_STATISTICS } from './statistics';
+import { DOS_INTRINSIC_MODEL } from './intrinsicDensity';
+
+export interface BandModelInfo {
+  readonly code: string;
+  readonly quantity: string;
+  readonly name: string;
+  readonly citation: string;
+  readonly validity: string;
+  readonly notes?: string;
+}
+
+const NI = 'intrinsic density ni';
+const [phosphorus, boron] = ['P', 'B'].map(
+  (symbol) => SILICON.dopants.find((dopant) => dopant.symbol === symbol)!,
+);
+
+/** Every model owned by the band-structure part of the core, lower-case codes. */
+export const BAND_MODELS: readonly BandModelInfo[] = [
+  ...SILICON.intrinsicFits.map((fit) => ({
+    code: fit.code,
+    quantity: NI,
+    name: fit.name,
+    citation: fit.citation,
+    validity: fit.validity,
+    ...(fit.notes === undefined ? {} : { notes: fit.notes }),
+  })),
+  {
+    code: DOS_INTRINSIC_MODEL,
+    quantity: NI,
+    name: 'ni = sqrt(Nc·Nv)·exp(−Eg/2kT) from the band gap and densities of states',
+    citation: `${SILICON.bandgap.citation}; ${SILICON.densityOfStates.citation}`,
+    validity: 'as its ingredients (band gap and density-of-states models)',
+    notes:
+      'Gives about 1.07e10 cm⁻³ at 300 K, 10% above the measured 9.65e9: the known mismatch between ' +
+      'Green’s densities of states and measured ni; kept as an independent cross-check.',
+  },
+  {
+    code: SILICON.bandgap.code,
+    quantity: 'band gap Eg',
+    name: SILICON.bandgap.name,
+    citation: SILICON.bandgap.citation,
+    validity: SILICON.bandgap.validity,
+  },
+  {
+    code: SILICON.densityOfStates.code,
+    quantity: 'effective densities of states Nc, Nv',
+    name: SILICON.densityOfStates.name,
+    citation: SILICON.densityOfStates.citation,
+    validity: SILICON.densityOfStates.validity,
+  },
+  {
+    code: BOLTZMANN_STATISTICS.code,
+    quantity: 'carrier statistics',
+    name: BOLTZMANN_STATISTICS.name,
+    citation: 'common practice, no source',
+    validity: 'non-degenerate carriers: Fermi level a few kT inside the gap (about n, p < 1e19 cm⁻³ at 300 K)',
+    notes: 'Used by the equilibrium solver; degenerate densities are approximate.',
+  },
+  {
+    code: IONIZATION_MODEL_CODE,
+    quantity: 'dopant ionization',
+    name: 'Altermatt et al. (2006) incomplete ionization with Mott transition',
+    citation: `${phosphorus.ionization.citation}; ${boron.ionization.citation}`,
+    validity: phosphorus.ionization.validity,
+    notes:
+      'P, As, B fitted; Sb, Al, Ga, In use their own Sze & Ng ionization energy with the density ' +
+      'dependence of P (Sb) or B (Al, Ga, In): assumption.',
+  },
+];

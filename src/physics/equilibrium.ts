@@ -1,0 +1,203 @@
+/**
+ * Thermal-equilibrium carrier densities from charge neutrality,
+ *
+ *   p + Σ Nd⁺ = n + Σ Na⁻,
+ *
+ * with Boltzmann free carriers (bands/statistics.ts), dopant ionization after
+ * Altermatt et al. (2006) (ionization.ts), donors and acceptors together.
+ * Freeze-out, compensation and intrinsic conduction all come out of this one
+ * equation; there are no special cases.
+ *
+ * Unknown: η = (Ef − Ei)/kT. F(η) = p − n + ΣNd⁺ − ΣNa⁻ decreases strictly
+ * with η (n and Na⁻ grow, p and Nd⁺ shrink), so the root is unique.
+ * To keep F accurate to rounding in every regime, each dopant's charge is
+ * written from whichever fraction is small: a mostly ionised species adds
+ * ±(N − N·neutral), the exact N going into a separate sum, so heavy
+ * compensation (Nd = Na = 1e22) cancels exactly; a mostly neutral one adds
+ * ±N·ionised directly, so deep freeze-out keeps its tiny ionised density.
+ *
+ * Bracket: at the root n − p = ΣNd⁺ − ΣNa⁻ ∈ [−ΣNa, ΣNd] and n − p = 2·ni·sinh η,
+ * hence η ∈ [−asinh(ΣNa/2ni), asinh(ΣNd/2ni)]. F ≥ 0 at the lower end and ≤ 0
+ * at the upper one for any densities and temperature; the ends are widened by
+ * a small margin so rounding cannot flip those signs.
+ */
+
+import { thermalVoltage } from './constants';
+import { PhysicsDomainError } from './errors';
+import { bandEdges, type BandEdges } from './bands/bandEdges';
+import { DEFAULT_CARRIER_STATISTICS } from './bands/statistics';
+import type { Dopant, Material } from './materials/types';
+import { checkTemperature } from './materials/temperature';
+import { ionizationState, type IonizationState } from './ionization';
+import { findRoot } from './solve';
+
+/** One dopant species and its total (chemical) density. */
+export interface DopantDensity {
+  readonly dopant: Dopant;
+  /** cm⁻³, ≥ 0 */
+  readonly density: number;
+}
+
+export interface Equilibrium {
+  /** n, cm⁻³ */
+  readonly electrons: number;
+  /** p, cm⁻³ */
+  readonly holes: number;
+  /** Σ Nd⁺, cm⁻³ */
+  readonly ionizedDonors: number;
+  /** Σ Na⁻, cm⁻³ */
+  readonly ionizedAcceptors: number;
+  /** Ef − Ei, eV (Ei of the selected ni model) */
+  readonly fermiLevel: number;
+  /** Root-finder iterations used */
+  readonly iterations: number;
+}
+
+/** Margin added to each bracket end, in units of kT (see module note). */
+const BRACKET_MARGIN = 1e-6;
+/** Absolute tolerance on η; with the solver's 2ε|η| term, n and p are exact to ~1e-13. */
+const ETA_TOLERANCE = 1e-15;
+
+/**
+ * asinh(N / (2·ni)) for N ≥ 0 from ln ni, without overflow when ni is tiny.
+ */
+function asinhHalfRatio(density: number, logNi: number): number {
+  if (density === 0) return 0;
+  const logRatio = Math.log(density) - Math.LN2 - logNi; // ln(N / 2ni)
+  // asinh(x) = ln(2x) + 1/(4x²) − …; beyond x = e^20 the correction is < 1e-17.
+  if (logRatio > 20) return logRatio + Math.LN2;
+  return Math.asinh(Math.exp(logRatio));
+}
+
+/** Reduced Fermi level of the dopant's carrier relative to its band edge. */
+function bandFermiLevel(dopant: Dopant, edges: BandEdges, eta: number): number {
+  return dopant.kind === 'donor' ? eta - edges.conductionEdge : -eta - edges.valenceEdge;
+}
+
+function checkDopants(material: Material, dopants: readonly DopantDensity[]): void {
+  let total = 0;
+  for (const entry of dopants) {
+    const { dopant, density } = entry;
+    if (!dopant || (dopant.kind !== 'donor' && dopant.kind !== 'acceptor')) {
+      throw new PhysicsDomainError('each dopant entry needs a dopant of kind donor or acceptor');
+    }
+    if (!Number.isFinite(density) || density < 0) {
+      throw new PhysicsDomainError(
+        `${dopant.name} density ${density} cm⁻³ is not allowed: it must be a finite number >= 0`,
+      );
+    }
+    total += density;
+  }
+  if (total > material.atomicDensity) {
+    throw new PhysicsDomainError(
+      `total dopant density ${total.toExponential(3)} cm⁻³ exceeds the atomic density of ${material.name}, ` +
+        `${material.atomicDensity.toExponential(3)} cm⁻³`,
+    );
+  }
+}
+
+/**
+ * Solves charge neutrality for the equilibrium Fermi level and carrier densities.
+ *
+ * @param material host material
+ * @param temperature K, inside the material's temperature domain
+ * @param dopants dopant species with total densities (cm⁻³); empty = intrinsic
+ * @param intrinsicModel ni model code (default: the material's first); n·p = ni² for it
+ * @returns n, p, ionised donors and acceptors (cm⁻³), Ef − Ei (eV), iterations
+ * @throws PhysicsDomainError for bad densities, unknown model, temperature outside the domain
+ * @example solveEquilibrium(SILICON, 300, [{ dopant: resolveDopant(SILICON, 'P'), density: 1e16 }]).electrons // ≈ 9.96e15
+ */
+export function solveEquilibrium(
+  material: Material,
+  temperature: number,
+  dopants: readonly DopantDensity[],
+  intrinsicModel?: string,
+): Equilibrium {
+  checkTemperature(material, temperature);
+  checkDopants(material, dopants);
+  const edges = bandEdges(material, temperature, intrinsicModel);
+  const statistics = DEFAULT_CARRIER_STATISTICS;
+
+  let totalDonors = 0;
+  let totalAcceptors = 0;
+  for (const { dopant, density } of dopants) {
+    if (dopant.kind === 'donor') totalDonors += density;
+    else totalAcceptors += density;
+  }
+  const active = dopants.filter((entry) => entry.density > 0);
+
+  const state = (entry: DopantDensity, eta: number): IonizationState =>
+    ionizationState(entry.dopant, entry.density, temperature, bandFermiLevel(entry.dopant, edges, eta));
+
+  const charge = (eta: number): number => {
+    let fullyIonized = 0; // ±N of mostly ionised species: exact, cancels exactly under compensation
+    let remainder = 0; // small, accurately known parts
+    for (const entry of active) {
+      const sign = entry.dopant.kind === 'donor' ? 1 : -1;
+      const { ionized, neutral } = state(entry, eta);
+      if (ionized >= 0.5) {
+        fullyIonized += sign * entry.density;
+        remainder -= sign * entry.density * neutral;
+      } else {
+        remainder += sign * entry.density * ionized;
+      }
+    }
+    const carriers = statistics.holeDensity(edges, eta) - statistics.electronDensity(edges, eta);
+    return fullyIonized + carriers + remainder;
+  };
+
+  const upper = asinhHalfRatio(totalDonors, edges.logIntrinsicDensity);
+  const lower = -asinhHalfRatio(totalAcceptors, edges.logIntrinsicDensity);
+  const { root, iterations } = findRoot(
+    charge,
+    lower - BRACKET_MARGIN * (1 + Math.abs(lower)),
+    upper + BRACKET_MARGIN * (1 + Math.abs(upper)),
+    { xTolerance: ETA_TOLERANCE },
+  );
+
+  let ionizedDonors = 0;
+  let ionizedAcceptors = 0;
+  for (const entry of active) {
+    const ionized = entry.density * state(entry, root).ionized;
+    if (entry.dopant.kind === 'donor') ionizedDonors += ionized;
+    else ionizedAcceptors += ionized;
+  }
+  return {
+    electrons: statistics.electronDensity(edges, root),
+    holes: statistics.holeDensity(edges, root),
+    ionizedDonors,
+    ionizedAcceptors,
+    fermiLevel: root * thermalVoltage(temperature),
+    iterations,
+  };
+}
+
+/**
+ * Fraction of one dopant ionised in equilibrium, given the Fermi level from
+ * solveEquilibrium (the same expression the solver uses).
+ *
+ * @param material host material
+ * @param temperature K, inside the material's temperature domain
+ * @param dopant the dopant species
+ * @param density its total density, cm⁻³ (sets ΔE(N) and b(N))
+ * @param fermiLevel Ef − Ei in eV
+ * @param intrinsicModel ni model code used for the Fermi level (default: the material's first)
+ * @returns ionised fraction, 0–1
+ * @example ionizedFraction(SILICON, 300, phosphorus, 1e16, eq.fermiLevel) // ≈ 0.996
+ */
+export function ionizedFraction(
+  material: Material,
+  temperature: number,
+  dopant: Dopant,
+  density: number,
+  fermiLevel: number,
+  intrinsicModel?: string,
+): number {
+  checkTemperature(material, temperature);
+  if (!Number.isFinite(fermiLevel)) {
+    throw new PhysicsDomainError(`Fermi level ${fermiLevel} eV is not allowed: it must be a finite number`);
+  }
+  const edges = bandEdges(material, temperature, intrinsicModel);
+  const eta = fermiLevel / thermalVoltage(temperature);
+  return ionizationState(dopant, density, temperature, bandFermiLevel(dopant, edges, eta)).ionized;
+}

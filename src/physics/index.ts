@@ -1,0 +1,44 @@
+/**
+ * Public API of the physics core: pure functions in K, cm⁻³, eV, cm²/(V·s),
+ * Ω·cm. Everything the catalog layer uses is re-exported from here; the
+ * modules behind it are implementation detail.
+ */
+
+export { PhysicsDomainError } from './errors';
+
+// Constants and the root finder.
+export { ELEMENTARY_CHARGE, BOLTZMANN, PLANCK, ELECTRON_MASS, thermalVoltage } from './constants';
+export { findRoot } from './solve';
+
+// Materials, bands, dopants, equilibrium.
+export { MATERIAL_CODES, resolveMaterial, SILICON, type Material } from './materials';
+export {
+  bandgap,
+  conductionBandDensity,
+  valenceBandDensity,
+  INTRINSIC_MODEL_CODES,
+  intrinsicDensity,
+} from './bands';
+export { dopantCodes, resolveDopant, genericDopant, type Dopant, type DopantKind } from './dopants';
+export { solveEquilibrium, ionizedFraction, type DopantDensity, type Equilibrium } from './equilibrium';
+
+// Samples, mobility, transport, inverse.
+export {
+  sampleDopants,
+  carrierFor,
+  resolveCarrierRole,
+  CARRIER_ROLES,
+  type Sample,
+  type Carrier,
+  type CarrierRole,
+} from './sample';
+export { MOBILITY_MODEL_CODES, fitMobility, mobility, diffusivity } from './mobility';
+export { RESISTIVITY_MODEL_CODES, conductivity, resistivity, currentDensity } from './transport';
+export { dopingForResistivity } from './inverse';
+export { f723Resistivity, f723Density, type F723Species } from './astmF723';
+
+// Geometry of uniform conductors.
+export { CM_PER_UM, sheetResistance, resistorValue } from './geometry';
+
+// Model registry.
+export { MODEL_REGISTRY, modelInfo, type ModelInfo } from './models';

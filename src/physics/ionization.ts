@@ -1,0 +1,103 @@
+/**
+ * Incomplete ionization of dopants with the Mott transition, after
+ * P. P. Altermatt, A. Schenk, G. Heiser, J. Appl. Phys. 100, 113714 (2006) and
+ * P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100,
+ * 113715 (2006) (the simplified form for device simulation; from memory):
+ *
+ *   ΔE(N) = ΔE0 / (1 + (N/Nref)^c)     level approaches the band as N grows
+ *   b(N)  = 1 / (1 + (N/Nb)^d)         fraction of dopant states still localised
+ *   N⁺/N  = (1 − b) + b·(1 − f)        the rest (1 − b) is always ionised
+ *
+ * with f the occupancy of the level (statistics module). N is the density of
+ * the dopant species itself (the papers fitted single-species samples; a
+ * compensating species does not change ΔE or b: assumption).
+ *
+ * The occupancy needs the Fermi level relative to the edge of the band the
+ * dopant gives its carrier to: ηc = (Ef − Ec)/kT for donors, ηv = (Ev − Ef)/kT
+ * for acceptors. Then the level lies x = −η_band − ΔE/kT above the carrier
+ * Fermi level.
+ */
+
+import { thermalVoltage } from './constants';
+import { PhysicsDomainError } from './errors';
+import type { Dopant } from './materials/types';
+import { levelOccupancy } from './bands/statistics';
+
+/** Code of the ionization model, for the model registry. */
+export const IONIZATION_MODEL_CODE = 'altermatt-2006';
+
+function checkDensity(density: number): void {
+  if (!Number.isFinite(density) || density < 0) {
+    throw new PhysicsDomainError(`dopant density ${density} cm⁻³ is not allowed: it must be a finite number >= 0`);
+  }
+}
+
+/**
+ * Ionization energy of a dopant at density N, ΔE(N) = ΔE0/(1 + (N/Nref)^c).
+ *
+ * @param dopant dopant with its Altermatt parameters
+ * @param density density of that dopant, cm⁻³
+ * @returns ΔE in eV (distance of the level from its band edge)
+ * @example dopantIonizationEnergy(phosphorus, 1e15) // ≈ 0.0455 eV
+ */
+export function dopantIonizationEnergy(dopant: Dopant, density: number): number {
+  checkDensity(density);
+  const p = dopant.ionization;
+  return p.isolatedEnergy / (1 + Math.pow(density / p.referenceDensity, p.screeningExponent));
+}
+
+/** Localised fraction b and its complement 1 − b, both without cancellation. */
+export interface LocalizedSplit {
+  /** b(N): fraction of dopant states that can hold a carrier. */
+  readonly localized: number;
+  /** 1 − b(N): fraction merged with the band, always ionised. */
+  readonly delocalized: number;
+}
+
+/**
+ * Fraction of dopant states still localised at density N, b(N) = 1/(1 + (N/Nb)^d).
+ *
+ * @param dopant dopant with its Altermatt parameters
+ * @param density density of that dopant, cm⁻³
+ * @returns b and 1 − b
+ * @example localizedFraction(phosphorus, 6e18).localized // 0.5
+ */
+export function localizedFraction(dopant: Dopant, density: number): LocalizedSplit {
+  checkDensity(density);
+  const p = dopant.ionization;
+  const r = Math.pow(density / p.localizationDensity, p.localizationExponent);
+  return { localized: 1 / (1 + r), delocalized: r / (1 + r) };
+}
+
+/** Ionised and neutral fractions of one dopant; they add up to 1. */
+export interface IonizationState {
+  readonly ionized: number;
+  readonly neutral: number;
+}
+
+/**
+ * Ionised fraction of a dopant for a given Fermi level.
+ *
+ * @param dopant the dopant species
+ * @param density its density, cm⁻³
+ * @param temperature K (finite, > 0)
+ * @param bandFermiLevel reduced Fermi level of the dopant's carrier relative to
+ *   its band edge: (Ef − Ec)/kT for donors, (Ev − Ef)/kT for acceptors
+ * @returns ionised and neutral fractions (each accurate even when tiny)
+ * @example ionizationState(phosphorus, 1e16, 300, -7.96).ionized // ≈ 0.996
+ */
+export function ionizationState(
+  dopant: Dopant,
+  density: number,
+  temperature: number,
+  bandFermiLevel: number,
+): IonizationState {
+  const kT = thermalVoltage(temperature);
+  const levelDepth = dopantIonizationEnergy(dopant, density) / kT;
+  const occupancy = levelOccupancy(-bandFermiLevel - levelDepth, dopant.degeneracy);
+  const split = localizedFraction(dopant, density);
+  return {
+    ionized: split.delocalized + split.localized * occupancy.empty,
+    neutral: split.localized * occupancy.occupied,
+  };
+}

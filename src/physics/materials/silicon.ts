@@ -1,0 +1,128 @@
+/**
+ * Crystalline silicon: band gap, effective densities of states, published
+ * intrinsic-density fits, dopants. Each table states its source and the range
+ * the source validated; "from memory" marks values recalled rather than read
+ * from the paper while writing this table.
+ */
+
+import { SILICON_DOPANTS } from './siliconDopants';
+import type { DensityOfStatesModel, IntrinsicDensityFit, Material, VarshniBandgap } from './types';
+
+/**
+ * Thurmond's Varshni-form fit of the Si gap.
+ * Eg(300 K) = 1.1245 eV; Eg(77 K) = 1.1661 eV.
+ */
+export const THURMOND_1975_BANDGAP: VarshniBandgap = {
+  code: 'thurmond',
+  name: 'Thurmond (1975) Varshni-form band gap',
+  gapAtZero: 1.17,
+  alpha: 4.73e-4,
+  beta: 636,
+  citation:
+    'C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); Eg0 = 1.170 eV, α = 4.73e-4 eV/K, β = 636 K ' +
+    '(values from memory)',
+  validity:
+    'fitted to Si gap data from near 0 K to well above room temperature (from memory); evaluated here ' +
+    'over the whole temperature domain 1–1687 K, where it stays between 1.17 and 0.59 eV',
+};
+
+/**
+ * Green's effective densities of states. The 300 K values are Green's; the
+ * temperature laws (T/300)^1.58 and (T/300)^1.85 are the power-law
+ * approximations of his temperature-dependent density-of-states masses
+ * (exponents from memory). They describe the growth of the DOS masses with T
+ * (mostly the valence band), which a plain T^3/2 law misses; with them the
+ * 'dos' ni model tracks the measured ni(T) of Misiakos & Tsamakis within
+ * about 10% from 78 K to 1000 K.
+ */
+export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
+  code: 'green-1990',
+  name: 'Green (1990) effective densities of states',
+  conductionBand: { valueAtReference: 2.86e19, referenceTemperature: 300, exponent: 1.58 },
+  valenceBand: { valueAtReference: 3.1e19, referenceTemperature: 300, exponent: 1.85 },
+  citation:
+    'M. A. Green, J. Appl. Phys. 67, 2944 (1990): Nc(300 K) = 2.86e19 cm⁻³, Nv(300 K) = 3.10e19 cm⁻³; ' +
+    'temperature exponents 1.58 and 1.85 (from memory)',
+  validity:
+    '300 K values; power laws approximate Green’s masses over about 200–500 K (from memory) and are ' +
+    'extrapolated outside that range',
+};
+
+/**
+ * Misiakos & Tsamakis: measured ni from 78 to 340 K. Gives 9.70e9 cm⁻³ at
+ * 300 K from the fit (paper's quoted value 9.65e9 cm⁻³, confirmed by
+ * Altermatt et al., J. Appl. Phys. 93, 1598 (2003)).
+ *
+ * Why it is used over the whole temperature domain (decision): the form
+ * A·T^2.54·exp(−6726/T) is analytic, and d ln ni/dT = 2.54/T + 6726/T² > 0, so
+ * it grows strictly and has no kinks at any T > 0. Outside 78–340 K it is an
+ * extrapolation, but a physical one: the gap it implies together with Green's
+ * Nc, Nv (kT·ln(Nc·Nv/ni²), the gap the equilibrium solver uses) stays within
+ * 0.015 eV of Thurmond's independent Eg(T) from 1 K to 1687 K, and ni agrees
+ * with the 'dos' model (Thurmond gap + Green DOS) to within 10% from 78 K to
+ * 1000 K. Splicing another model in at 340 K would create a kink for no gain.
+ */
+export const MISIAKOS_TSAMAKIS_1993_FIT: IntrinsicDensityFit = {
+  code: 'misiakos',
+  name: 'Misiakos & Tsamakis (1993) ni fit',
+  prefactor: 5.29e19,
+  referenceTemperature: 300,
+  exponent: 2.54,
+  activationTemperature: 6726,
+  citation:
+    'K. Misiakos, D. Tsamakis, J. Appl. Phys. 74, 3293 (1993): ni = 5.29e19·(T/300)^2.54·exp(−6726/T) cm⁻³, ' +
+    '9.65e9 cm⁻³ at 300 K (fit constants from memory)',
+  validity: 'measured 78–340 K; smooth, strictly increasing extrapolation outside (see notes)',
+  notes:
+    'Default. Outside 78–340 K the same analytic fit is extrapolated: it stays within 10% of the ' +
+    'DOS-based model (Thurmond gap, Green 1990 Nc/Nv) from 78 K to 1000 K, and the gap it implies with ' +
+    'Green’s Nc, Nv stays within 0.015 eV of Thurmond’s from 1 K to 1687 K.',
+};
+
+/**
+ * Sproul & Green: ni from 275 to 375 K, 1.00e10 cm⁻³ at 300 K. Altermatt et
+ * al. (2003) showed this value is a few percent high because band-gap
+ * narrowing in the doped test devices was not accounted for (from memory).
+ */
+export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
+  code: 'sproul-green',
+  name: 'Sproul & Green (1991) ni fit',
+  prefactor: 9.38e19,
+  referenceTemperature: 300,
+  exponent: 2,
+  activationTemperature: 6884,
+  citation:
+    'A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ni = 9.38e19·(T/300)^2·exp(−6884/T) cm⁻³, ' +
+    '1.00e10 cm⁻³ at 300 K (fit constants from memory)',
+  validity: 'measured 275–375 K; extrapolated outside',
+  notes:
+    'About 5% above the default at 300 K; Altermatt et al., J. Appl. Phys. 93, 1598 (2003) attribute the ' +
+    'difference to band-gap narrowing in the measured devices.',
+};
+
+/** Melting point of Si: solid-state models end there. */
+const SILICON_MELTING_POINT = 1687; // K (1414 °C), common practice, no source
+
+/** Below this the exponentials in ni and freeze-out leave the range of doubles. */
+const LOWEST_NUMERIC_TEMPERATURE = 1; // K
+
+/** 8 atoms per cubic cell, lattice constant 5.431 Å (common practice, no source). */
+const SILICON_ATOMIC_DENSITY = 4.994e22; // cm⁻³
+
+export const SILICON: Material = {
+  code: 'Si',
+  name: 'silicon',
+  temperatureDomain: {
+    min: LOWEST_NUMERIC_TEMPERATURE,
+    max: SILICON_MELTING_POINT,
+    reason:
+      'from 1 K (below, the exponentials leave double-precision range) to the melting point of silicon, ' +
+      '1687 K; each model’s own validated range is narrower (see DRIFT.MODELS)',
+  },
+  atomicDensity: SILICON_ATOMIC_DENSITY,
+  bandgap: THURMOND_1975_BANDGAP,
+  densityOfStates: GREEN_1990_DENSITY_OF_STATES,
+  intrinsicFits: [MISIAKOS_TSAMAKIS_1993_FIT, SPROUL_GREEN_1991_FIT],
+  dopants: SILICON_DOPANTS,
+  genericDopants: { donor: 'n', acceptor: 'p' },
+};

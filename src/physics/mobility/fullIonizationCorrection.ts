@@ -1,0 +1,82 @@
+/**
+ * The correction that keeps the mobility fits honest next to incomplete
+ * ionization ("the trap" of the physics contract).
+ *
+ * Masetti, Arora and Caughey–Thomas fitted conductivity mobility against the
+ * *total* dopant density at room temperature, i.e. they computed μ from
+ * σ = q·N·μ assuming every dopant is ionized. Our equilibrium solver ionizes
+ * dopants incompletely, so σ = q·n·μ_fit would count the un-ionized fraction
+ * twice (once in n, once inside μ_fit). The majority-carrier drift mobility is
+ * therefore
+ *
+ *   μ = μ_fit(N, T) · N_net / n_eq(300 K)
+ *
+ * with n_eq the equilibrium majority density at the fits' reference
+ * temperature, from the same solver. At 300 K σ then equals q·N_net·μ_fit (so
+ * ρ agrees with ASTM F723 and Irvin as well as the fits do); at other
+ * temperatures freeze-out enters through n(T)/n(300 K). Minority carriers keep
+ * μ_fit unchanged.
+ *
+ * Implemented form. With m and m' the 300 K majority and minority densities
+ * and s = max(0, (m − m')/(m + m')) the extrinsic fraction,
+ *
+ *   factor = 1 − s² + s · N_net/(m + m')
+ *
+ * For an extrinsic reference (m ≫ m', every doping the fits describe) s → 1
+ * and factor → N_net/m, the contract's formula; the difference is of order
+ * m'/m = ni²/N² (below 1e-6 for N ≥ 1e13 cm⁻³). When the 300 K reference is
+ * intrinsic (N_net ≲ ni, including near-exact compensation) s → 0 and the
+ * factor goes smoothly to 1: free carriers are then ~ni, the fits'
+ * full-ionization assumption has nothing to correct, and the literal N_net/n
+ * would give nonsense (N_net/ni ≪ 1 for light doping; a singular or negative
+ * ratio near exact compensation, where the neutral dopants of the two species
+ * can outweigh N_net). The factor is continuous, positive and bounded for
+ * every sample.
+ */
+import type { Carrier, Sample } from '../sample';
+import { sampleDopants, suppliedCarrier, otherCarrier } from '../sample';
+import { solveEquilibrium } from '../equilibrium';
+
+/** Temperature at which the mobility fits were made and the correction is referenced, K. */
+export const FIT_REFERENCE_TEMPERATURE = 300;
+
+/**
+ * Which carrier type the net doping supplies: the named dopant's carrier when
+ * density > counterDensity, the other type when counter-doping outweighs it,
+ * undefined when exactly compensated (and for an undoped sample).
+ *
+ * @param sample - the sample
+ * @returns 'electron', 'hole' or undefined
+ * @example netMajorityCarrier(phosphorusCounterDopedWithMoreBoron) // 'hole'
+ */
+export function netMajorityCarrier(sample: Sample): Carrier | undefined {
+  if (sample.density > sample.counterDensity) return suppliedCarrier(sample.dopant);
+  if (sample.counterDensity > sample.density) return otherCarrier(suppliedCarrier(sample.dopant));
+  return undefined;
+}
+
+/**
+ * The factor (≈ N_net / n_eq at 300 K) that turns the fitted mobility into the
+ * majority-carrier drift mobility; see the module comment for the exact form.
+ *
+ * @param sample - the sample (its temperature is not used: the factor is taken at 300 K)
+ * @returns dimensionless factor: ≈ 1/(ionized fraction at 300 K) for extrinsic samples
+ *   (≥ 1, up to about 1.3 near 1e18 cm⁻³), → 1 for samples intrinsic at 300 K, exactly 1
+ *   for undoped or exactly compensated samples
+ * @example fullIonizationCorrection(phosphorus1e18) // ≈ 1.24
+ */
+export function fullIonizationCorrection(sample: Sample): number {
+  const majority = netMajorityCarrier(sample);
+  if (majority === undefined) return 1;
+  const netDoping = Math.abs(sample.density - sample.counterDensity);
+  const reference = solveEquilibrium(
+    sample.material,
+    FIT_REFERENCE_TEMPERATURE,
+    sampleDopants({ ...sample, temperature: FIT_REFERENCE_TEMPERATURE }),
+  );
+  const [majorityDensity, minorityDensity] =
+    majority === 'electron' ? [reference.electrons, reference.holes] : [reference.holes, reference.electrons];
+  const carriers = majorityDensity + minorityDensity;
+  const extrinsic = Math.max(0, (majorityDensity - minorityDensity) / carriers);
+  return 1 - extrinsic * extrinsic + (extrinsic * netDoping) / carriers;
+}

@@ -1,0 +1,97 @@
+/**
+ * Registry of every model code the core knows, with what it computes, its
+ * citation and validity range: the table behind DRIFT.MODELS() and the help
+ * pages. Band-structure, ni, statistics and ionization entries come from
+ * bands/modelInfo.ts; the transport entries are defined here from the
+ * citation constants beside each parameter table.
+ */
+import { PhysicsDomainError } from './errors';
+import { BAND_MODELS } from './bands/modelInfo';
+import { MASETTI_SOURCE } from './mobility/masetti';
+import { ARORA_SOURCE, ARORA_FITTED_TEMPERATURES } from './mobility/arora';
+import { CAUGHEY_THOMAS_SOURCE } from './mobility/caugheyThomas';
+import { F723_SOURCE } from './astmF723';
+
+/** One model as DRIFT.MODELS() lists it. */
+export interface ModelInfo {
+  /** Code as users type it (lower case; look-up is case-insensitive). */
+  code: string;
+  /** What the model computes. */
+  quantity: string;
+  /** Descriptive name. */
+  name: string;
+  /** Full citation ("from memory" where values were recalled). */
+  citation: string;
+  /** Range the source validated. */
+  validity: string;
+  /** How the core uses it beyond the source (extensions, assumptions). */
+  notes?: string;
+}
+
+const MOBILITY = 'mobility and resistivity';
+
+const DRIFT_MOBILITY_NOTE =
+  'Transport uses the drift mobility: the fit times N_net / n_eq(300 K) for the net-majority ' +
+  'carrier (the fits assumed full ionization; relaxed smoothly to 1 when the 300 K sample is intrinsic), ' +
+  'the fit unchanged for the other carrier; total impurity density N_D + N_A for compensated samples.';
+
+const TEMPERATURE_BY_ARORA =
+  `Away from 300 K multiplied by the Arora (1982) ratio μ(N,T)/μ(N,300 K) (fitted ` +
+  `${ARORA_FITTED_TEMPERATURES.min}–${ARORA_FITTED_TEMPERATURES.max} K, extrapolated outside).`;
+
+const TRANSPORT_MODELS: readonly ModelInfo[] = [
+  {
+    code: 'masetti',
+    quantity: MOBILITY,
+    name: 'Masetti et al. (1983) dopant-specific mobility (default)',
+    citation: MASETTI_SOURCE.citation,
+    validity: MASETTI_SOURCE.validity,
+    notes: `${TEMPERATURE_BY_ARORA} Electrons: As or P row (other dopants: P row); holes: B row. ${DRIFT_MOBILITY_NOTE}`,
+  },
+  {
+    code: 'arora',
+    quantity: MOBILITY,
+    name: 'Arora, Hauser, Roulston (1982) mobility vs density and temperature',
+    citation: ARORA_SOURCE.citation,
+    validity: ARORA_SOURCE.validity,
+    notes: DRIFT_MOBILITY_NOTE,
+  },
+  {
+    code: 'caughey-thomas',
+    quantity: MOBILITY,
+    name: 'Caughey–Thomas (1967) low-field mobility',
+    citation: CAUGHEY_THOMAS_SOURCE.citation,
+    validity: CAUGHEY_THOMAS_SOURCE.validity,
+    notes: `${TEMPERATURE_BY_ARORA} ${DRIFT_MOBILITY_NOTE}`,
+  },
+  {
+    code: 'astm-f723',
+    quantity: 'resistivity ↔ dopant density',
+    name: 'ASTM F723 conversion (Thurber et al. 1981 equations)',
+    citation: F723_SOURCE.citation,
+    validity: F723_SOURCE.validity,
+    notes: 'Closed-form conversion for resistivity and doping only; not a mobility model.',
+  },
+];
+
+/** Every model code: ni, band gap, densities of states, statistics, ionization, mobility, ASTM F723. */
+export const MODEL_REGISTRY: readonly ModelInfo[] = [...BAND_MODELS.map((entry) => ({ ...entry })), ...TRANSPORT_MODELS];
+
+/**
+ * Looks a model up by code, case-insensitively.
+ *
+ * @param code - e.g. 'Masetti'
+ * @returns its registry entry
+ * @throws PhysicsDomainError listing every code
+ * @example modelInfo('astm-f723').quantity // 'resistivity ↔ dopant density'
+ */
+export function modelInfo(code: string): ModelInfo {
+  const wanted = String(code).trim().toLowerCase();
+  const found = MODEL_REGISTRY.find((entry) => entry.code.toLowerCase() === wanted);
+  if (found === undefined) {
+    throw new PhysicsDomainError(
+      `unknown model '${code}'. Allowed: ${MODEL_REGISTRY.map((entry) => entry.code).join(', ')}.`,
+    );
+  }
+  return found;
+}

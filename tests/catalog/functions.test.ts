@@ -1,0 +1,132 @@
+/**
+ * The catalog entries as a user meets them: identities between functions
+ * that must hold exactly, defaults, and the messages bad input gets.
+ */
+import { CATALOG, evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
+import { ELEMENTARY_CHARGE, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
+
+function value(name: string, ...args: ArgumentInput[]): number {
+  const spec = findFunction(name);
+  if (!spec) throw new Error(`no ${name}`);
+  const result = evaluate(spec, args)[0][0];
+  if (typeof result !== 'number') throw new Error(`${name} gave ${JSON.stringify(result)}`);
+  return result;
+}
+
+function message(name: string, ...args: ArgumentInput[]): string {
+  const result: CellOutput = evaluate(findFunction(name)!, args)[0][0];
+  if (!isFailure(result)) throw new Error(`${name} gave ${JSON.stringify(result)}, not an error`);
+  return `${result.code} ${result.message}`;
+}
+
+describe('identities between catalog functions (definitions: common practice, no source)', () => {
+  const cases: [number, string, number, number][] = [
+    [1e15, 'B', 300, 0],
+    [1e17, 'P', 300, 2e16],
+    [3e18, 'As', 250, 0],
+    [1e16, 'P', 77, 0],
+    [1e14, 'B', 600, 0],
+  ];
+
+  it.each(cases)('σ = q(n·μn + p·μp) for %s cm⁻³ %s at %s K (counter %s)', (doping, dopant, t, counter) => {
+    const majority = value('MAJORITY', doping, dopant, t, null, counter);
+    const minority = value('MINORITY', doping, dopant, t, null, counter);
+    const muMajority = value('MOBILITY', doping, dopant, t, 'majority', null, null, counter);
+    const muMinority = value('MOBILITY', doping, dopant, t, 'minority', null, null, counter);
+    const sigma = value('CONDUCTIVITY', doping, dopant, t, null, null, counter);
+    expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
+    expect(value('RESISTIVITY', doping, dopant, t, null, null, counter) * sigma).toBeCloseTo(1, 12);
+  });
+
+  it.each(cases)('D = μ·kT/q (Einstein) for %s cm⁻³ %s at %s K', (doping, dopant, t, counter) => {
+    for (const carrier of ['majority', 'minority', 'electron', 'hole']) {
+      const mu = value('MOBILITY', doping, dopant, t, carrier, null, null, counter);
+      expect(value('DIFFUSIVITY', doping, dopant, t, carrier, null, null, counter) / (mu * thermalVoltage(t))).toBeCloseTo(1, 12);
+    }
+  });
+
+  it('J = σ·E, its sign following the field', () => {
+    const sigma = value('CONDUCTIVITY', 5e15, 'B');
+    expect(value('CURRENTDENSITY', 250, 5e15, 'B')).toBeCloseTo(250 * sigma, 9);
+    expect(value('CURRENTDENSITY', -250, 5e15, 'B')).toBeCloseTo(-250 * sigma, 9);
+    expect(value('CURRENTDENSITY', 0, 5e15, 'B')).toBe(0);
+  });
+
+  it('n·p = ni² from ELECTRONS and HOLES, and FERMILEVEL = kT·ln(n/ni)', () => {
+    for (const t of [250, 300, 450]) {
+      const n = value('ELECTRONS', 2e16, 5e15, t);
+      const p = value('HOLES', 2e16, 5e15, t);
+      const ni = value('NI', t);
+      expect((n * p) / (ni * ni)).toBeCloseTo(1, 10);
+      expect(value('FERMILEVEL', 2e16, 5e15, t)).toBeCloseTo(thermalVoltage(t) * Math.log(n / ni), 10);
+    }
+  });
+
+  it('DOPING inverts RESISTIVITY to 1e-9, with and without counter-doping', () => {
+    for (const [doping, dopant, counter] of [[3e14, 'B', 0], [2e17, 'P', 5e16], [4e19, 'As', 0]] as const) {
+      const rho = value('RESISTIVITY', doping, dopant, 300, null, null, counter);
+      expect(value('DOPING', rho, dopant, 300, null, null, counter) / doping).toBeCloseTo(1, 9);
+    }
+    const rho = value('RESISTIVITY', 1e16, 'P', 300, 'astm-f723');
+    expect(value('DOPING', rho, 'P', 300, 'astm-f723') / 1e16).toBeCloseTo(1, 1);
+  });
+
+  it('SHEETRES and RESISTOR agree: R = Rs·L/W', () => {
+    const rs = value('SHEETRES', 2.5, 4);
+    expect(value('RESISTOR', 2.5, 300, 15, 4)).toBeCloseTo((rs * 300) / 15, 9);
+  });
+});
+
+describe('arguments', () => {
+  it('takes 300 K, Si, majority and the default models for blank optional arguments', () => {
+    expect(value('RESISTIVITY', 1e16, 'B', null, null, null, null)).toBe(value('RESISTIVITY', 1e16, 'B', 300, 'masetti', 'Si', 0));
+    expect(value('MOBILITY', 1e16, 'B')).toBe(value('MOBILITY', 1e16, 'B', 300, 'majority', 'masetti', 'Si', 0));
+    expect(value('NI', 300)).toBe(value('NI', 300, 'si', 'MISIAKOS'));
+  });
+
+  it('reads P as phosphorus and p as a generic acceptor', () => {
+    expect(value('MAJORITY', 1e16, 'p')).toBe(value('HOLES', 0, 1e16));
+    expect(value('MAJORITY', 1e16, 'P')).toBeCloseTo(value('MAJORITY', 1e16, 'P '), 0);
+    expect(value('MOBILITY', 1e18, 'as')).toBe(value('MOBILITY', 1e18, 'As'));
+  });
+
+  it('gives the full grid for a doping column against a temperature row', () => {
+    const grid = evaluate(findFunction('RESISTIVITY')!, [[[1e15], [1e16], [1e17]], 'B', [[250, 300, 350, 400]]]);
+    expect(grid).toHaveLength(3);
+    expect(grid.every((row) => row.length === 4 && row.every((v) => typeof v === 'number'))).toBe(true);
+    expect(grid[1][1]).toBe(value('RESISTIVITY', 1e16, 'B', 300));
+  });
+});
+
+describe('messages for bad input name the argument, the value and what is allowed', () => {
+  it.each([
+    [['RESISTIVITY', -5, 'B'], '#VALUE! doping must be > 0 cm⁻³ and ≤ 1e+22 cm⁻³; got -5'],
+    [['RESISTIVITY', 1e16, 'Xe'], "#VALUE! unknown dopant 'Xe' for silicon"],
+    [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: masetti, arora, caughey-thomas, astm-f723'],
+    [['RESISTIVITY', 1e16, 'B', 300, null, 'GaN'], '#VALUE! material "GaN" is not known; allowed: Si'],
+    [['NI', 5], '#VALUE! temperature_K must be ≥ 20 K and ≤ 1000 K; got 5'],
+    [['NI', null], '#VALUE! temperature_K is required'],
+    [['MOBILITY', 1e16, 'B', 300, 'sideways'], '#VALUE! carrier "sideways" is not known; allowed: majority, minority, electron, hole'],
+    [['MOBILITY', 1e16, 'B', 300, null, 'astm-f723'], '#VALUE! model "astm-f723" is not known; allowed: masetti, arora, caughey-thomas'],
+    [['RESISTIVITY', 1e16, 'Al', 300, 'astm-f723'], '#VALUE! '],
+    [['SHEETRES', 1, 0], '#VALUE! thickness_um must be > 0 µm; got 0'],
+    [['DOPING', 1e9, 'B'], '#VALUE! '],
+    [['RESISTIVITY', true, 'B'], '#VALUE! doping must be a number; got TRUE'],
+  ] as const)('%j', (call, expected) => {
+    const [name, ...args] = call;
+    expect(message(name, ...(args as ArgumentInput[]))).toContain(expected);
+  });
+});
+
+describe('DRIFT.MODELS', () => {
+  const table = evaluate(findFunction('MODELS')!, []);
+  it('has a heading row and one row per registered model, none blank', () => {
+    expect(table[0]).toEqual(['code', 'quantity', 'model', 'citation', 'validity']);
+    expect(table).toHaveLength(MODEL_REGISTRY.length + 1);
+    for (const row of table.slice(1)) for (const cell of row) expect(typeof cell === 'string' && cell.length > 0).toBe(true);
+  });
+  it('lists every model any function cites', () => {
+    const codes = new Set(table.slice(1).map((row) => row[0]));
+    for (const spec of CATALOG) for (const code of spec.models) expect(codes).toContain(code);
+  });
+});
