@@ -144,7 +144,6 @@ export async function readWorkbookFile(path: string): Promise<ExcelJS.Workbook> 
 
 /** A formula cell as read, with what is needed to write it back. */
 interface FormulaCell {
-  readonly sheet: string;
   readonly row: number;
   readonly column: number;
   readonly cell: ExcelJS.Cell;
@@ -176,7 +175,7 @@ function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
       if (cell.type === ExcelJS.ValueType.Formula) {
         const stored = cell.value as StoredFormula;
         const wasArray = stored.shareType === 'array';
-        formulas.push({ sheet: worksheet.name, row: r, column: c, cell, stored: cell.formula, wasArray });
+        formulas.push({ row: r, column: c, cell, stored: cell.formula, wasArray });
         const box = wasArray && stored.ref ? parseRange(stored.ref) : undefined;
         if (box) oldSpills.push({ anchorRow: r, anchorColumn: c, box });
       }
@@ -307,7 +306,9 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
   }
 }
 
+/** Whether a spill over more than one cell touches a merged cell (its anchor included). */
 function coversMergedCells(worksheet: ExcelJS.Worksheet, range: SimpleCellRange): boolean {
+  if (range.start.row === range.end.row && range.start.col === range.end.col) return false;
   for (let r = range.start.row; r <= range.end.row; r++) {
     for (let c = range.start.col; c <= range.end.col; c++) {
       if (worksheet.findCell(r + 1, c + 1)?.isMerged) return true;

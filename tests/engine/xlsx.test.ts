@@ -150,6 +150,17 @@ describe('a spilled result', () => {
     expect(cells.get('A2')?.value).toBeUndefined();
   });
 
+  it('still computes a one-cell array formula that sits in a merged cell', async () => {
+    const { bytes } = await roundTrip((wb) => {
+      const s = wb.addWorksheet('S');
+      s.mergeCells('A1:B1');
+      s.getCell('A1').value = { formula: 'DRIFT.SHEETRES(1,10)', shareType: 'array', ref: 'A1', result: 0 } as ExcelJS.CellFormulaValue;
+    });
+    const cells = await sheetCells(await openPackage(bytes), 'S');
+    expect(cells.get('A1')?.formula?.attributes).toEqual({ t: 'array', ref: 'A1' });
+    expect(cached(cells.get('A1'))).toBe(direct('SHEETRES', [1, 10])[0][0]);
+  });
+
   it('replaces an earlier spill’s cached cells: a shorter result leaves the rest empty', async () => {
     const { bytes } = await roundTrip((wb) => {
       const s = wb.addWorksheet('S');
