@@ -10,8 +10,9 @@
 import type { ElementwiseSpec, FunctionSpec, ParameterSpec } from './types';
 import { InputError, failure, isFailure, type ArgumentInput, type CellFailure, type CellInput, type CellOutput, type Grid } from './values';
 import { PhysicsDomainError } from '../physics/errors';
+import { qualifiedName } from './naming';
 
-export const NAMESPACE = 'DRIFT';
+export { NAMESPACE } from './naming';
 
 /** Normalises any argument form into a non-empty grid. */
 export function toGrid(input: ArgumentInput): Grid<CellInput> {
@@ -25,7 +26,7 @@ export function toGrid(input: ArgumentInput): Grid<CellInput> {
 
 /** Calls a catalog function on raw host arguments and returns its result grid. */
 export function evaluate(spec: FunctionSpec, args: readonly ArgumentInput[]): Grid<CellOutput> {
-  const qualified = `${NAMESPACE}.${spec.name}`;
+  const qualified = qualifiedName(spec);
   if (args.length > spec.parameters.length && args.slice(spec.parameters.length).some((a) => a !== undefined)) {
     return [[failure('#VALUE!', `${qualified} takes at most ${spec.parameters.length} arguments; got ${args.length}`)]];
   }

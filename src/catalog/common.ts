@@ -8,13 +8,17 @@ import {
   MOBILITY_MODEL_CODES,
   RESISTIVITY_MODEL_CODES,
   dopantCodes,
+  carrierFor,
   genericDopant,
+  sampleDopants,
+  solveEquilibrium,
   resolveDopant,
   resolveMaterial,
   SILICON,
   CARRIER_ROLES,
   type CarrierRole,
   type DopantDensity,
+  type Equilibrium,
   type Material,
   type Sample,
 } from '../physics';
@@ -155,10 +159,17 @@ export function sampleOf(
   };
 }
 
-/** Donor and acceptor densities as generic dopants, for the two-density entries. */
-export function genericDoping(materialValue: Material, donorDensity: number, acceptorDensity: number): DopantDensity[] {
-  return [
+/** Equilibrium of a sample with donors and acceptors as generic dopants (ELECTRONS, HOLES, FERMILEVEL). */
+export function genericEquilibrium(materialValue: Material, temperatureValue: number, donorDensity: number, acceptorDensity: number): Equilibrium {
+  const dopants: DopantDensity[] = [
     { dopant: genericDopant(materialValue, 'donor'), density: donorDensity },
     { dopant: genericDopant(materialValue, 'acceptor'), density: acceptorDensity },
   ];
+  return solveEquilibrium(materialValue, temperatureValue, dopants);
+}
+
+/** Equilibrium density of a sample's majority or minority carriers (MAJORITY, MINORITY). */
+export function sampleCarrierDensity(sample: Sample, role: 'majority' | 'minority'): number {
+  const state = solveEquilibrium(sample.material, sample.temperature, sampleDopants(sample));
+  return carrierFor(sample.dopant, role) === 'electron' ? state.electrons : state.holes;
 }

@@ -53,6 +53,7 @@ export function findFunction(name: string): FunctionSpec | undefined {
   return BY_NAME.get(bare);
 }
 
-export { NAMESPACE, evaluate, toFailure, unwrapSingle } from './broadcast';
+export { evaluate, toFailure, unwrapSingle } from './broadcast';
+export { NAMESPACE, qualifiedName } from './naming';
 export type { FunctionSpec, ParameterSpec, ElementwiseSpec, TableSpec } from './types';
 export * from './values';

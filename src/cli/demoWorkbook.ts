@@ -7,6 +7,7 @@
  */
 import ExcelJS from 'exceljs';
 import { columnLetters } from '../engine/xlsx';
+import { storedFormula } from '../engine/formulaText';
 
 /** Offset between the Celsius and kelvin scales (exact by definition of the kelvin; common practice, no source). */
 const CELSIUS_TO_KELVIN = 273.15;
@@ -101,8 +102,9 @@ function input(cell: ExcelJS.Cell, value: ExcelJS.CellValue, numFmt?: string): v
   if (numFmt) cell.numFmt = numFmt;
 }
 
+/** Writes a live formula, DRIFT calls in the stored form Excel binds to the add-in. */
 function formula(cell: ExcelJS.Cell, text: string, numFmt?: string): void {
-  cell.value = { formula: text } as ExcelJS.CellFormulaValue;
+  cell.value = { formula: storedFormula(text) } as ExcelJS.CellFormulaValue;
   cell.fill = FORMULA_FILL;
   if (numFmt) cell.numFmt = numFmt;
 }

@@ -59,3 +59,21 @@ export function engineFormula(stored: string): string {
     .map((part) => (part.quoted ? part.text : translateCode(part.text)))
     .join('')}`;
 }
+
+/** A DRIFT call as the engine reads it. */
+const DRIFT_ENGINE_NAME = /\bDRIFT\.([A-Z0-9]+)(?=\s*\()/gi;
+
+/**
+ * Engine formula text (with or without `=`) as a file stores it (without `=`):
+ * DRIFT calls take the add-in form Excel itself writes, so Excel binds them to
+ * the add-in when it opens the file. The inverse of engineFormula for DRIFT
+ * calls; quoted text is left alone.
+ *
+ * @example storedFormula('=DRIFT.SHEETRES(A2,"DRIFT.X(")') // '_xldudf_DRIFT_SHEETRES(A2,"DRIFT.X(")'
+ */
+export function storedFormula(engineText: string): string {
+  const body = engineText.startsWith('=') ? engineText.slice(1) : engineText;
+  return segments(body)
+    .map((part) => (part.quoted ? part.text : part.text.replace(DRIFT_ENGINE_NAME, (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`)))
+    .join('');
+}

@@ -17,7 +17,8 @@ import type { InterpreterState } from 'hyperformula/typings/interpreter/Interpre
 import type { InterpreterValue } from 'hyperformula/typings/interpreter/InterpreterValue';
 import type { Ast, ProcedureAst } from 'hyperformula/typings/parser';
 import { CATALOG } from '../catalog';
-import { NAMESPACE, evaluate } from '../catalog/broadcast';
+import { evaluate } from '../catalog/broadcast';
+import { qualifiedName } from '../catalog/naming';
 import type { FunctionSpec } from '../catalog/types';
 import { toArgumentInput, toInterpreterValue } from './convert';
 
@@ -26,14 +27,6 @@ const EVALUATE_METHOD = 'evaluateDriftFunction';
 /** Name of the plugin method that predicts every DRIFT function's result size. */
 const SIZE_METHOD = 'predictDriftResultSize';
 
-/**
- * The name a catalog entry has in formulas.
- *
- * @example qualifiedName(RESISTIVITY) // 'DRIFT.RESISTIVITY'
- */
-export function qualifiedName(spec: FunctionSpec): string {
-  return `${NAMESPACE}.${spec.name}`;
-}
 
 const SPEC_BY_QUALIFIED_NAME = new Map(CATALOG.map((spec) => [qualifiedName(spec), spec]));
 

@@ -7,7 +7,7 @@
 import { DetailedCellError, ErrorType, type HyperFormula } from 'hyperformula';
 import { CATALOG } from '../../src/catalog';
 import { createEngine } from '../../src/engine/engine';
-import { qualifiedName } from '../../src/engine/plugin';
+import { qualifiedName } from '../../src/catalog/naming';
 import { catalogGrid, engineGrid } from './support/compare';
 import { evaluateDirectly } from './support/directFormula';
 

@@ -2,12 +2,10 @@
  * How a catalog function is written out for people: `=DRIFT.NAME(a, [b])`.
  * Shared by help pages, the README table and the CLI so they never disagree.
  */
-import { NAMESPACE } from '../broadcast';
+import { qualifiedName } from '../naming';
 import type { FunctionSpec, ParameterSpec } from '../types';
 
-export function qualifiedName(spec: FunctionSpec): string {
-  return `${NAMESPACE}.${spec.name}`;
-}
+export { qualifiedName };
 
 export function parameterLabel(param: ParameterSpec): string {
   return param.optional ? `[${param.name}]` : param.name;

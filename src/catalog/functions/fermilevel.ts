@@ -1,5 +1,4 @@
-import { solveEquilibrium } from '../../physics';
-import { acceptors, donors, genericDoping, material, temperature } from '../common';
+import { acceptors, donors, genericEquilibrium, material, temperature } from '../common';
 import { elementwise } from '../types';
 
 export const FERMILEVEL = elementwise({
@@ -14,5 +13,5 @@ export const FERMILEVEL = elementwise({
   ],
   models: ['altermatt-2006', 'misiakos'],
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
-    solveEquilibrium(materialValue, temperatureK, genericDoping(materialValue, donorDensity, acceptorDensity)).fermiLevel,
+    genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).fermiLevel,
 });

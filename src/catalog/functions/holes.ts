@@ -1,5 +1,4 @@
-import { solveEquilibrium } from '../../physics';
-import { acceptors, donors, genericDoping, material, temperature } from '../common';
+import { acceptors, donors, genericEquilibrium, material, temperature } from '../common';
 import { elementwise } from '../types';
 
 export const HOLES = elementwise({
@@ -14,5 +13,5 @@ export const HOLES = elementwise({
   ],
   models: ['altermatt-2006', 'misiakos'],
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
-    solveEquilibrium(materialValue, temperatureK, genericDoping(materialValue, donorDensity, acceptorDensity)).holes,
+    genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).holes,
 });

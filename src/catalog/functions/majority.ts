@@ -1,5 +1,4 @@
-import { carrierFor, sampleDopants, solveEquilibrium } from '../../physics';
-import { counterDoping, dopant, doping, material, sampleOf, temperature } from '../common';
+import { counterDoping, dopant, doping, material, sampleCarrierDensity, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 
 export const MAJORITY = elementwise({
@@ -14,9 +13,6 @@ export const MAJORITY = elementwise({
     { formula: '=DRIFT.MAJORITY(1e16,"P",300,,4e15)', note: 'compensated: about 6e15 cm⁻³' },
   ],
   models: ['altermatt-2006', 'misiakos'],
-  compute: (density, dopantCode, temperatureK, materialValue, counter) => {
-    const sample = sampleOf(materialValue, temperatureK, dopantCode, density, counter);
-    const state = solveEquilibrium(materialValue, temperatureK, sampleDopants(sample));
-    return carrierFor(sample.dopant, 'majority') === 'electron' ? state.electrons : state.holes;
-  },
+  compute: (density, dopantCode, temperatureK, materialValue, counter) =>
+    sampleCarrierDensity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), 'majority'),
 });

@@ -1,5 +1,4 @@
-import { carrierFor, sampleDopants, solveEquilibrium } from '../../physics';
-import { counterDoping, dopant, doping, material, sampleOf, temperature } from '../common';
+import { counterDoping, dopant, doping, material, sampleCarrierDensity, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 
 export const MINORITY = elementwise({
@@ -13,9 +12,6 @@ export const MINORITY = elementwise({
     { formula: '=DRIFT.MINORITY(1e15,"B",{300,400,500})', note: 'the rise with temperature along a row' },
   ],
   models: ['altermatt-2006', 'misiakos'],
-  compute: (density, dopantCode, temperatureK, materialValue, counter) => {
-    const sample = sampleOf(materialValue, temperatureK, dopantCode, density, counter);
-    const state = solveEquilibrium(materialValue, temperatureK, sampleDopants(sample));
-    return carrierFor(sample.dopant, 'minority') === 'electron' ? state.electrons : state.holes;
-  },
+  compute: (density, dopantCode, temperatureK, materialValue, counter) =>
+    sampleCarrierDensity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), 'minority'),
 });
