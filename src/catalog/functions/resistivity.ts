@@ -5,7 +5,7 @@ import { elementwise } from '../types';
 export const RESISTIVITY = elementwise({
   name: 'RESISTIVITY',
   summary: 'Resistivity ρ = 1/σ of a doped sample, in Ω·cm.',
-  help: `Returns ρ = 1/[q(n·μn + p·μp)] for the given dopant density, temperature and mobility model. At 300 K the default agrees with the ASTM F723 conversion for boron and phosphorus within a few percent from 1e13 to 1e20 cm⁻³ (see the reference tests). A doping column against a temperature row spills the whole table: =DRIFT.RESISTIVITY(A2:A40,"B",B1:H1). With model astm-f723 it returns the standard's conversion directly (B and P, room temperature, no counter-doping).`,
+  help: `Returns ρ = 1/[q(n·μn + p·μp)] for the given dopant density, temperature and mobility model. At 300 K the default reproduces Masetti's published fit; it agrees with the ASTM F723 conversion for boron and phosphorus within about 4 % from 1e13 to 1e17 cm⁻³, and within about 11 % from 1e17 to 1e20 cm⁻³, where the two published relations themselves differ (largest near 1e18 cm⁻³ for boron and 1e20 cm⁻³ for phosphorus). Where a specification is written against F723, use model astm-f723. A doping column against a temperature row spills the whole table: =DRIFT.RESISTIVITY(A2:A40,"B",B1:H1). With model astm-f723 it returns the standard's conversion directly (B and P, room temperature, no counter-doping).`,
   result: { unit: 'Ω·cm', description: 'Resistivity ρ' },
   parameters: [doping, dopant, temperature, resistivityModel, material, counterDoping] as const,
   examples: [
