@@ -21,6 +21,18 @@ import { NV } from './functions/nv';
 import { RESISTIVITY } from './functions/resistivity';
 import { RESISTOR } from './functions/resistor';
 import { SHEETRES } from './functions/sheetres';
+import { LAYERSHEETRES } from './functions/layersheetres';
+import { IMPLANTSHEETRES } from './functions/implantsheetres';
+import { JUNCTIONDEPTH } from './functions/junctiondepth';
+import { FOURPOINT } from './functions/fourpoint';
+import { FOURPOINTRS } from './functions/fourpointrs';
+import { VANDERPAUW } from './functions/vanderpauw';
+import { HALLDENSITY } from './functions/halldensity';
+import { HALLMOBILITY } from './functions/hallmobility';
+import { RESISTORLENGTH } from './functions/resistorlength';
+import { RESISTORATTEMP } from './functions/resistorattemp';
+import { DOPINGRANGE } from './functions/dopingrange';
+import { RADIALVARIATION } from './functions/radialvariation';
 import type { FunctionSpec } from './types';
 
 export const CATALOG: readonly FunctionSpec[] = [
@@ -42,6 +54,18 @@ export const CATALOG: readonly FunctionSpec[] = [
   CURRENTDENSITY,
   SHEETRES,
   RESISTOR,
+  LAYERSHEETRES,
+  IMPLANTSHEETRES,
+  JUNCTIONDEPTH,
+  FOURPOINT,
+  FOURPOINTRS,
+  VANDERPAUW,
+  HALLDENSITY,
+  HALLMOBILITY,
+  RESISTORLENGTH,
+  RESISTORATTEMP,
+  DOPINGRANGE,
+  RADIALVARIATION,
   MODELS,
 ] as readonly FunctionSpec[];
 
@@ -55,5 +79,5 @@ export function findFunction(name: string): FunctionSpec | undefined {
 
 export { evaluate, toFailure, unwrapSingle } from './broadcast';
 export { NAMESPACE, qualifiedName } from './naming';
-export type { FunctionSpec, ParameterSpec, ElementwiseSpec, TableSpec } from './types';
+export type { FunctionSpec, ParameterSpec, ElementwiseSpec, TableSpec, TupleSpec } from './types';
 export * from './values';

@@ -16,6 +16,13 @@ export function describeValue(value: Plain): string {
   return String(value);
 }
 
+/**
+ * Numbers typed as text: decimal notation with an optional exponent, as a
+ * spreadsheet reads them. JavaScript's Number() alone would also accept
+ * 0x10, 0b11 and 0o17, which no spreadsheet reads as numbers.
+ */
+const DECIMAL_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
 /** Reads a number from a cell element: numbers as they are, numeric text trimmed; blanks give null. */
 function readNumber(name: string, value: Plain): number | null {
   if (value === null || (typeof value === 'string' && value.trim() === '')) return null;
@@ -23,7 +30,7 @@ function readNumber(name: string, value: Plain): number | null {
     if (!Number.isFinite(value)) throw new InputError(`${name} must be a finite number; got ${value}`);
     return value;
   }
-  if (typeof value === 'string') {
+  if (typeof value === 'string' && DECIMAL_TEXT.test(value.trim())) {
     const parsed = Number(value.trim());
     if (Number.isFinite(parsed)) return parsed;
   }

@@ -26,6 +26,15 @@ export interface ParameterSpec<T = unknown> {
    * value and what is allowed.
    */
   readonly parse: (value: Exclude<CellInput, { kind: 'failure' }>) => T;
+  /**
+   * Present only on a reducing argument, one that is consumed whole (a range
+   * reduced to one value) instead of broadcast: the catalog hands it every
+   * element of the argument, row by row, and the implementation receives what
+   * it returns. A reducing argument takes no part in the result's shape; an
+   * error element in it (or an InputError it throws) fails the whole result.
+   * `parse` still reads a value given on its own, as `reduce([value])` does.
+   */
+  readonly reduce?: (elements: readonly Exclude<CellInput, { kind: 'failure' }>[]) => T;
 }
 
 export type ParsedArguments<P extends readonly ParameterSpec[]> = {
@@ -69,7 +78,23 @@ export interface TableSpec extends SpecCommon {
   readonly table: () => Grid<CellOutput>;
 }
 
-export type FunctionSpec = ElementwiseSpec<AnyParameters> | TableSpec;
+/**
+ * A function whose every call gives a fixed-length row of numbers (e.g. a
+ * [low, high] window). Arguments are single values or columns: a column gives
+ * one result row per element, laid out as `columns`, so the result is
+ * (tallest argument) × columns.length. An argument with more than one column
+ * is refused with one error, because its values would have nowhere to go.
+ */
+export interface TupleSpec<P extends readonly ParameterSpec[] = AnyParameters> extends SpecCommon {
+  readonly kind: 'tuple';
+  readonly parameters: P;
+  /** What each result column holds, in order; its length is the width of every result row. */
+  readonly columns: readonly string[];
+  /** Returns exactly columns.length numbers. */
+  readonly compute: (...args: ParsedArguments<P>) => readonly number[];
+}
+
+export type FunctionSpec = ElementwiseSpec<AnyParameters> | TableSpec | TupleSpec<AnyParameters>;
 
 /** Declares an elementwise function with its argument types inferred. */
 export function elementwise<const P extends readonly ParameterSpec[]>(
@@ -80,4 +105,9 @@ export function elementwise<const P extends readonly ParameterSpec[]>(
 
 export function tableFunction(spec: Omit<TableSpec, 'kind' | 'parameters'>): TableSpec {
   return { kind: 'table', parameters: [], ...spec };
+}
+
+/** Declares a function that returns a fixed-length row per call, argument types inferred. */
+export function tupleFunction<const P extends readonly ParameterSpec[]>(spec: Omit<TupleSpec<P>, 'kind'>): TupleSpec<P> {
+  return { kind: 'tuple', ...spec };
 }

@@ -65,12 +65,20 @@ export function checkOutputAgainstInput(input: string, output: string, force: bo
  */
 export function writeFileAtomically(target: string, bytes: Uint8Array, replace: boolean): void {
   const temporary = join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
-  const fd = openSync(temporary, 'wx');
   try {
-    writeSync(fd, bytes);
-    fsyncSync(fd);
-  } finally {
-    closeSync(fd);
+    const fd = openSync(temporary, 'wx');
+    try {
+      // writeSync may write less than asked (a full disk, a signal): loop until every byte is down.
+      for (let written = 0; written < bytes.length; ) written += writeSync(fd, bytes, written, bytes.length - written);
+      fsyncSync(fd);
+    } finally {
+      closeSync(fd);
+    }
+  } catch (e) {
+    rmSync(temporary, { force: true });
+    // One line for the user (no space, no permission …) instead of an unexpected-failure report.
+    const code = (e as NodeJS.ErrnoException).code;
+    throw new CliFailure(`cannot write ${target}${code ? ` (${code})` : ''}: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`);
   }
   try {
     if (replace) {

@@ -7,6 +7,7 @@ import { WorkbookReadError, readWorkbookFile, recalculateWorkbook, workbookBytes
 import { CliFailure, EXIT_OK, type Output } from './failure';
 import { checkOutputAgainstInput, writeFileAtomically } from './files';
 import { formatError } from './format';
+import { phaseProgress } from './progress';
 
 /** How many cells with errors are listed before the rest are only counted. */
 const LISTED_PROBLEMS = 20;
@@ -49,13 +50,20 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   const target = checkOutputAgainstInput(input, options.output, options.force);
   let summary: RecalcSummary;
   let bytes: Buffer;
+  // A bar on stderr only when it is a terminal: long workbooks take a while.
+  const progress = phaseProgress(process.stderr, `recalc ${input}`, ['reading', 'calculating', 'writing']);
+  progress.start(0);
   try {
     const workbook = await readWorkbookFile(input);
+    progress.start(1);
     summary = recalculateWorkbook(workbook);
+    progress.start(2);
     bytes = await workbookBytes(workbook, summary);
   } catch (e) {
     if (e instanceof WorkbookReadError) throw new CliFailure(e.message);
     throw e;
+  } finally {
+    progress.finish();
   }
   // Checked again just before writing: the output may have appeared meanwhile.
   checkOutputAgainstInput(input, options.output, options.force);

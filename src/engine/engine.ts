@@ -5,7 +5,12 @@
  */
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import type { CellValue, ConfigParams, SerializedNamedExpression, Sheets } from 'hyperformula';
+import { engineFormula } from './formulaText';
 import { registerDriftFunctions } from './plugin';
+
+/** Rows and columns of an Excel worksheet (Microsoft, "Excel specifications and limits"). */
+export const EXCEL_MAX_ROWS = 1_048_576;
+export const EXCEL_MAX_COLUMNS = 16_384;
 
 /**
  * Engine settings. Each one is chosen to calculate as Excel does:
@@ -13,7 +18,9 @@ import { registerDriftFunctions } from './plugin';
  * - smartRounding off: results are exported exactly as computed, not rounded to 10 digits;
  * - evaluateNullToZero: a formula that refers to a blank cell shows 0;
  * - leapYear1900 with nullDate 1899-12-31: Excel's date serial numbers, 1900 leap-year quirk included;
- * - ignoreWhiteSpace 'any': non-breaking spaces between tokens are accepted, as Excel accepts them.
+ * - ignoreWhiteSpace 'any': non-breaking spaces between tokens are accepted, as Excel accepts them;
+ * - maxRows/maxColumns: Excel's grid, 1 048 576 rows × 16 384 columns (HyperFormula's own default
+ *   stops at 40 000 rows and throws for a longer sheet).
  */
 export const ENGINE_CONFIG: Readonly<Partial<ConfigParams>> = {
   licenseKey: 'gpl-v3',
@@ -23,6 +30,8 @@ export const ENGINE_CONFIG: Readonly<Partial<ConfigParams>> = {
   leapYear1900: true,
   nullDate: { year: 1899, month: 12, day: 31 },
   ignoreWhiteSpace: 'any',
+  maxRows: EXCEL_MAX_ROWS,
+  maxColumns: EXCEL_MAX_COLUMNS,
 };
 
 /**
@@ -85,8 +94,8 @@ export function isResultError(value: ResultElement): value is ResultError {
  * @example evaluateFormula('=DRIFT.SHEETRES(1,10)') // 1000
  */
 export function evaluateFormula(formula: string): FormulaResult {
-  const trimmed = formula.trim();
-  const text = trimmed.startsWith('=') ? trimmed : `=${trimmed}`;
+  // Typed text goes through the same translation as formulas read from files (1E16, _xldudf_ names).
+  const text = engineFormula(formula.trim());
   const engine = createEngine();
   try {
     if (text === '=' || !engine.validateFormula(text)) {

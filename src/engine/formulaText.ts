@@ -14,8 +14,18 @@ const BUILTIN_PREFIX = /_xlfn\.|_xlws\.|_xlpm\./gi;
 /** An add-in function of the DRIFT namespace as Excel stores it. */
 const DRIFT_ADDIN_NAME = /_xldudf_DRIFT_([A-Z0-9]+)(?=\s*\()/gi;
 
+/**
+ * A number literal with an upper-case exponent (1E16, 2.5E-3, 1E+16), as Excel
+ * writes and users type them; HyperFormula reads only the lower-case form.
+ * The look-behind keeps names and references such as R1E1 or LOG10E2 intact.
+ */
+const UPPER_CASE_EXPONENT = /(?<![A-Za-z_.\d])(\d+(?:\.\d*)?|\.\d+)E([+-]?\d)/g;
+
 function translateCode(code: string): string {
-  return code.replace(BUILTIN_PREFIX, '').replace(DRIFT_ADDIN_NAME, (_match, name: string) => `DRIFT.${name.toUpperCase()}`);
+  return code
+    .replace(BUILTIN_PREFIX, '')
+    .replace(DRIFT_ADDIN_NAME, (_match, name: string) => `DRIFT.${name.toUpperCase()}`)
+    .replace(UPPER_CASE_EXPONENT, '$1e$2');
 }
 
 /** Splits formula text into code and quoted parts ("text" literals, 'sheet names'); quotes double to escape. */

@@ -72,9 +72,10 @@ export class DriftFunctionPlugin extends FunctionPlugin {
     const argumentState = arrayState(state);
     const args = ast.args.map((argument) => toArgumentInput(this.evaluateAst(argument, argumentState)));
     const grid = evaluate(spec, args);
-    const predicted = this.predictDriftResultSize(ast, state);
     const rows = grid.length;
     const columns = grid[0].length;
+    // A single value always fits the predicted area (at least 1×1); only larger results are checked.
+    const predicted = rows === 1 && columns === 1 ? ArraySize.scalar() : this.predictDriftResultSize(ast, state);
     if (rows > predicted.height || columns > predicted.width) {
       // The spill area was fixed when the formula was read; a larger result cannot be shown in it.
       return new CellError(
@@ -99,10 +100,16 @@ export class DriftFunctionPlugin extends FunctionPlugin {
     const argumentState = arrayState(state);
     let width = 1;
     let height = 1;
-    for (const argument of ast.args as Ast[]) {
+    (ast.args as Ast[]).forEach((argument, index) => {
+      // A reducing argument is consumed whole and does not shape the result.
+      if (spec.parameters[index]?.reduce) return;
       const size = this.arraySizeForAst(argument, argumentState);
       width = Math.max(width, size.width);
       height = Math.max(height, size.height);
+    });
+    if (spec.kind === 'tuple') {
+      // One row of fixed width per argument row; wider arguments get the catalog's single error.
+      return width > 1 ? ArraySize.scalar() : new ArraySize(spec.columns.length, height);
     }
     return new ArraySize(width, height);
   }

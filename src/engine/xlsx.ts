@@ -11,13 +11,14 @@
  * before recalculating. A spill that would cover a user's cell is not
  * written over it: the anchor shows #SPILL! and the user's cell keeps its value.
  */
-import { readFile } from 'node:fs/promises';
+import { readFile, stat } from 'node:fs/promises';
 import ExcelJS from 'exceljs';
 import { CellError, CellType, DetailedCellError, ErrorType } from 'hyperformula';
 import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, SimpleCellRange } from 'hyperformula';
 import { createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
 import { fileErrorText } from './errorTypes';
+import { MAX_PACKAGE_BYTES, PackageRejected, checkPackage } from './packageCheck';
 import { engineContent, fileValue, type FileValue, type StoredFormula } from './workbookCells';
 
 /** A file that cannot be read as a workbook; the message is one line for the user. */
@@ -101,11 +102,20 @@ function parseRange(ref: string): Box | undefined {
 }
 
 /**
- * Reads an .xlsx workbook from bytes.
+ * Reads an .xlsx workbook from bytes, after checking the package's structure
+ * and size (packageCheck.ts: limits on file size, expanded size and cells).
  *
- * @throws WorkbookReadError when the bytes are not an .xlsx package
+ * @throws WorkbookReadError when the bytes are not an .xlsx package or exceed a limit
  */
 export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
+  try {
+    checkPackage(bytes);
+  } catch (e) {
+    if (e instanceof PackageRejected) {
+      throw new WorkbookReadError(e.reason === 'limit' ? `too large to recalculate (${e.message})` : `not an .xlsx workbook (${e.message})`);
+    }
+    throw e;
+  }
   const workbook = new ExcelJS.Workbook();
   try {
     await workbook.xlsx.load(bytes as unknown as ExcelJS.Buffer);
@@ -127,8 +137,14 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
 export async function readWorkbookFile(path: string): Promise<ExcelJS.Workbook> {
   let bytes: Buffer;
   try {
+    // Refused before reading: the file would be held in memory whole.
+    const { size } = await stat(path);
+    if (size > MAX_PACKAGE_BYTES) {
+      throw new WorkbookReadError(`${path}: too large to recalculate (it is ${(size / 2 ** 20).toFixed(1)} MB, more than the ${MAX_PACKAGE_BYTES / 2 ** 20} MB Driftcell reads)`);
+    }
     bytes = await readFile(path);
   } catch (e) {
+    if (e instanceof WorkbookReadError) throw e;
     const code = (e as NodeJS.ErrnoException).code;
     if (code === 'ENOENT') throw new WorkbookReadError(`${path}: no such file`);
     if (code === 'EISDIR') throw new WorkbookReadError(`${path} is a folder, not a workbook`);

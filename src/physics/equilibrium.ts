@@ -28,7 +28,7 @@ import { bandEdges, type BandEdges } from './bands/bandEdges';
 import { DEFAULT_CARRIER_STATISTICS } from './bands/statistics';
 import type { Dopant, Material } from './materials/types';
 import { checkTemperature } from './materials/temperature';
-import { ionizationState, type IonizationState } from './ionization';
+import { ionizationState, prepareIonization, preparedIonizationState, type IonizationState, type PreparedIonization } from './ionization';
 import { findRoot } from './solve';
 
 /** One dopant species and its total (chemical) density. */
@@ -113,6 +113,50 @@ export function solveEquilibrium(
   dopants: readonly DopantDensity[],
   intrinsicModel?: string,
 ): Equilibrium {
+  const last = lastSolve;
+  if (last !== undefined && sameProblem(last, material, temperature, dopants, intrinsicModel)) return { ...last.result };
+  const result = solveNeutrality(material, temperature, dopants, intrinsicModel);
+  lastSolve = { material, temperature, dopants: dopants.map((d) => ({ dopant: d.dopant, density: d.density })), intrinsicModel, result };
+  return { ...result };
+}
+
+/**
+ * The most recent problem and its solution. At 300 K a conductivity asks for
+ * the same solve twice in a row (the carriers, then the mobility fits'
+ * full-ionization reference at 300 K); remembering one solve answers the
+ * second without repeating it. The solution is a pure function of the inputs
+ * compared here, so results are identical with or without it.
+ */
+interface RememberedSolve {
+  readonly material: Material;
+  readonly temperature: number;
+  readonly dopants: readonly DopantDensity[];
+  readonly intrinsicModel: string | undefined;
+  readonly result: Equilibrium;
+}
+let lastSolve: RememberedSolve | undefined;
+
+function sameProblem(
+  last: RememberedSolve,
+  material: Material,
+  temperature: number,
+  dopants: readonly DopantDensity[],
+  intrinsicModel: string | undefined,
+): boolean {
+  if (last.material !== material || last.temperature !== temperature || last.intrinsicModel !== intrinsicModel) return false;
+  if (last.dopants.length !== dopants.length) return false;
+  for (let i = 0; i < dopants.length; i++) {
+    if (last.dopants[i].dopant !== dopants[i].dopant || !Object.is(last.dopants[i].density, dopants[i].density)) return false;
+  }
+  return true;
+}
+
+function solveNeutrality(
+  material: Material,
+  temperature: number,
+  dopants: readonly DopantDensity[],
+  intrinsicModel?: string,
+): Equilibrium {
   checkTemperature(material, temperature);
   checkDopants(material, dopants);
   const edges = bandEdges(material, temperature, intrinsicModel);
@@ -125,9 +169,13 @@ export function solveEquilibrium(
     else totalAcceptors += density;
   }
   const active = dopants.filter((entry) => entry.density > 0);
+  // The density-dependent parts of each species' ionization, computed once per solve, not once per step.
+  const prepared = new Map<DopantDensity, PreparedIonization>(
+    active.map((entry) => [entry, prepareIonization(entry.dopant, entry.density, temperature)]),
+  );
 
   const state = (entry: DopantDensity, eta: number): IonizationState =>
-    ionizationState(entry.dopant, entry.density, temperature, bandFermiLevel(entry.dopant, edges, eta));
+    preparedIonizationState(prepared.get(entry) as PreparedIonization, bandFermiLevel(entry.dopant, edges, eta));
 
   const charge = (eta: number): number => {
     let fullyIonized = 0; // ±N of mostly ionised species: exact, cancels exactly under compensation

@@ -40,5 +40,42 @@ export { f723Resistivity, f723Density, type F723Species } from './astmF723';
 // Geometry of uniform conductors.
 export { CM_PER_UM, sheetResistance, resistorValue } from './geometry';
 
+// Layers: diffusion and implant profiles, junctions, layer sheet resistance.
+export {
+  erfc,
+  erfcinv,
+  PROFILE_CODES,
+  DEFAULT_PROFILE,
+  resolveProfile,
+  junctionDepth,
+  diffusedLayerSheetResistance,
+  implantedLayerSheetResistance,
+  diffusedLayerConductance,
+  implantedLayerConductance,
+  LAYER_INTEGRATION,
+  type ProfileCode,
+  type DiffusedLayer,
+  type ImplantedLayer,
+  type LayerConductance,
+} from './layers';
+
+// Measurement analysis and resistor layout.
+export {
+  THIN_LAYER_FACTOR,
+  MINIMUM_DIAMETER_RATIO,
+  valdesDivisor,
+  thicknessFactor,
+  circularSliceFactor,
+  fourPointResistivity,
+  fourPointSheetResistance,
+  vanDerPauwSheetResistance,
+  hallDensity,
+  hallMobility,
+  radialVariation,
+  dopingWindow,
+  type ProbeGeometry,
+} from './measurement';
+export { TYPICAL_CONTACT_HEAD_SQUARES, resistorLength, resistorAtTemperature, type TemperatureCoefficients } from './resistorDesign';
+
 // Model registry.
 export { MODEL_REGISTRY, modelInfo, type ModelInfo } from './models';

@@ -60,6 +60,36 @@ function formatNumber(value: number): string {
 }
 
 /** Maximum of g on [a, b] by golden-section search, for a unimodal g. */
+/**
+ * ln ρ at the scan's grid points, by conditions (material, dopant,
+ * temperature, counter-doping, model); NaN where not yet computed. The grid
+ * depends on the counter-doping only, so the values are reused exactly by
+ * every target under the same conditions. Cleared when full.
+ */
+const SCAN_CACHE_SIZE = 64;
+const scanCaches = new WeakMap<object, WeakMap<object, Map<string, Float64Array>>>();
+
+function scanCache(sample: Omit<Sample, 'density'>, code: string, steps: number): Float64Array {
+  let byDopant = scanCaches.get(sample.material);
+  if (byDopant === undefined) {
+    byDopant = new WeakMap();
+    scanCaches.set(sample.material, byDopant);
+  }
+  let byConditions = byDopant.get(sample.dopant);
+  if (byConditions === undefined) {
+    byConditions = new Map();
+    byDopant.set(sample.dopant, byConditions);
+  }
+  const key = `${sample.temperature}|${sample.counterDensity}|${code}`;
+  let values = byConditions.get(key);
+  if (values === undefined || values.length !== steps + 1) {
+    if (byConditions.size >= SCAN_CACHE_SIZE) byConditions.clear();
+    values = new Float64Array(steps + 1).fill(NaN);
+    byConditions.set(key, values);
+  }
+  return values;
+}
+
 function locateMaximum(g: (u: number) => number, a: number, b: number): { u: number; value: number } {
   const ratio = (Math.sqrt(5) - 1) / 2;
   let left = a;
@@ -136,16 +166,24 @@ export function dopingForResistivity(
   const steps = Math.max(2, Math.ceil((hi - lo) / (GRID_STEP_DECADES * Math.LN10)));
   const grid: number[] = [];
   const values: number[] = [];
+  // Lowest interval where ρ falls through the target. The scan runs upwards and
+  // stops at the first such interval: the points above it cannot change the
+  // answer, and each costs a full forward evaluation.
+  // ln ρ at the grid points depends on the conditions only, not on the target:
+  // a column of targets under the same conditions scans once.
+  const scanned = scanCache(sample, code, steps);
   for (let i = 0; i <= steps; i++) {
     const u = i === steps ? hi : lo + ((hi - lo) * i) / steps;
     grid.push(u);
-    values.push(excess(u));
-  }
-
-  // Lowest interval where ρ falls through the target.
-  for (let i = 0; i < steps; i++) {
-    if (values[i] >= 0 && values[i + 1] < 0) {
-      return values[i] === 0 ? { density: densityOf(grid[i]), iterations: 0 } : solveBetween(grid[i], grid[i + 1]);
+    let logResistivity = scanned[i];
+    if (Number.isNaN(logResistivity)) {
+      logResistivity = Math.log(resistivity({ ...sample, density: densityOf(u) }, code));
+      scanned[i] = logResistivity;
+    }
+    // The same operations as excess(u), so the values are identical.
+    values.push(logResistivity - logTarget);
+    if (i > 0 && values[i - 1] >= 0 && values[i] < 0) {
+      return values[i - 1] === 0 ? { density: densityOf(grid[i - 1]), iterations: 0 } : solveBetween(grid[i - 1], grid[i]);
     }
   }
   if (values[steps] === 0) return { density: densityOf(grid[steps]), iterations: 0 };

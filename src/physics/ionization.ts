@@ -92,12 +92,50 @@ export function ionizationState(
   temperature: number,
   bandFermiLevel: number,
 ): IonizationState {
+  return preparedIonizationState(prepareIonization(dopant, density, temperature), bandFermiLevel);
+}
+
+/** The parts of ionizationState that do not depend on the Fermi level. */
+export interface PreparedIonization {
+  /** ΔE(N)/kT, the level's depth below its band edge in units of kT. */
+  readonly levelDepth: number;
+  readonly degeneracy: number;
+  /** b(N) and 1 − b(N), as localizedFraction gives them. */
+  readonly localized: number;
+  readonly delocalized: number;
+}
+
+/**
+ * Computes once what ionizationState needs besides the Fermi level, so that a
+ * solver trying many Fermi levels does not repeat the density-dependent
+ * powers at every step. preparedIonizationState(prepareIonization(d, N, T), η)
+ * equals ionizationState(d, N, T, η) exactly (same operations, same order).
+ *
+ * @param dopant the dopant species
+ * @param density its density, cm⁻³
+ * @param temperature K (finite, > 0)
+ * @returns level depth in kT, degeneracy, localised and delocalised fractions
+ * @example preparedIonizationState(prepareIonization(phosphorus, 1e16, 300), -7.96).ionized // ≈ 0.996
+ */
+export function prepareIonization(dopant: Dopant, density: number, temperature: number): PreparedIonization {
   const kT = thermalVoltage(temperature);
   const levelDepth = dopantIonizationEnergy(dopant, density) / kT;
-  const occupancy = levelOccupancy(-bandFermiLevel - levelDepth, dopant.degeneracy);
   const split = localizedFraction(dopant, density);
+  return { levelDepth, degeneracy: dopant.degeneracy, localized: split.localized, delocalized: split.delocalized };
+}
+
+/**
+ * Ionised and neutral fractions from prepared parts and a Fermi level.
+ *
+ * @param prepared from prepareIonization
+ * @param bandFermiLevel as for ionizationState
+ * @returns ionised and neutral fractions
+ * @example preparedIonizationState(prepareIonization(phosphorus, 1e16, 300), -7.96).neutral // ≈ 0.004
+ */
+export function preparedIonizationState(prepared: PreparedIonization, bandFermiLevel: number): IonizationState {
+  const occupancy = levelOccupancy(-bandFermiLevel - prepared.levelDepth, prepared.degeneracy);
   return {
-    ionized: split.delocalized + split.localized * occupancy.empty,
-    neutral: split.localized * occupancy.occupied,
+    ionized: prepared.delocalized + prepared.localized * occupancy.empty,
+    neutral: prepared.localized * occupancy.occupied,
   };
 }

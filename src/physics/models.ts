@@ -11,6 +11,8 @@ import { MASETTI_SOURCE } from './mobility/masetti';
 import { ARORA_SOURCE, ARORA_FITTED_TEMPERATURES } from './mobility/arora';
 import { CAUGHEY_THOMAS_SOURCE } from './mobility/caugheyThomas';
 import { F723_SOURCE } from './astmF723';
+import { LAYER_MODELS } from './layers/modelInfo';
+import { MEASUREMENT_MODELS } from './measurement/modelInfo';
 
 /** One model as DRIFT.MODELS() lists it. */
 export interface ModelInfo {
@@ -75,7 +77,7 @@ const TRANSPORT_MODELS: readonly ModelInfo[] = [
 ];
 
 /** Every model code: ni, band gap, densities of states, statistics, ionization, mobility, ASTM F723. */
-export const MODEL_REGISTRY: readonly ModelInfo[] = [...BAND_MODELS.map((entry) => ({ ...entry })), ...TRANSPORT_MODELS];
+export const MODEL_REGISTRY: readonly ModelInfo[] = [...BAND_MODELS.map((entry) => ({ ...entry })), ...TRANSPORT_MODELS, ...LAYER_MODELS.map((entry) => ({ ...entry })), ...MEASUREMENT_MODELS.map((entry) => ({ ...entry }))];
 
 /**
  * Looks a model up by code, case-insensitively.

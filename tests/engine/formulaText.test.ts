@@ -15,3 +15,12 @@ describe('storedFormula', () => {
     expect(engineFormula(storedFormula(text))).toBe(text);
   });
 });
+
+// Excel writes and users type exponents in upper case (1E+16); HyperFormula
+// reads only lower case (found by the benchmark work).
+describe('upper-case exponents', () => {
+  it('are lowered in number literals only', () => {
+    expect(engineFormula('DRIFT.RESISTIVITY(1E16,"B")')).toBe('=DRIFT.RESISTIVITY(1e16,"B")');
+    expect(engineFormula('2.5E-3*A1+.5E+2-R1E1+"1E5"')).toBe('=2.5e-3*A1+.5e+2-R1E1+"1E5"');
+  });
+});

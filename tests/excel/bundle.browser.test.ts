@@ -9,18 +9,17 @@
  *
  * Needs `npm run build` first (npm test runs it). Never downloads a browser.
  */
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'fs';
-import os from 'os';
+import { readFileSync } from 'fs';
 import path from 'path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { CATALOG, evaluate } from '../../src/catalog';
 import type { FunctionSpec } from '../../src/catalog/types';
 import { isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog/values';
 import { startServer, staticRequestHandler, type RunningServer } from '../../src/excel/devServer';
 import { ADDIN_DIR, requireAddinBuild } from './support/build';
+import { launchLocalBrowser, type LocalBrowser } from './support/localBrowser';
 import { excelShapedArgs, parseLiteralCall, type LiteralCall } from './support/formulaArgs';
 
-const CHROMIUM = '/usr/bin/chromium';
 const HOST_PAGE = '/__test__/host.html';
 /** A page that loads only the functions bundle: no Office.js, no task pane. */
 const HOST_HTML = '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>functions host</title></head><body><script src="/functions.js"></script></body></html>';
@@ -116,14 +115,13 @@ describe('the production functions bundle in Chromium', () => {
   let server: RunningServer;
   let context: BrowserContext;
   let page: Page;
-  let profile: string;
-  const requested: string[] = [];
-  const blocked: string[] = [];
+  let browser: LocalBrowser;
+  let requested: string[];
+  let blocked: string[];
   const pageErrors: string[] = [];
 
   beforeAll(async () => {
     requireAddinBuild();
-    if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium (sudo apt-get install chromium); this test never downloads a browser`);
     const files = staticRequestHandler(ADDIN_DIR);
     server = await startServer((req, res) => {
       if (req.url === HOST_PAGE) {
@@ -133,19 +131,10 @@ describe('the production functions bundle in Chromium', () => {
       }
       files(req, res);
     }, { port: 0, host: '127.0.0.1' });
-    profile = mkdtempSync(path.join(os.tmpdir(), 'driftcell-chromium-'));
-    context = await chromium.launchPersistentContext(profile, {
-      executablePath: CHROMIUM,
-      headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
-    });
-    context.on('request', (request) => requested.push(request.url()));
-    await context.route('**/*', (route) => {
-      const url = route.request().url();
-      if (url.startsWith(`${server.url}/`)) return route.continue();
-      blocked.push(url);
-      return route.abort();
-    });
+    browser = await launchLocalBrowser(server.url);
+    context = browser.context;
+    requested = browser.requested;
+    blocked = browser.blocked;
     await context.addInitScript(installFakeRuntime);
     page = context.pages()[0] ?? (await context.newPage());
     page.on('pageerror', (error) => pageErrors.push(error.message));
@@ -153,9 +142,8 @@ describe('the production functions bundle in Chromium', () => {
   });
 
   afterAll(async () => {
-    await context?.close();
+    await browser?.close();
     await server?.close();
-    if (profile) rmSync(profile, { recursive: true, force: true });
   });
 
   it('loads without a page error and binds every id in functions.json', async () => {

@@ -139,8 +139,12 @@ function resultBlock(spec: FunctionSpec): string {
   const shape =
     spec.kind === 'table'
       ? 'It spills a table.'
-      : 'Given ranges or arrays, it spills one result per element, broadcasting as Excel’s own functions do; a bad element gets an error with a message, and the other elements still compute.';
-  return `<p>${escapeHtml(spec.result.description)}${unit}. ${shape}</p>`;
+      : spec.kind === 'tuple'
+        ? `It spills one row of ${spec.columns.length} values: ${spec.columns.join(', ')}. Given columns instead of single values, it spills one such row per element; a bad element gets an error with a message across its row, and the other rows still compute.`
+        : 'Given ranges or arrays, it spills one result per element, broadcasting as Excel’s own functions do; a bad element gets an error with a message, and the other elements still compute.';
+  const reducing = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.reduce).map((p) => p.name);
+  const whole = reducing.length === 0 ? '' : ` ${reducing.join(', ')} is taken whole, as one argument: a range there is reduced to one value, not broadcast.`;
+  return `<p>${escapeHtml(spec.result.description)}${unit}. ${escapeHtml(shape + whole)}</p>`;
 }
 
 function examplesBlock(spec: FunctionSpec, linked: ReadonlySet<string>): string {

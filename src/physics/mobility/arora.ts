@@ -72,13 +72,42 @@ export const ARORA_FITTED_TEMPERATURES = { min: 250, max: 500 } as const;
  * @example aroraMobility('electron', 1e16, 300) // ≈ 1218
  */
 export function aroraMobility(carrier: Carrier, totalDensity: number, temperature: number): number {
+  const { minimum, amplitude, referenceDensity, alpha } = temperatureCoefficients(carrier, temperature);
+  return minimum + amplitude / (1 + Math.pow(totalDensity / referenceDensity, alpha));
+}
+
+/** Arora's coefficients at one temperature (the four power laws of the table). */
+interface AroraCoefficients {
+  readonly minimum: number;
+  readonly amplitude: number;
+  readonly referenceDensity: number;
+  readonly alpha: number;
+}
+
+/**
+ * Coefficients by carrier and temperature. They depend on temperature only,
+ * yet cost four powers, while a sheet or a doping × temperature grid uses few
+ * distinct temperatures; remembering them leaves each mobility one power. The
+ * values are the ones computed below, so results are identical. Cleared when full.
+ */
+const COEFFICIENT_CACHE_SIZE = 1024;
+const coefficientCache: Record<Carrier, Map<number, AroraCoefficients>> = { electron: new Map(), hole: new Map() };
+
+function temperatureCoefficients(carrier: Carrier, temperature: number): AroraCoefficients {
+  const cache = coefficientCache[carrier];
+  const cached = cache.get(temperature);
+  if (cached !== undefined) return cached;
   const p = ARORA_TABLE[carrier];
   const reduced = temperature / ARORA_REFERENCE_TEMPERATURE;
-  const minimum = p.minimum.value * Math.pow(reduced, p.minimum.exponent);
-  const amplitude = p.amplitude.value * Math.pow(temperature, p.amplitude.exponent);
-  const referenceDensity = p.referenceDensity.value * Math.pow(reduced, p.referenceDensity.exponent);
-  const alpha = p.alpha.value * Math.pow(reduced, p.alpha.exponent);
-  return minimum + amplitude / (1 + Math.pow(totalDensity / referenceDensity, alpha));
+  const coefficients: AroraCoefficients = {
+    minimum: p.minimum.value * Math.pow(reduced, p.minimum.exponent),
+    amplitude: p.amplitude.value * Math.pow(temperature, p.amplitude.exponent),
+    referenceDensity: p.referenceDensity.value * Math.pow(reduced, p.referenceDensity.exponent),
+    alpha: p.alpha.value * Math.pow(reduced, p.alpha.exponent),
+  };
+  if (cache.size >= COEFFICIENT_CACHE_SIZE) cache.clear();
+  cache.set(temperature, coefficients);
+  return coefficients;
 }
 
 /**

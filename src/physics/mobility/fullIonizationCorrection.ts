@@ -68,6 +68,57 @@ export function netMajorityCarrier(sample: Sample): Carrier | undefined {
 export function fullIonizationCorrection(sample: Sample): number {
   const majority = netMajorityCarrier(sample);
   if (majority === undefined) return 1;
+  const cache = correctionCache(sample.material, sample.dopant);
+  let byCounter = cache.byDensity.get(sample.density);
+  const cached = byCounter?.get(sample.counterDensity);
+  if (cached !== undefined) return cached;
+  const factor = computeCorrection(sample, majority);
+  if (cache.entries >= CORRECTION_CACHE_SIZE) {
+    cache.byDensity.clear();
+    cache.entries = 0;
+    byCounter = undefined;
+  }
+  if (byCounter === undefined) {
+    byCounter = new Map();
+    cache.byDensity.set(sample.density, byCounter);
+  }
+  byCounter.set(sample.counterDensity, factor);
+  cache.entries++;
+  return factor;
+}
+
+/**
+ * Most recent factors, per material and dopant, keyed by density and
+ * counter-density. The factor does not depend on the sample's temperature,
+ * but it costs a neutrality solve at 300 K; a doping × temperature grid or a
+ * column of repeated dopings asks for the same factor many times. The value is
+ * the one computeCorrection returns, so results are identical with or without
+ * the cache. Cleared when full, which keeps it small and needs no bookkeeping.
+ */
+const CORRECTION_CACHE_SIZE = 4096;
+/** Factors by density, then counter-density (numbers as keys: no string formatting per call). */
+interface CorrectionCache {
+  readonly byDensity: Map<number, Map<number, number>>;
+  entries: number;
+}
+const correctionCaches = new WeakMap<object, WeakMap<object, CorrectionCache>>();
+
+function correctionCache(material: object, dopant: object): CorrectionCache {
+  let byDopant = correctionCaches.get(material);
+  if (byDopant === undefined) {
+    byDopant = new WeakMap();
+    correctionCaches.set(material, byDopant);
+  }
+  let cache = byDopant.get(dopant);
+  if (cache === undefined) {
+    cache = { byDensity: new Map(), entries: 0 };
+    byDopant.set(dopant, cache);
+  }
+  return cache;
+}
+
+/** The factor itself, from a 300 K neutrality solve (see the module comment). */
+function computeCorrection(sample: Sample, majority: Carrier): number {
   const netDoping = Math.abs(sample.density - sample.counterDensity);
   const reference = solveEquilibrium(
     sample.material,

@@ -9,21 +9,11 @@
  */
 import { resistivity } from '../../../src/physics/transport';
 import { siliconSample } from '../transportSamples';
+import { IRVIN_BULK_READINGS, READ_OFF_TOLERANCE } from './data/irvin1962Bulk';
 
-// [density cm⁻³, n-type ρ Ω·cm, p-type ρ Ω·cm], readings from memory.
-const IRVIN_READINGS: ReadonlyArray<[number, number, number]> = [
-  [1e14, 45, 130],
-  [1e15, 4.5, 13],
-  [1e16, 0.5, 1.4],
-  [1e17, 0.09, 0.2],
-  [1e18, 0.025, 0.045],
-  [1e19, 0.006, 0.009],
-  [1e20, 0.0008, 0.0012],
-];
-const READ_OFF_TOLERANCE = 0.2;
 
 describe('default resistivity at 300 K vs Irvin (1962) curves (readings from memory, ±20 %)', () => {
-  it.each(IRVIN_READINGS)('at %s cm⁻³: n-type (P) ≈ %s Ω·cm, p-type (B) ≈ %s Ω·cm', (density, nType, pType) => {
+  it.each(IRVIN_BULK_READINGS)('at %s cm⁻³: n-type (P) ≈ %s Ω·cm, p-type (B) ≈ %s Ω·cm', (density, nType, pType) => {
     expect(Math.abs(resistivity(siliconSample('P', density)) / nType - 1)).toBeLessThan(READ_OFF_TOLERANCE);
     expect(Math.abs(resistivity(siliconSample('B', density)) / pType - 1)).toBeLessThan(READ_OFF_TOLERANCE);
   });

@@ -1,0 +1,33 @@
+import { dopingWindow, resolveDopant, SILICON } from '../../physics';
+import { dopant, temperature } from '../common';
+import { requiredNumber } from '../parameters';
+import { tupleFunction } from '../types';
+
+function resistivityBound(name: string, what: string) {
+  return requiredNumber({ name, unit: 'Ω·cm', description: `${what} of the certificate's window, in Ω·cm, > 0.`, min: 0, minExclusive: true });
+}
+
+export const DOPINGRANGE = tupleFunction({
+  name: 'DOPINGRANGE',
+  summary: 'Doping window [at ρmax, at ρmin] of a wafer certificate’s resistivity window, spilled as one row, in cm⁻³.',
+  help: `Converts a resistivity window, as a wafer certificate states it, into the matching window of dopant density. It spills one row of two values: the density at resistivity_max (the lower density) and the density at resistivity_min (the higher one), so the row reads low to high. Each value is exactly what DRIFT.DOPING gives for that resistivity with the default model, in silicon, without counter-doping.
+
+Given columns of windows, it spills one row per window. resistivity_min above resistivity_max is an error.
+
+Cautions: a certificate's resistivity is measured (usually by four-point probe at the wafer centre) with its own tolerance; the doping window inherits the measurement's uncertainty and the model's, and it says nothing about radial variation (see DRIFT.RADIALVARIATION).`,
+  result: { unit: 'cm⁻³', description: 'Dopant density window [at ρmax, at ρmin]' },
+  columns: ['doping at resistivity_max', 'doping at resistivity_min'],
+  parameters: [
+    resistivityBound('resistivity_min', 'Low end'),
+    resistivityBound('resistivity_max', 'High end'),
+    dopant,
+    temperature,
+  ] as const,
+  examples: [
+    { formula: '=DRIFT.DOPINGRANGE(8,12,"B")', note: 'a 8–12 Ω·cm boron wafer: two densities in a row' },
+    { formula: '=DRIFT.DOPINGRANGE({1;0.005},{3;0.02},{"P";"Sb"})', note: 'two certificates, one window per row' },
+  ],
+  models: ['masetti'],
+  compute: (rhoMin, rhoMax, dopantCode, temperatureK) =>
+    dopingWindow(rhoMin, rhoMax, { material: SILICON, temperature: temperatureK, dopant: resolveDopant(SILICON, dopantCode), counterDensity: 0 }),
+});

@@ -1,0 +1,32 @@
+/**
+ * Doping window of a wafer certificate: the resistivity window [ρmin, ρmax]
+ * mapped through the inverse of the transport model. Higher resistivity means
+ * lighter doping, so the window comes out as [N(ρmax), N(ρmin)], low to high.
+ */
+import { PhysicsDomainError } from '../errors';
+import { dopingForResistivity } from '../inverse';
+import type { Sample } from '../sample';
+
+/**
+ * Dopant densities at the two ends of a resistivity window.
+ *
+ * @param resistivityMin - ρmin in Ω·cm, > 0
+ * @param resistivityMax - ρmax in Ω·cm, ≥ ρmin
+ * @param sample - material, temperature, dopant and counter-doping
+ * @param model - resistivity model code (blank: the default)
+ * @returns [N at ρmax, N at ρmin] in cm⁻³
+ * @example dopingWindow(8, 12, siliconBoronAt300K) // ≈ [1.1e15, 1.7e15]
+ */
+export function dopingWindow(
+  resistivityMin: number,
+  resistivityMax: number,
+  sample: Omit<Sample, 'density'>,
+  model?: string,
+): readonly [number, number] {
+  if (resistivityMin > resistivityMax) {
+    throw new PhysicsDomainError(
+      `resistivity_min ${resistivityMin} Ω·cm is above resistivity_max ${resistivityMax} Ω·cm: give the window low end first`,
+    );
+  }
+  return [dopingForResistivity(resistivityMax, sample, model).density, dopingForResistivity(resistivityMin, sample, model).density];
+}
