@@ -59,22 +59,8 @@ export {
   type LayerConductance,
 } from './layers';
 
-// Measurement analysis and resistor layout.
-export {
-  THIN_LAYER_FACTOR,
-  MINIMUM_DIAMETER_RATIO,
-  valdesDivisor,
-  thicknessFactor,
-  circularSliceFactor,
-  fourPointResistivity,
-  fourPointSheetResistance,
-  vanDerPauwSheetResistance,
-  hallDensity,
-  hallMobility,
-  radialVariation,
-  dopingWindow,
-  type ProbeGeometry,
-} from './measurement';
+// Measurement analysis (the barrel of src/physics/measurement).
+export * from './measurement';
 export { TYPICAL_CONTACT_HEAD_SQUARES, resistorLength, resistorAtTemperature, type TemperatureCoefficients } from './resistorDesign';
 
 // Model registry.

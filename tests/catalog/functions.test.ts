@@ -4,20 +4,9 @@
  */
 import { CATALOG, evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
 import { ELEMENTARY_CHARGE, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
+import { message, value } from './support/call';
 
-function value(name: string, ...args: ArgumentInput[]): number {
-  const spec = findFunction(name);
-  if (!spec) throw new Error(`no ${name}`);
-  const result = evaluate(spec, args)[0][0];
-  if (typeof result !== 'number') throw new Error(`${name} gave ${JSON.stringify(result)}`);
-  return result;
-}
 
-function message(name: string, ...args: ArgumentInput[]): string {
-  const result: CellOutput = evaluate(findFunction(name)!, args)[0][0];
-  if (!isFailure(result)) throw new Error(`${name} gave ${JSON.stringify(result)}, not an error`);
-  return `${result.code} ${result.message}`;
-}
 
 describe('identities between catalog functions (definitions: common practice, no source)', () => {
   const cases: [number, string, number, number][] = [

@@ -5,18 +5,9 @@
  */
 import { evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
 import { SILICON, diffusedLayerSheetResistance, implantedLayerSheetResistance, resolveDopant } from '../../src/physics';
+import { message, value } from './support/call';
 
-function value(name: string, ...args: ArgumentInput[]): number {
-  const result = evaluate(findFunction(name)!, args)[0][0];
-  if (typeof result !== 'number') throw new Error(`${name} gave ${JSON.stringify(result)}`);
-  return result;
-}
 
-function message(name: string, ...args: ArgumentInput[]): string {
-  const result: CellOutput = evaluate(findFunction(name)!, args)[0][0];
-  if (!isFailure(result)) throw new Error(`${name} gave ${JSON.stringify(result)}, not an error`);
-  return `${result.code} ${result.message}`;
-}
 
 describe('DRIFT.LAYERSHEETRES', () => {
   it('computes what the core computes, gaussian and 300 K by default, profile codes case-insensitive', () => {

@@ -3,6 +3,7 @@
  * identities with other catalog functions, defaults, errors.
  */
 import { evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
+import { message, value } from './support/call';
 
 function grid(name: string, ...args: ArgumentInput[]): CellOutput[][] {
   const spec = findFunction(name);
@@ -10,17 +11,7 @@ function grid(name: string, ...args: ArgumentInput[]): CellOutput[][] {
   return evaluate(spec, args);
 }
 
-function value(name: string, ...args: ArgumentInput[]): number {
-  const result = grid(name, ...args)[0][0];
-  if (typeof result !== 'number') throw new Error(`${name} gave ${JSON.stringify(result)}`);
-  return result;
-}
 
-function message(name: string, ...args: ArgumentInput[]): string {
-  const result = grid(name, ...args)[0][0];
-  if (!isFailure(result)) throw new Error(`${name} gave ${JSON.stringify(result)}, not an error`);
-  return result.message;
-}
 
 describe('DRIFT.DOPINGRANGE', () => {
   it('is [DRIFT.DOPING(ρmax), DRIFT.DOPING(ρmin)] with the default model', () => {
