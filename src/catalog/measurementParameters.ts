@@ -46,3 +46,15 @@ export function numberList(options: ListOptions): ParameterSpec<readonly number[
   };
   return { name, type: 'number', unit, description, optional: false, parse: (value) => reduce([value]), reduce };
 }
+
+/** Probe voltage and current, shared by DRIFT.FOURPOINT and DRIFT.FOURPOINTRS. */
+export const probeVoltage = requiredNumber({
+  name: 'voltage_V',
+  unit: 'V',
+  description: 'Voltage between the two inner probes, in V; same sign as the current.',
+});
+export const probeCurrent = requiredNumber({
+  name: 'current_A',
+  unit: 'A',
+  description: 'Current forced through the two outer probes, in A; not 0.',
+});

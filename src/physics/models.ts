@@ -12,23 +12,10 @@ import { ARORA_SOURCE, ARORA_FITTED_TEMPERATURES } from './mobility/arora';
 import { CAUGHEY_THOMAS_SOURCE } from './mobility/caugheyThomas';
 import { F723_SOURCE } from './astmF723';
 import { LAYER_MODELS } from './layers/modelInfo';
+import type { ModelInfo } from './modelInfo';
 import { MEASUREMENT_MODELS } from './measurement/modelInfo';
 
-/** One model as DRIFT.MODELS() lists it. */
-export interface ModelInfo {
-  /** Code as users type it (lower case; look-up is case-insensitive). */
-  code: string;
-  /** What the model computes. */
-  quantity: string;
-  /** Descriptive name. */
-  name: string;
-  /** Full citation ("from memory" where values were recalled). */
-  citation: string;
-  /** Range the source validated. */
-  validity: string;
-  /** How the core uses it beyond the source (extensions, assumptions). */
-  notes?: string;
-}
+export type { ModelInfo };
 
 const MOBILITY = 'mobility and resistivity';
 
@@ -77,7 +64,12 @@ const TRANSPORT_MODELS: readonly ModelInfo[] = [
 ];
 
 /** Every model code: ni, band gap, densities of states, statistics, ionization, mobility, ASTM F723. */
-export const MODEL_REGISTRY: readonly ModelInfo[] = [...BAND_MODELS.map((entry) => ({ ...entry })), ...TRANSPORT_MODELS, ...LAYER_MODELS.map((entry) => ({ ...entry })), ...MEASUREMENT_MODELS.map((entry) => ({ ...entry }))];
+export const MODEL_REGISTRY: readonly ModelInfo[] = [
+  ...BAND_MODELS,
+  ...TRANSPORT_MODELS,
+  ...LAYER_MODELS,
+  ...MEASUREMENT_MODELS,
+];
 
 /**
  * Looks a model up by code, case-insensitively.

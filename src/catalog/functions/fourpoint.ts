@@ -1,20 +1,7 @@
 import { fourPointResistivity } from '../../physics';
 import { length } from '../common';
-import { optionalLength } from '../measurementParameters';
-import { requiredNumber } from '../parameters';
+import { optionalLength, probeCurrent, probeVoltage } from '../measurementParameters';
 import { elementwise } from '../types';
-
-/** Probe voltage and current, shared by DRIFT.FOURPOINT and DRIFT.FOURPOINTRS. */
-export const probeVoltage = requiredNumber({
-  name: 'voltage_V',
-  unit: 'V',
-  description: 'Voltage between the two inner probes, in V; same sign as the current.',
-});
-export const probeCurrent = requiredNumber({
-  name: 'current_A',
-  unit: 'A',
-  description: 'Current forced through the two outer probes, in A; not 0.',
-});
 
 export const FOURPOINT = elementwise({
   name: 'FOURPOINT',

@@ -1,7 +1,6 @@
 import { fourPointSheetResistance } from '../../physics';
-import { optionalLength } from '../measurementParameters';
+import { optionalLength, probeCurrent, probeVoltage } from '../measurementParameters';
 import { elementwise } from '../types';
-import { probeCurrent, probeVoltage } from './fourpoint';
 
 export const FOURPOINTRS = elementwise({
   name: 'FOURPOINTRS',

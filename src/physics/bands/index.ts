@@ -26,4 +26,4 @@ export {
   type CarrierStatistics,
   type LevelOccupancy,
 } from './statistics';
-export { BAND_MODELS, type BandModelInfo } from './modelInfo';
+export { BAND_MODELS } from './modelInfo';

@@ -1,3 +1,5 @@
+import type { ModelInfo } from '../modelInfo';
+
 /**
  * Descriptions of the band-structure, ni, statistics and ionization models, for
  * the model registry (models.ts) and DRIFT.MODELS(). Citations and validity
@@ -9,22 +11,13 @@ import { IONIZATION_MODEL_CODE } from '../ionization';
 import { BOLTZMANN_STATISTICS } from './statistics';
 import { DOS_INTRINSIC_MODEL } from './intrinsicDensity';
 
-export interface BandModelInfo {
-  readonly code: string;
-  readonly quantity: string;
-  readonly name: string;
-  readonly citation: string;
-  readonly validity: string;
-  readonly notes?: string;
-}
-
 const NI = 'intrinsic density ni';
 const [phosphorus, boron] = ['P', 'B'].map(
   (symbol) => SILICON.dopants.find((dopant) => dopant.symbol === symbol)!,
 );
 
 /** Every model owned by the band-structure part of the core, lower-case codes. */
-export const BAND_MODELS: readonly BandModelInfo[] = [
+export const BAND_MODELS: readonly ModelInfo[] = [
   ...SILICON.intrinsicFits.map((fit) => ({
     code: fit.code,
     quantity: NI,

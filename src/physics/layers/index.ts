@@ -30,4 +30,4 @@ export {
   type ImplantedLayer,
   type LayerConductance,
 } from './sheetResistance';
-export { LAYER_MODELS, type LayerModelInfo } from './modelInfo';
+export { LAYER_MODELS } from './modelInfo';

@@ -1,16 +1,9 @@
+import type { ModelInfo } from '../modelInfo';
+
 /**
  * Descriptions of the layer models (Irvin's integration, the diffusion
  * profiles, the implant profile) for the model registry and DRIFT.MODELS().
  */
-
-export interface LayerModelInfo {
-  readonly code: string;
-  readonly quantity: string;
-  readonly name: string;
-  readonly citation: string;
-  readonly validity: string;
-  readonly notes?: string;
-}
 
 const IRVIN_CITATION =
   'J. C. Irvin, "Resistivity of bulk silicon and of diffused layers in silicon", Bell Syst. Tech. J. 41, 387–410 (1962) (citation from memory)';
@@ -19,7 +12,7 @@ const AS_DIFFUSED =
   'Ideal as-diffused profile: no concentration-dependent diffusion, no kink-and-tail, no surface pile-up or depletion; Ns up to about solid solubility (≈ 1e20–5e20 cm⁻³).';
 
 /** Every model owned by the layer part of the core, lower-case codes. */
-export const LAYER_MODELS: readonly LayerModelInfo[] = [
+export const LAYER_MODELS: readonly ModelInfo[] = [
   {
     code: 'irvin-layers',
     quantity: 'sheet resistance of diffused and implanted layers',

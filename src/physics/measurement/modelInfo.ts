@@ -2,9 +2,9 @@
  * Descriptions of the measurement-analysis models, for the model registry
  * (models.ts), DRIFT.MODELS() and the help pages.
  */
-import type { BandModelInfo } from '../bands/modelInfo';
+import type { ModelInfo } from '../modelInfo';
 
-export const MEASUREMENT_MODELS: readonly BandModelInfo[] = [
+export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
   {
     code: 'valdes-1954',
     quantity: 'four-point-probe resistivity of bulk and finite-thickness samples',
