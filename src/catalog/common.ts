@@ -3,18 +3,20 @@
  * units, defaults and allowed ranges cannot drift apart between functions.
  */
 import {
-  INTRINSIC_MODEL_CODES,
+  ALL_MOBILITY_MODEL_CODES,
+  ALL_RESISTIVITY_MODEL_CODES,
   MATERIAL_CODES,
-  MOBILITY_MODEL_CODES,
-  RESISTIVITY_MODEL_CODES,
+  MATERIALS,
   dopantCodes,
+  intrinsicModelCodes,
+  mobilityModelCodes,
+  resistivityModelCodes,
   carrierFor,
   genericDopant,
   sampleDopants,
   solveEquilibrium,
   resolveDopant,
   resolveMaterial,
-  SILICON,
   CARRIER_ROLES,
   type CarrierRole,
   type DopantDensity,
@@ -23,6 +25,7 @@ import {
   type Sample,
 } from '../physics';
 import { codeParameter, optionalNumber, requiredCode, requiredNumber } from './parameters';
+import type { ParameterSpec } from './types';
 
 /** Temperatures the core's solvers are built and tested for. */
 export const TEMPERATURE_RANGE_K = { min: 20, max: 1000 } as const;
@@ -54,15 +57,27 @@ export const material = codeParameter<Material>({
   resolve: resolveMaterial,
 });
 
-/** Every dopant code any material accepts; the material decides which apply. */
-function allDopantCodes(): readonly string[] {
-  return dopantCodes(SILICON);
+/**
+ * Every dopant code any material accepts, each once, in material order; the
+ * material decides which apply. Codes are distinct as written ('P' phosphorus
+ * and 'p' the generic acceptor, 'N' nitrogen and 'n' the generic donor).
+ */
+export function allDopantCodes(): readonly string[] {
+  const codes: string[] = [];
+  for (const host of MATERIALS) for (const code of dopantCodes(host)) if (!codes.includes(code)) codes.push(code);
+  return codes;
+}
+
+/** "Si: B, Al, …; Ge: …" — the dopant codes of each material, for descriptions. */
+export function dopantCodesByMaterial(): string {
+  return MATERIALS.map((host) => `${host.code}: ${dopantCodes(host).filter((code) => code !== 'n' && code !== 'p').join(', ')}`).join('; ');
 }
 
 export const dopant = requiredCode({
   name: 'dopant',
   description:
-    'Dopant element symbol (B, Al, Ga, In acceptors; P, As, Sb donors) or n / p for a generic donor / acceptor. Case-insensitive, except that P is phosphorus and p a generic acceptor.',
+    `Dopant element symbol for the material (${dopantCodesByMaterial()}) or n / p for a generic donor / acceptor. ` +
+    'Case-insensitive, except that P is phosphorus and p a generic acceptor, N nitrogen and n a generic donor.',
   choices: allDopantCodes,
 });
 
@@ -105,29 +120,44 @@ export const carrier = codeParameter<CarrierRole>({
   resolve: (code) => code as CarrierRole,
 });
 
-export const mobilityModel = codeParameter<string>({
-  name: 'model',
-  description: `Mobility model: ${MOBILITY_MODEL_CODES.join(', ')}; blank means ${MOBILITY_MODEL_CODES[0]}.`,
-  choices: () => MOBILITY_MODEL_CODES,
-  defaultCode: MOBILITY_MODEL_CODES[0],
-  resolve: (code) => code,
-});
+/** Display form of the default of a model argument whose blank means the material's own default. */
+export const MATERIAL_DEFAULT_TEXT = 'the material’s default';
 
-export const resistivityModel = codeParameter<string>({
-  name: 'model',
-  description: `Model: ${RESISTIVITY_MODEL_CODES.join(', ')}; blank means ${RESISTIVITY_MODEL_CODES[0]}.`,
-  choices: () => RESISTIVITY_MODEL_CODES,
-  defaultCode: RESISTIVITY_MODEL_CODES[0],
-  resolve: (code) => code,
-});
+/** "Si: masetti, arora; Ge: hilsum; …" — model codes per material, the default first. */
+function codesByMaterial(codesOf: (host: Material) => readonly string[]): string {
+  return MATERIALS.map((host) => `${host.code}: ${codesOf(host).join(', ')}`).join('; ');
+}
 
-export const intrinsicModel = codeParameter<string>({
-  name: 'model',
-  description: `Intrinsic-density model: ${INTRINSIC_MODEL_CODES.join(', ')}; blank means ${INTRINSIC_MODEL_CODES[0]}.`,
-  choices: () => INTRINSIC_MODEL_CODES,
-  defaultCode: INTRINSIC_MODEL_CODES[0],
-  resolve: (code) => code,
-});
+/** Every code of codesOf over all materials, each once, in material order. */
+function allCodes(codesOf: (host: Material) => readonly string[]): readonly string[] {
+  const codes: string[] = [];
+  for (const host of MATERIALS) for (const code of codesOf(host)) if (!codes.includes(code)) codes.push(code);
+  return codes;
+}
+
+/**
+ * A model argument: any code of any material parses here; a blank is passed
+ * on as '' so the core takes the material's default, and the core refuses a
+ * code the material has no parameters for, naming what it supports.
+ */
+function materialModelParameter(what: string, codes: () => readonly string[], codesOf: (host: Material) => readonly string[]): ParameterSpec<string> {
+  return {
+    ...codeParameter<string>({
+      name: 'model',
+      description: `${what} by material (${codesByMaterial(codesOf)}); blank means the material’s default, listed first.`,
+      choices: codes,
+      defaultCode: '',
+      resolve: (code) => code,
+    }),
+    defaultText: MATERIAL_DEFAULT_TEXT,
+  };
+}
+
+export const mobilityModel = materialModelParameter('Mobility model', () => ALL_MOBILITY_MODEL_CODES, mobilityModelCodes);
+
+export const resistivityModel = materialModelParameter('Model', () => ALL_RESISTIVITY_MODEL_CODES, resistivityModelCodes);
+
+export const intrinsicModel = materialModelParameter('Intrinsic-density model', () => allCodes(intrinsicModelCodes), intrinsicModelCodes);
 
 export const resistivity = requiredNumber({
   name: 'resistivity',

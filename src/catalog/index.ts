@@ -5,6 +5,9 @@
 import { BANDGAP } from './functions/bandgap';
 import { CONDUCTIVITY } from './functions/conductivity';
 import { CURRENTDENSITY } from './functions/currentdensity';
+import { VELOCITY } from './functions/velocity';
+import { VSAT } from './functions/vsat';
+import { TCR } from './functions/tcr';
 import { DIFFUSIVITY } from './functions/diffusivity';
 import { DOPING } from './functions/doping';
 import { ELECTRONS } from './functions/electrons';
@@ -17,6 +20,7 @@ import { MOBILITY } from './functions/mobility';
 import { MODELS } from './functions/models';
 import { NC } from './functions/nc';
 import { NI } from './functions/ni';
+import { NIEFF } from './functions/nieff';
 import { NV } from './functions/nv';
 import { RESISTIVITY } from './functions/resistivity';
 import { RESISTOR } from './functions/resistor';
@@ -40,6 +44,7 @@ export const CATALOG: readonly FunctionSpec[] = [
   NC,
   NV,
   NI,
+  NIEFF,
   ELECTRONS,
   HOLES,
   MAJORITY,
@@ -52,6 +57,9 @@ export const CATALOG: readonly FunctionSpec[] = [
   RESISTIVITY,
   DOPING,
   CURRENTDENSITY,
+  VELOCITY,
+  VSAT,
+  TCR,
   SHEETRES,
   RESISTOR,
   LAYERSHEETRES,

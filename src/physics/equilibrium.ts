@@ -3,10 +3,11 @@
  *
  *   p + Σ Nd⁺ = n + Σ Na⁻,
  *
- * with Boltzmann free carriers (bands/statistics.ts), dopant ionization after
- * Altermatt et al. (2006) (ionization.ts), donors and acceptors together.
- * Freeze-out, compensation and intrinsic conduction all come out of this one
- * equation; there are no special cases.
+ * with Fermi–Dirac free carriers by default (bands/statistics.ts; Boltzmann on
+ * request), dopant ionization after Altermatt et al. (2006) (ionization.ts),
+ * donors and acceptors together. Freeze-out, compensation, degeneracy and
+ * intrinsic conduction all come out of this one equation; there are no
+ * special cases.
  *
  * Unknown: η = (Ef − Ei)/kT. F(η) = p − n + ΣNd⁺ − ΣNa⁻ decreases strictly
  * with η (n and Na⁻ grow, p and Nd⁺ shrink), so the root is unique.
@@ -16,16 +17,28 @@
  * compensation (Nd = Na = 1e22) cancels exactly; a mostly neutral one adds
  * ±N·ionised directly, so deep freeze-out keeps its tiny ionised density.
  *
- * Bracket: at the root n − p = ΣNd⁺ − ΣNa⁻ ∈ [−ΣNa, ΣNd] and n − p = 2·ni·sinh η,
- * hence η ∈ [−asinh(ΣNa/2ni), asinh(ΣNd/2ni)]. F ≥ 0 at the lower end and ≤ 0
- * at the upper one for any densities and temperature; the ends are widened by
- * a small margin so rounding cannot flip those signs.
+ * Bracket. Write nB(η) = ni·e^η and pB(η) = ni·e^{−η} for the Boltzmann
+ * densities. At ηB = asinh(ΣNd/2ni), nB(ηB) − pB(ηB) = ΣNd. Any statistics
+ * the solver accepts (CarrierStatistics contract) has p ≤ pB and
+ * n ≥ Nc·L(ηc), L(x) = max(e^x/(1 + e^x), (4/(3√π))·x^{3/2} for x > 0). So
+ * an upper end ηU ≥ ηB with Nc·L(ηU − Ec/kT) ≥ nB(ηB), i.e. L(xU) ≥ e^{xB}
+ * (xB = ηB − (Ec − Ei)/kT), gives
+ *   F(ηU) ≤ pB(ηU) − n(ηU) + ΣNd ≤ pB(ηB) − nB(ηB) + ΣNd = 0.
+ * L(x) ≥ e^{xB} holds for x ≥ xB − ln(1 − e^{xB}) (first form, when xB < 0)
+ * and for x ≥ ((3√π/4)·e^{xB})^{2/3} (second form); we take the smaller. For
+ * non-degenerate doping (xB ≪ 0) this is ηB + e^{xB}, the Boltzmann bracket;
+ * for degenerate doping it grows like the true root, ∝ (ΣNd/Nc)^{2/3}. The
+ * lower end follows the same way with holes, acceptors and the valence band.
+ * F ≥ 0 at the lower end and ≤ 0 at the upper one for any densities and
+ * temperature; the ends are widened by a small margin so rounding cannot flip
+ * those signs. findRoot (Brent with forced bisection) then terminates within
+ * about 4·log2(width/tolerance) steps.
  */
 
 import { thermalVoltage } from './constants';
 import { PhysicsDomainError } from './errors';
 import { bandEdges, type BandEdges } from './bands/bandEdges';
-import { DEFAULT_CARRIER_STATISTICS } from './bands/statistics';
+import { DEFAULT_CARRIER_STATISTICS, type CarrierStatistics } from './bands/statistics';
 import type { Dopant, Material } from './materials/types';
 import { checkTemperature } from './materials/temperature';
 import { ionizationState, prepareIonization, preparedIonizationState, type IonizationState, type PreparedIonization } from './ionization';
@@ -57,6 +70,20 @@ export interface Equilibrium {
 const BRACKET_MARGIN = 1e-6;
 /** Absolute tolerance on η; with the solver's 2ε|η| term, n and p are exact to ~1e-13. */
 const ETA_TOLERANCE = 1e-15;
+
+/** 3√π/4 = 1/(4/(3√π)), the inverse of the leading Sommerfeld coefficient of F½ (module note). */
+const INVERSE_SOMMERFELD_COEFFICIENT = (3 * Math.sqrt(Math.PI)) / 4;
+
+/**
+ * The smallest reduced band Fermi level x the module note proves sufficient
+ * for L(x) ≥ e^{xB}: the smaller of xB − ln(1 − e^{xB}) (when xB < 0) and
+ * ((3√π/4)·e^{xB})^{2/3}, never below xB.
+ */
+function sufficientBandFermiLevel(boltzmannLevel: number): number {
+  const fromSommerfeld = Math.exp((2 / 3) * (Math.log(INVERSE_SOMMERFELD_COEFFICIENT) + boltzmannLevel));
+  const fromLogistic = boltzmannLevel < 0 ? boltzmannLevel - Math.log1p(-Math.exp(boltzmannLevel)) : Infinity;
+  return Math.max(boltzmannLevel, Math.min(fromLogistic, fromSommerfeld));
+}
 
 /**
  * asinh(N / (2·ni)) for N ≥ 0 from ln ni, without overflow when ni is tiny.
@@ -102,7 +129,10 @@ function checkDopants(material: Material, dopants: readonly DopantDensity[]): vo
  * @param material host material
  * @param temperature K, inside the material's temperature domain
  * @param dopants dopant species with total densities (cm⁻³); empty = intrinsic
- * @param intrinsicModel ni model code (default: the material's first); n·p = ni² for it
+ * @param intrinsicModel ni model code (default: the material's first); the band
+ *   edges are placed so that n·p = ni² for it wherever carriers are non-degenerate
+ * @param statistics free-carrier statistics (default Fermi–Dirac; BOLTZMANN_STATISTICS
+ *   gives n·p = ni² exactly at any doping)
  * @returns n, p, ionised donors and acceptors (cm⁻³), Ef − Ei (eV), iterations
  * @throws PhysicsDomainError for bad densities, unknown model, temperature outside the domain
  * @example solveEquilibrium(SILICON, 300, [{ dopant: resolveDopant(SILICON, 'P'), density: 1e16 }]).electrons // ≈ 9.96e15
@@ -112,11 +142,21 @@ export function solveEquilibrium(
   temperature: number,
   dopants: readonly DopantDensity[],
   intrinsicModel?: string,
+  statistics: CarrierStatistics = DEFAULT_CARRIER_STATISTICS,
 ): Equilibrium {
   const last = lastSolve;
-  if (last !== undefined && sameProblem(last, material, temperature, dopants, intrinsicModel)) return { ...last.result };
-  const result = solveNeutrality(material, temperature, dopants, intrinsicModel);
-  lastSolve = { material, temperature, dopants: dopants.map((d) => ({ dopant: d.dopant, density: d.density })), intrinsicModel, result };
+  if (last !== undefined && last.statistics === statistics && sameProblem(last, material, temperature, dopants, intrinsicModel)) {
+    return { ...last.result };
+  }
+  const result = solveNeutrality(material, temperature, dopants, intrinsicModel, statistics);
+  lastSolve = {
+    material,
+    temperature,
+    dopants: dopants.map((d) => ({ dopant: d.dopant, density: d.density })),
+    intrinsicModel,
+    statistics,
+    result,
+  };
   return { ...result };
 }
 
@@ -132,6 +172,7 @@ interface RememberedSolve {
   readonly temperature: number;
   readonly dopants: readonly DopantDensity[];
   readonly intrinsicModel: string | undefined;
+  readonly statistics: CarrierStatistics;
   readonly result: Equilibrium;
 }
 let lastSolve: RememberedSolve | undefined;
@@ -155,12 +196,12 @@ function solveNeutrality(
   material: Material,
   temperature: number,
   dopants: readonly DopantDensity[],
-  intrinsicModel?: string,
+  intrinsicModel: string | undefined,
+  statistics: CarrierStatistics,
 ): Equilibrium {
   checkTemperature(material, temperature);
   checkDopants(material, dopants);
   const edges = bandEdges(material, temperature, intrinsicModel);
-  const statistics = DEFAULT_CARRIER_STATISTICS;
 
   let totalDonors = 0;
   let totalAcceptors = 0;
@@ -194,8 +235,17 @@ function solveNeutrality(
     return fullyIonized + carriers + remainder;
   };
 
-  const upper = asinhHalfRatio(totalDonors, edges.logIntrinsicDensity);
-  const lower = -asinhHalfRatio(totalAcceptors, edges.logIntrinsicDensity);
+  // Boltzmann ends, then widened for statistics below Boltzmann (module note).
+  const boltzmannUpper = asinhHalfRatio(totalDonors, edges.logIntrinsicDensity);
+  const boltzmannLower = -asinhHalfRatio(totalAcceptors, edges.logIntrinsicDensity);
+  const upper = Math.max(
+    boltzmannUpper,
+    sufficientBandFermiLevel(boltzmannUpper - edges.conductionEdge) + edges.conductionEdge,
+  );
+  const lower = Math.min(
+    boltzmannLower,
+    -(sufficientBandFermiLevel(-boltzmannLower - edges.valenceEdge) + edges.valenceEdge),
+  );
   const { root, iterations } = findRoot(
     charge,
     lower - BRACKET_MARGIN * (1 + Math.abs(lower)),

@@ -11,13 +11,31 @@ export { ELEMENTARY_CHARGE, BOLTZMANN, PLANCK, ELECTRON_MASS, thermalVoltage } f
 export { findRoot } from './solve';
 
 // Materials, bands, dopants, equilibrium.
-export { MATERIAL_CODES, resolveMaterial, SILICON, type Material } from './materials';
+export {
+  MATERIAL_CODES,
+  MATERIALS,
+  resolveMaterial,
+  SILICON,
+  GERMANIUM,
+  GALLIUM_ARSENIDE,
+  SILICON_CARBIDE_4H,
+  type Material,
+} from './materials';
 export {
   bandgap,
   conductionBandDensity,
   valenceBandDensity,
   INTRINSIC_MODEL_CODES,
   intrinsicDensity,
+  intrinsicModelCodes,
+  fermiDiracHalf,
+  fermiDiracMinusHalf,
+  BOLTZMANN_STATISTICS,
+  FERMI_DIRAC_STATISTICS,
+  BANDGAP_NARROWING_MODEL_CODES,
+  apparentBandgapNarrowing,
+  effectiveIntrinsicDensity,
+  resolveBandgapNarrowingModel,
 } from './bands';
 export { dopantCodes, resolveDopant, genericDopant, type Dopant, type DopantKind } from './dopants';
 export { solveEquilibrium, ionizedFraction, type DopantDensity, type Equilibrium } from './equilibrium';
@@ -32,8 +50,39 @@ export {
   type Carrier,
   type CarrierRole,
 } from './sample';
-export { MOBILITY_MODEL_CODES, fitMobility, mobility, diffusivity } from './mobility';
-export { RESISTIVITY_MODEL_CODES, conductivity, resistivity, currentDensity } from './transport';
+export {
+  MOBILITY_MODEL_CODES,
+  ALL_MOBILITY_MODEL_CODES,
+  mobilityModelCodes,
+  defaultMobilityModel,
+  fitMobility,
+  mobility,
+  diffusivity,
+} from './mobility';
+export {
+  RESISTIVITY_MODEL_CODES,
+  ALL_RESISTIVITY_MODEL_CODES,
+  resistivityModelCodes,
+  conductivity,
+  resistivity,
+  currentDensity,
+  FIELD_DEPENDENCE_CODES,
+  type FieldDependence,
+} from './transport';
+
+// High-field drift and the temperature coefficient of resistivity.
+export {
+  saturationVelocity,
+  fieldExponent,
+  caugheyThomasVelocity,
+  driftVelocity,
+  saturatedCurrentDensity,
+  HIGH_FIELD_MATERIAL_CODES,
+  HIGH_FIELD_TABLES,
+  type CarrierHighFieldTable,
+  type MaterialHighFieldTables,
+} from './highField';
+export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
 export { dopingForResistivity } from './inverse';
 export { f723Resistivity, f723Density, type F723Species } from './astmF723';
 

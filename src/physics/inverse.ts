@@ -137,7 +137,7 @@ export function dopingForResistivity(
   if (!(target > 0) || !Number.isFinite(target)) {
     throw new PhysicsDomainError(`resistivity ${target} Ω·cm is not allowed: it must be a finite number greater than 0.`);
   }
-  const code = resolveResistivityModel(model);
+  const code = resolveResistivityModel(model, sample.material);
   if (code === ASTM_F723_CODE) {
     const species = f723SpeciesFor(sample.dopant.symbol, sample.counterDensity, sample.temperature);
     return { density: f723Density(species, target), iterations: 0 };

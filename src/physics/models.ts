@@ -10,10 +10,14 @@ import { BAND_MODELS } from './bands/modelInfo';
 import { MASETTI_SOURCE } from './mobility/masetti';
 import { ARORA_SOURCE, ARORA_FITTED_TEMPERATURES } from './mobility/arora';
 import { CAUGHEY_THOMAS_SOURCE } from './mobility/caugheyThomas';
+import { KLAASSEN_SOURCE } from './mobility/klaassen';
 import { F723_SOURCE } from './astmF723';
 import { LAYER_MODELS } from './layers/modelInfo';
 import type { ModelInfo } from './modelInfo';
 import { MEASUREMENT_MODELS } from './measurement/modelInfo';
+import { HIGH_FIELD_MODELS } from './highField/modelInfo';
+import { MATERIAL_MODELS } from './materials/modelInfo';
+import { MATERIAL_MOBILITY_FITS } from './mobility/materialFits';
 
 export type { ModelInfo };
 
@@ -54,6 +58,20 @@ const TRANSPORT_MODELS: readonly ModelInfo[] = [
     notes: `${TEMPERATURE_BY_ARORA} ${DRIFT_MOBILITY_NOTE}`,
   },
   {
+    code: 'klaassen',
+    quantity: MOBILITY,
+    name: 'Klaassen (1992) unified mobility: majority and minority carriers, temperature',
+    citation: KLAASSEN_SOURCE.citation,
+    validity: KLAASSEN_SOURCE.validity,
+    notes:
+      'Own temperature dependence (lattice and impurity terms with their own power laws); donors and acceptors ' +
+      'enter separately (minority carriers see repelling dopants weighted by G ≤ 1, the other carrier type by 1/F), ' +
+      'clustering above ~1e20 cm⁻³. Dopant densities as in the fit (full ionization); n, p from the equilibrium ' +
+      'with the net-majority density times N_net / n_eq(300 K), and that carrier\'s mobility times the same factor, ' +
+      'so that 300 K resistivity follows the fit; G is evaluated no lower than its minimum in P. At 300 K the ' +
+      'majority mobility is the Caughey–Thomas form with Masetti\'s P and B parameters (within 5 % of masetti).',
+  },
+  {
     code: 'astm-f723',
     quantity: 'resistivity ↔ dopant density',
     name: 'ASTM F723 conversion (Thurber et al. 1981 equations)',
@@ -63,10 +81,23 @@ const TRANSPORT_MODELS: readonly ModelInfo[] = [
   },
 ];
 
+/** Mobility fits of Ge, GaAs and 4H-SiC (mobility/materialFits.ts), each its material's default. */
+const MATERIAL_MOBILITY_MODELS: readonly ModelInfo[] = MATERIAL_MOBILITY_FITS.map((fit) => ({
+  code: fit.code,
+  quantity: `${MOBILITY} (${fit.materialCode})`,
+  name: fit.name,
+  citation: fit.citation,
+  validity: fit.validity,
+  notes: fit.notes,
+}));
+
 /** Every model code: ni, band gap, densities of states, statistics, ionization, mobility, ASTM F723. */
 export const MODEL_REGISTRY: readonly ModelInfo[] = [
   ...BAND_MODELS,
+  ...MATERIAL_MODELS,
   ...TRANSPORT_MODELS,
+  ...MATERIAL_MOBILITY_MODELS,
+  ...HIGH_FIELD_MODELS,
   ...LAYER_MODELS,
   ...MEASUREMENT_MODELS,
 ];

@@ -11,28 +11,65 @@ import { sampleDopants } from './sample';
 import { solveEquilibrium } from './equilibrium';
 import { ELEMENTARY_CHARGE } from './constants';
 import { PhysicsDomainError } from './errors';
-import { MOBILITY_MODEL_CODES, DEFAULT_MOBILITY_MODEL, driftMobilities } from './mobility';
+import {
+  ALL_MOBILITY_MODEL_CODES,
+  MOBILITY_MODEL_CODES,
+  defaultMobilityModel,
+  driftMobilities,
+  materialsWithMobilityModel,
+  mobilityModelCodes,
+} from './mobility';
 import { f723Resistivity, f723SpeciesFor } from './astmF723';
+import { saturatedCurrentDensity } from './highField/currentDensity';
+import { SILICON, type Material } from './materials';
 
 /** Code of the ASTM F723 conversion in the resistivity model list. */
 export const ASTM_F723_CODE = 'astm-f723';
 
-/** Resistivity model codes: the mobility models, then 'astm-f723'. The first is the default. */
+/** Silicon's resistivity model codes: its mobility models, then 'astm-f723'. The first is the default. */
 export const RESISTIVITY_MODEL_CODES: readonly string[] = [...MOBILITY_MODEL_CODES, ASTM_F723_CODE];
 
+/** Every resistivity model code of every material: silicon's, then the other materials' mobility fits. */
+export const ALL_RESISTIVITY_MODEL_CODES: readonly string[] = [
+  ...RESISTIVITY_MODEL_CODES,
+  ...ALL_MOBILITY_MODEL_CODES.filter((code) => !RESISTIVITY_MODEL_CODES.includes(code)),
+];
+
 /**
- * Parses a resistivity model code, case-insensitively.
+ * Resistivity model codes with parameters for a material; the first is its default.
+ * ASTM F723 is a silicon standard, so only silicon lists it.
  *
- * @param code - e.g. 'ASTM-F723'; undefined or '' selects the default ('masetti')
+ * @param material - host material
+ * @returns e.g. ['masetti', 'arora', 'caughey-thomas', 'astm-f723'] for silicon, ['hilsum'] for germanium
+ * @example resistivityModelCodes(GERMANIUM) // ['hilsum']
+ */
+export function resistivityModelCodes(material: Material): readonly string[] {
+  const codes = mobilityModelCodes(material);
+  return material.code === SILICON.code ? [...codes, ASTM_F723_CODE] : codes;
+}
+
+/**
+ * Parses a resistivity model code, case-insensitively, for a material.
+ *
+ * @param code - e.g. 'ASTM-F723'; undefined or '' selects the material's default (silicon: 'masetti')
+ * @param material - host material (default silicon)
  * @returns the normalized code
- * @throws PhysicsDomainError listing the allowed codes
+ * @throws PhysicsDomainError listing the codes the material supports, for an
+ *   unknown code or one without parameters for the material
  * @example resolveResistivityModel('ASTM-F723') // 'astm-f723'
  */
-export function resolveResistivityModel(code?: string): string {
-  if (code === undefined || code.trim() === '') return DEFAULT_MOBILITY_MODEL;
+export function resolveResistivityModel(code?: string, material: Material = SILICON): string {
+  if (code === undefined || code.trim() === '') return defaultMobilityModel(material);
   const normalized = code.trim().toLowerCase();
-  if (RESISTIVITY_MODEL_CODES.includes(normalized)) return normalized;
-  throw new PhysicsDomainError(`unknown resistivity model '${code}'. Allowed: ${RESISTIVITY_MODEL_CODES.join(', ')}.`);
+  const allowed = resistivityModelCodes(material);
+  if (allowed.includes(normalized)) return normalized;
+  if (ALL_RESISTIVITY_MODEL_CODES.includes(normalized)) {
+    const owners = normalized === ASTM_F723_CODE ? SILICON.name : materialsWithMobilityModel(normalized);
+    throw new PhysicsDomainError(
+      `resistivity model '${normalized}' has parameters for ${owners} only; ${material.name} supports: ${allowed.join(', ')}.`,
+    );
+  }
+  throw new PhysicsDomainError(`unknown resistivity model '${code}'. Allowed: ${allowed.join(', ')}.`);
 }
 
 /** Guards a conductivity: it must be finite and positive. */
@@ -56,7 +93,7 @@ function checkedConductivity(value: number, sample: Sample): number {
  * @example conductivity(boron1e16At300K) // ≈ 0.68 S/cm
  */
 export function conductivity(sample: Sample, model?: string): number {
-  const code = resolveResistivityModel(model);
+  const code = resolveResistivityModel(model, sample.material);
   if (code === ASTM_F723_CODE) {
     const species = f723SpeciesFor(sample.dopant.symbol, sample.counterDensity, sample.temperature);
     return checkedConductivity(1 / f723Resistivity(species, sample.density), sample);
@@ -78,7 +115,7 @@ export function conductivity(sample: Sample, model?: string): number {
  * @example resistivity(phosphorus1e16At300K) // ≈ 0.527 Ω·cm
  */
 export function resistivity(sample: Sample, model?: string): number {
-  const code = resolveResistivityModel(model);
+  const code = resolveResistivityModel(model, sample.material);
   if (code === ASTM_F723_CODE) {
     // The standard gives ρ directly; returning it unchanged avoids a 1/(1/ρ) round-off.
     const species = f723SpeciesFor(sample.dopant.symbol, sample.counterDensity, sample.temperature);
@@ -87,16 +124,41 @@ export function resistivity(sample: Sample, model?: string): number {
   return 1 / conductivity(sample, code);
 }
 
+/** How the drift current depends on the field: with velocity saturation (default) or Ohm's law. */
+export const FIELD_DEPENDENCE_CODES = ['saturating', 'ohmic'] as const;
+
+/** A field-dependence code. */
+export type FieldDependence = (typeof FIELD_DEPENDENCE_CODES)[number];
+
 /**
- * Drift current density J = σ·E in a uniform field (Ohm's law; no velocity
- * saturation).
+ * Drift current density in a uniform field.
+ *
+ * - 'saturating' (default): J = q(n·v_n(E) + p·v_p(E)) with Caughey–Thomas
+ *   velocities (highField/currentDensity.ts); equal to σ·E as E → 0.
+ * - 'ohmic': J = σ·E (Ohm's law; no velocity saturation), any resistivity
+ *   model including 'astm-f723'.
  *
  * @param field - electric field E, V/cm (sign gives the direction)
  * @param sample - the sample
- * @param model - resistivity model code (default 'masetti')
+ * @param model - resistivity model code (default: the material's default mobility model);
+ *   for 'saturating' it must be a mobility model
+ * @param fieldDependence - 'saturating' (default) or 'ohmic'
  * @returns J in A/cm²
- * @example currentDensity(100, phosphorus1e16At300K) // ≈ 190 A/cm²
+ * @example currentDensity(100, phosphorus1e16At300K) // ≈ 188.5 A/cm² (σE ≈ 189.7: saturation lowers it by 0.6 %)
  */
-export function currentDensity(field: number, sample: Sample, model?: string): number {
-  return conductivity(sample, model) * field;
+export function currentDensity(
+  field: number,
+  sample: Sample,
+  model?: string,
+  fieldDependence: FieldDependence = 'saturating',
+): number {
+  if (fieldDependence === 'ohmic') return conductivity(sample, model) * field;
+  const code = resolveResistivityModel(model, sample.material);
+  if (code === ASTM_F723_CODE) {
+    throw new PhysicsDomainError(
+      `'astm-f723' converts resistivity and dopant density only and has no carrier mobilities, so it cannot give ` +
+        `saturated drift velocities; use a mobility model or the ohmic form J = σE`,
+    );
+  }
+  return saturatedCurrentDensity(field, sample, code);
 }

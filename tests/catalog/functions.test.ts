@@ -27,27 +27,44 @@ describe('identities between catalog functions (definitions: common practice, no
     expect(value('RESISTIVITY', doping, dopant, t, null, null, counter) * sigma).toBeCloseTo(1, 12);
   });
 
-  it.each(cases)('D = μ·kT/q (Einstein) for %s cm⁻³ %s at %s K', (doping, dopant, t, counter) => {
+  // Generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) (Sze & Ng 2007, ch. 1; from memory): the
+  // factor is ≥ 1, ≈ 1 + e^η/2^{3/2} for non-degenerate carriers and grows with degeneracy.
+  it.each(cases)('D ≥ μ·kT/q (Einstein), equal within the degeneracy factor, for %s cm⁻³ %s at %s K', (doping, dopant, t, counter) => {
+    const degenerate = doping >= 1e18;
     for (const carrier of ['majority', 'minority', 'electron', 'hole']) {
       const mu = value('MOBILITY', doping, dopant, t, carrier, null, null, counter);
-      expect(value('DIFFUSIVITY', doping, dopant, t, carrier, null, null, counter) / (mu * thermalVoltage(t))).toBeCloseTo(1, 12);
+      const ratio = value('DIFFUSIVITY', doping, dopant, t, carrier, null, null, counter) / (mu * thermalVoltage(t));
+      expect(ratio).toBeGreaterThanOrEqual(1);
+      expect(ratio).toBeLessThan(degenerate ? 1.2 : 1.002);
     }
   });
 
-  it('J = σ·E, its sign following the field', () => {
+  it('J = σ·E with field_dependence "ohmic", its sign following the field', () => {
     const sigma = value('CONDUCTIVITY', 5e15, 'B');
-    expect(value('CURRENTDENSITY', 250, 5e15, 'B')).toBeCloseTo(250 * sigma, 9);
-    expect(value('CURRENTDENSITY', -250, 5e15, 'B')).toBeCloseTo(-250 * sigma, 9);
+    expect(value('CURRENTDENSITY', 250, 5e15, 'B', null, null, null, 'ohmic')).toBeCloseTo(250 * sigma, 9);
+    expect(value('CURRENTDENSITY', -250, 5e15, 'B', null, null, null, 'ohmic')).toBeCloseTo(-250 * sigma, 9);
+    expect(value('CURRENTDENSITY', 0, 5e15, 'B', null, null, null, 'ohmic')).toBe(0);
+  });
+
+  it('J (saturating, the default) → σ·E as E → 0 and stays below σ·|E|, its sign following the field', () => {
+    const sigma = value('CONDUCTIVITY', 5e15, 'B');
+    expect(value('CURRENTDENSITY', 1e-15, 5e15, 'B') / (1e-15 * sigma)).toBeCloseTo(1, 12);
+    expect(value('CURRENTDENSITY', 250, 5e15, 'B') / (250 * sigma)).toBeLessThan(1);
+    expect(value('CURRENTDENSITY', 250, 5e15, 'B') / (250 * sigma)).toBeGreaterThan(0.99);
+    expect(value('CURRENTDENSITY', -250, 5e15, 'B')).toBe(-value('CURRENTDENSITY', 250, 5e15, 'B'));
     expect(value('CURRENTDENSITY', 0, 5e15, 'B')).toBe(0);
   });
 
-  it('n·p = ni² from ELECTRONS and HOLES, and FERMILEVEL = kT·ln(n/ni)', () => {
+  // Fermi–Dirac statistics: n·p = ni²·(F½(ηc)/e^ηc)·(F½(ηv)/e^ηv) ≤ ni², within about e^ηc/2^{3/2}
+  // (≈ 2e-4 here) of the Boltzmann law n·p = ni² for this non-degenerate sample.
+  it('n·p ≈ ni² (just below) from ELECTRONS and HOLES, and FERMILEVEL ≈ kT·ln(n/ni)', () => {
     for (const t of [250, 300, 450]) {
       const n = value('ELECTRONS', 2e16, 5e15, t);
       const p = value('HOLES', 2e16, 5e15, t);
       const ni = value('NI', t);
-      expect((n * p) / (ni * ni)).toBeCloseTo(1, 10);
-      expect(value('FERMILEVEL', 2e16, 5e15, t)).toBeCloseTo(thermalVoltage(t) * Math.log(n / ni), 10);
+      expect((n * p) / (ni * ni)).toBeLessThanOrEqual(1);
+      expect((n * p) / (ni * ni)).toBeGreaterThan(0.999);
+      expect(value('FERMILEVEL', 2e16, 5e15, t)).toBeCloseTo(thermalVoltage(t) * Math.log(n / ni), 4);
     }
   });
 
@@ -91,7 +108,7 @@ describe('messages for bad input name the argument, the value and what is allowe
   it.each([
     [['RESISTIVITY', -5, 'B'], '#VALUE! doping must be > 0 cm⁻³ and ≤ 1e+22 cm⁻³; got -5'],
     [['RESISTIVITY', 1e16, 'Xe'], "#VALUE! unknown dopant 'Xe' for silicon"],
-    [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: masetti, arora, caughey-thomas, astm-f723'],
+    [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: masetti, arora, caughey-thomas, klaassen, astm-f723'],
     [['RESISTIVITY', 1e16, 'B', 300, null, 'GaN'], '#VALUE! material "GaN" is not known; allowed: Si'],
     [['NI', 5], '#VALUE! temperature_K must be ≥ 20 K and ≤ 1000 K; got 5'],
     [['NI', null], '#VALUE! temperature_K is required'],

@@ -19,7 +19,7 @@ describe('resistivity model codes', () => {
     expect(RESISTIVITY_MODEL_CODES).toEqual([...MOBILITY_MODEL_CODES, 'astm-f723']);
     expect(resolveResistivityModel('ASTM-F723')).toBe('astm-f723');
     expect(resolveResistivityModel(undefined)).toBe('masetti');
-    expect(() => resolveResistivityModel('irvin')).toThrow(/Allowed: masetti, arora, caughey-thomas, astm-f723/);
+    expect(() => resolveResistivityModel('irvin')).toThrow(/Allowed: masetti, arora, caughey-thomas, klaassen, astm-f723/);
   });
 });
 
@@ -106,10 +106,17 @@ describe('temperature behaviour (from the same equations, no special cases)', ()
 });
 
 describe('currentDensity', () => {
-  it('is σ·E, with sign following the field', () => {
+  it('is σ·E in the ohmic form, with sign following the field', () => {
     const sample = siliconSample('P', 1e16);
-    expect(currentDensity(100, sample)).toBe(conductivity(sample) * 100);
-    expect(currentDensity(-5, sample, 'arora')).toBe(conductivity(sample, 'arora') * -5);
+    expect(currentDensity(100, sample, undefined, 'ohmic')).toBe(conductivity(sample) * 100);
+    expect(currentDensity(-5, sample, 'arora', 'ohmic')).toBe(conductivity(sample, 'arora') * -5);
+    expect(currentDensity(0, sample, undefined, 'ohmic')).toBe(0);
+  });
+
+  it('saturates by default (tests/physics/highField/currentDensity.test.ts), equal to σ·E as E → 0', () => {
+    const sample = siliconSample('P', 1e16);
+    expect(currentDensity(1e-15, sample) / (conductivity(sample) * 1e-15)).toBeCloseTo(1, 14);
+    expect(currentDensity(1e4, sample)).toBeLessThan(conductivity(sample) * 1e4 * 0.6);
     expect(currentDensity(0, sample)).toBe(0);
   });
 });

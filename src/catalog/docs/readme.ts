@@ -3,7 +3,17 @@
  * model table. `npm run docs` writes them between marker comments; a test
  * fails when README.md and the catalog disagree.
  */
-import { CARRIER_ROLES, INTRINSIC_MODEL_CODES, MATERIAL_CODES, MOBILITY_MODEL_CODES, MODEL_REGISTRY, RESISTIVITY_MODEL_CODES, SILICON, dopantCodes } from '../../physics';
+import {
+  CARRIER_ROLES,
+  MATERIAL_CODES,
+  MATERIALS,
+  MODEL_REGISTRY,
+  dopantCodes,
+  intrinsicModelCodes,
+  mobilityModelCodes,
+  resistivityModelCodes,
+  type Material,
+} from '../../physics';
 import type { FunctionSpec } from '../types';
 import { signature } from './signature';
 
@@ -19,18 +29,26 @@ export function renderFunctionTable(catalog: readonly FunctionSpec[]): string {
   return ['| Function | Result unit | What it gives |', '| --- | --- | --- |', ...rows].join('\n');
 }
 
+/** "Si: a, b; Ge: c" — codes per material; with the first code of each when `firstOnly`. */
+function perMaterial(codesOf: (material: Material) => readonly string[], firstOnly = false): string {
+  return MATERIALS.map((material) => {
+    const codes = codesOf(material);
+    return `${material.code}: ${(firstOnly ? codes.slice(0, 1) : codes).join(', ')}`;
+  }).join('; ');
+}
+
 export function renderCodeTable(): string {
   const rows: [string, string, string][] = [
     ['material', MATERIAL_CODES.join(', '), MATERIAL_CODES[0]],
     [
       'dopant',
-      `${dopantCodes(SILICON).join(', ')}; n / p are a generic donor / acceptor. Case matters only here: P is phosphorus, p a generic acceptor.`,
+      `${perMaterial(dopantCodes)}. n / p are a generic donor / acceptor. Case matters only here: P is phosphorus, p a generic acceptor; N is nitrogen, n a generic donor.`,
       'required',
     ],
     ['carrier', CARRIER_ROLES.join(', '), CARRIER_ROLES[0]],
-    ['model (mobility, diffusivity)', MOBILITY_MODEL_CODES.join(', '), MOBILITY_MODEL_CODES[0]],
-    ['model (conductivity, resistivity, doping)', RESISTIVITY_MODEL_CODES.join(', '), RESISTIVITY_MODEL_CODES[0]],
-    ['model (ni)', INTRINSIC_MODEL_CODES.join(', '), INTRINSIC_MODEL_CODES[0]],
+    ['model (mobility, diffusivity)', perMaterial(mobilityModelCodes), perMaterial(mobilityModelCodes, true)],
+    ['model (conductivity, resistivity, doping)', perMaterial(resistivityModelCodes), perMaterial(resistivityModelCodes, true)],
+    ['model (ni)', perMaterial(intrinsicModelCodes), perMaterial(intrinsicModelCodes, true)],
   ];
   return [
     '| Argument | Codes (case-insensitive) | Default |',

@@ -12,6 +12,6 @@ export const BANDGAP = elementwise({
     { formula: '=DRIFT.BANDGAP(300)', note: 'silicon at 300 K, about 1.12 eV' },
     { formula: '=DRIFT.BANDGAP(A2:A20)', note: 'a column of temperatures gives a column of gaps' },
   ],
-  models: ['thurmond'],
+  models: ['thurmond', 'thurmond-ge', 'thurmond-gaas', 'levinshtein-gap-4h-sic'],
   compute: (temperatureK, materialValue) => bandgapModel(materialValue, temperatureK),
 });

@@ -12,7 +12,7 @@ export const CONDUCTIVITY = elementwise({
     { formula: '=DRIFT.CONDUCTIVITY(1e16,"P")', note: 'about 1.9 S/cm' },
     { formula: '=DRIFT.CONDUCTIVITY(1e16,"P",{250,300,350})', note: 'across a row of temperatures' },
   ],
-  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723'],
+  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
   compute: (density, dopantCode, temperatureK, model, materialValue, counter) =>
     conductivity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), model),
 });

@@ -12,7 +12,7 @@ export const DOPING = elementwise({
     { formula: '=DRIFT.DOPING(10,"B")', note: 'boron density of a 10 Ω·cm p-type wafer' },
     { formula: '=DRIFT.DOPING(B2:C2,"P")', note: 'a certificate’s ρ window to a doping window' },
   ],
-  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723'],
+  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
   compute: (target, dopantCode, temperatureK, model, materialValue, counter) =>
     dopingForResistivity(
       target,

@@ -4,14 +4,14 @@ import { elementwise } from '../types';
 export const ELECTRONS = elementwise({
   name: 'ELECTRONS',
   summary: 'Equilibrium electron density n from donor and acceptor densities, in cm⁻³.',
-  help: `Solves charge neutrality p + Nd⁺ = n + Na⁻ for the Fermi level, with incomplete ionization of both dopant types, and returns the electron density n. Donors and acceptors are treated as generic n- and p-type dopants (phosphorus-like and boron-like ionization energies). Freeze-out at low temperature and intrinsic conduction at high temperature come out of the same equations.`,
+  help: `Solves charge neutrality p + Nd⁺ = n + Na⁻ for the Fermi level, with incomplete ionization of both dopant types, and returns the electron density n. Donors and acceptors are treated as the material's generic n- and p-type dopants (ionization energies of P and B in Si and Ge, Si and Zn in GaAs, N and Al in 4H-SiC). Freeze-out at low temperature and intrinsic conduction at high temperature come out of the same equations.`,
   result: { unit: 'cm⁻³', description: 'Electron density n' },
   parameters: [donors, acceptors, temperature, material] as const,
   examples: [
     { formula: '=DRIFT.ELECTRONS(1e16,0)', note: 'n-type 1e16 cm⁻³ at 300 K: nearly all donors ionized' },
     { formula: '=DRIFT.ELECTRONS(1e16,0,77)', note: 'the same at 77 K: partly frozen out' },
   ],
-  models: ['altermatt-2006', 'misiakos'],
+  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
     genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).electrons,
 });

@@ -11,7 +11,7 @@ export const FERMILEVEL = elementwise({
     { formula: '=DRIFT.FERMILEVEL(1e16,0)', note: 'n-type 1e16 cm⁻³ at 300 K, about +0.35 eV' },
     { formula: '=DRIFT.FERMILEVEL(0,1e16,B1:H1)', note: 'p-type across a row of temperatures' },
   ],
-  models: ['altermatt-2006', 'misiakos'],
+  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
     genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).fermiLevel,
 });

@@ -12,7 +12,7 @@ export const IONIZED = elementwise({
     { formula: '=DRIFT.IONIZED(1e16,"P",77)', note: 'phosphorus at 77 K' },
     { formula: '=DRIFT.IONIZED(1e16,"In")', note: 'indium is deep: well below 1 at 300 K' },
   ],
-  models: ['altermatt-2006'],
+  models: ['altermatt-2006', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
   compute: (density, dopantCode, temperatureK, materialValue) => {
     const species = resolveDopant(materialValue, dopantCode);
     const state = solveEquilibrium(materialValue, temperatureK, [{ dopant: species, density }]);

@@ -4,7 +4,7 @@ import { elementwise } from '../types';
 export const MAJORITY = elementwise({
   name: 'MAJORITY',
   summary: 'Density of the carriers the dopant supplies (electrons for donors, holes for acceptors), in cm⁻³.',
-  help: `Solves charge neutrality with incomplete ionization for a sample doped with the given dopant (and, optionally, counter-doped with the opposite type) and returns the density of the carrier type that dopant supplies: electrons for P, As, Sb and n; holes for B, Al, Ga, In and p. If counter_doping exceeds doping the sample changes type and this carrier is then the minority one.`,
+  help: `Solves charge neutrality with incomplete ionization for a sample doped with the given dopant (and, optionally, counter-doped with the opposite type) and returns the density of the carrier type that dopant supplies: electrons for donors (in silicon P, As, Sb and n), holes for acceptors (B, Al, Ga, In and p); the material's dopant table decides which codes are donors (in GaAs, Si is a donor and C an acceptor). If counter_doping exceeds doping the sample changes type and this carrier is then the minority one.`,
   result: { unit: 'cm⁻³', description: 'Majority-carrier density' },
   parameters: [doping, dopant, temperature, material, counterDoping] as const,
   examples: [
@@ -12,7 +12,7 @@ export const MAJORITY = elementwise({
     { formula: '=DRIFT.MAJORITY(1e17,"B",77)', note: 'holes at 77 K: freeze-out lowers them' },
     { formula: '=DRIFT.MAJORITY(1e16,"P",300,,4e15)', note: 'compensated: about 6e15 cm⁻³' },
   ],
-  models: ['altermatt-2006', 'misiakos'],
+  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
   compute: (density, dopantCode, temperatureK, materialValue, counter) =>
     sampleCarrierDensity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), 'majority'),
 });

@@ -5,13 +5,14 @@ import { elementwise } from '../types';
 export const NI = elementwise({
   name: 'NI',
   summary: 'Intrinsic carrier density ni, in cm⁻³.',
-  help: `Returns the intrinsic carrier density ni at the given temperature from the selected published model. The default gives 9.65e9 cm⁻³ for silicon at 300 K. Every carrier-density function uses the same ni, so n·p = ni² holds throughout the catalog.`,
+  help: `Returns the intrinsic carrier density ni at the given temperature from the selected published model. The default gives 9.65e9 cm⁻³ for silicon at 300 K. Ge, GaAs and 4H-SiC have no published ni fit here: their only model, dos, combines the material's band gap and densities of states (about 2.1e13, 2.3e6 and 1.6e-8 cm⁻³ at 300 K); silicon's fits are refused for them. Every carrier-density function uses the same ni, so n·p = ni² holds throughout the catalog.`,
   result: { unit: 'cm⁻³', description: 'Intrinsic carrier density ni' },
   parameters: [requiredTemperature, material, intrinsicModel] as const,
   examples: [
     { formula: '=DRIFT.NI(300)', note: 'silicon at 300 K, 9.65e9 cm⁻³' },
     { formula: '=DRIFT.NI(300,,"sproul-green")', note: 'the same with the Sproul–Green fit' },
+    { formula: '=DRIFT.NI(300,"Ge")', note: 'germanium at 300 K, about 2.1e13 cm⁻³ (dos model)' },
   ],
-  models: ['misiakos', 'sproul-green', 'dos'],
+  models: ['misiakos', 'sproul-green', 'dos', 'thurmond-ge', 'thurmond-gaas', 'levinshtein-gap-4h-sic', 'sze-ng-dos-ge', 'sze-ng-dos-gaas', 'levinshtein-dos-4h-sic'],
   compute: (temperatureK, materialValue, model) => intrinsicDensity(materialValue, temperatureK, model),
 });

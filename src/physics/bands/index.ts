@@ -21,9 +21,28 @@ export {
 export { bandEdges, type BandEdges } from './bandEdges';
 export {
   BOLTZMANN_STATISTICS,
+  FERMI_DIRAC_STATISTICS,
   DEFAULT_CARRIER_STATISTICS,
   levelOccupancy,
   type CarrierStatistics,
   type LevelOccupancy,
 } from './statistics';
+export {
+  fermiDiracIntegral,
+  fermiDiracHalf,
+  fermiDiracMinusHalf,
+  fermiDiracOverBoltzmann,
+  type FermiDiracOrder,
+} from './fermiDirac';
+export {
+  BANDGAP_NARROWING_MODELS,
+  BANDGAP_NARROWING_MODEL_CODES,
+  KLAASSEN_BGN,
+  SLOTBOOM_1976_BGN,
+  apparentBandgapNarrowing,
+  effectiveIntrinsicDensity,
+  resolveBandgapNarrowingModel,
+  type ApparentBandgapNarrowingModel,
+} from './bandgapNarrowing';
+export { einsteinDegeneracyFactor, einsteinDegeneracyRatio } from './einsteinRelation';
 export { BAND_MODELS } from './modelInfo';

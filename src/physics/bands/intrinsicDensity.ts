@@ -14,6 +14,7 @@
 
 import { thermalVoltage } from '../constants';
 import { PhysicsDomainError } from '../errors';
+import { MATERIALS } from '../materials';
 import { SILICON } from '../materials/silicon';
 import type { IntrinsicDensityFit, Material } from '../materials/types';
 import { checkTemperature } from '../materials/temperature';
@@ -53,6 +54,13 @@ export function resolveIntrinsicModel(material: Material, model?: string): strin
   const wanted = String(model).trim().toLowerCase();
   const found = codes.find((code) => code === wanted);
   if (!found) {
+    const owners = MATERIALS.filter((other) => intrinsicModelCodes(other).includes(wanted)).map((other) => other.name);
+    if (owners.length > 0) {
+      throw new PhysicsDomainError(
+        `intrinsic density model '${wanted}' has parameters for ${owners.join(', ')} only; ` +
+          `${material.name} supports: ${codes.join(', ')}`,
+      );
+    }
     throw new PhysicsDomainError(
       `unknown intrinsic density model '${model}' for ${material.name}: allowed models are ${codes.join(', ')}`,
     );

@@ -1,14 +1,15 @@
 import type { ModelInfo } from '../modelInfo';
 
 /**
- * Descriptions of the band-structure, ni, statistics and ionization models, for
+ * Descriptions of the band-structure, ni, statistics, bandgap-narrowing and ionization models, for
  * the model registry (models.ts) and DRIFT.MODELS(). Citations and validity
  * come from the parameter tables themselves so they cannot drift apart.
  */
 
 import { SILICON } from '../materials/silicon';
 import { IONIZATION_MODEL_CODE } from '../ionization';
-import { BOLTZMANN_STATISTICS } from './statistics';
+import { BOLTZMANN_STATISTICS, FERMI_DIRAC_STATISTICS } from './statistics';
+import { BANDGAP_NARROWING_MODELS } from './bandgapNarrowing';
 import { DOS_INTRINSIC_MODEL } from './intrinsicDensity';
 
 const NI = 'intrinsic density ni';
@@ -51,13 +52,39 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     validity: SILICON.densityOfStates.validity,
   },
   {
+    code: FERMI_DIRAC_STATISTICS.code,
+    quantity: 'carrier statistics',
+    name: FERMI_DIRAC_STATISTICS.name,
+    citation:
+      'F½ as normalised by J. S. Blakemore, Solid-State Electron. 25, 1067 (1982); computed by its alternating ' +
+      'series (η ≤ −2), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, SIAM Review 56, 385 ' +
+      '(2014)) and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ 35 (citations from memory); ' +
+      'checked against mpmath polylog values',
+    validity:
+      'parabolic bands with the densities of states of the material; any Fermi level (F½ to 1e-13 relative for ' +
+      'η from −708 up); band tails and non-parabolicity at very heavy doping (≳ 1e20 cm⁻³) are not modelled',
+    notes:
+      'Used by the equilibrium solver (default since issue 3). Non-degenerate results equal Boltzmann ones to ' +
+      'rounding; n·p = ni² then holds to the factor F½(ηc)/e^ηc of the majority carriers (1 − 1.2e-4 at 1e16 cm⁻³, ' +
+      '300 K). Also gives the generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) used by DRIFT.DIFFUSIVITY. ' +
+      'Bandgap narrowing is not included (see klaassen-bgn).',
+  },
+  {
     code: BOLTZMANN_STATISTICS.code,
     quantity: 'carrier statistics',
     name: BOLTZMANN_STATISTICS.name,
     citation: 'common practice, no source',
     validity: 'non-degenerate carriers: Fermi level a few kT inside the gap (about n, p < 1e19 cm⁻³ at 300 K)',
-    notes: 'Used by the equilibrium solver; degenerate densities are approximate.',
+    notes: 'Available in the core for comparison (solveEquilibrium’s statistics argument); the solver default is fermi-dirac.',
   },
+  ...BANDGAP_NARROWING_MODELS.map((model) => ({
+    code: model.code,
+    quantity: 'apparent bandgap narrowing, ni_eff',
+    name: model.name,
+    citation: model.citation,
+    validity: model.validity,
+    notes: model.notes,
+  })),
   {
     code: IONIZATION_MODEL_CODE,
     quantity: 'dopant ionization',

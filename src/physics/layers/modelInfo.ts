@@ -19,7 +19,7 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     name: 'Irvin (1962) integration: Rs = 1/∫q(nμn + pμp)dx from the surface to the junction',
     citation: IRVIN_CITATION,
     validity:
-      'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; no band-gap narrowing or Fermi–Dirac statistics yet, so above about 1e19 cm⁻³ results are approximate.',
+      'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about 1e19 cm⁻³ results are approximate.',
     notes:
       'Each depth is treated as a uniform sample of the layer dopant over the opposite-type background (incomplete ionization, compensation, default mobility model), where Irvin used his bulk resistivity curve and full ionization; depletion at the junction is ignored. Adaptive Gauss–Kronrod (7/15) quadrature, target 1e-6 relative.',
   },

@@ -1,9 +1,12 @@
 /**
- * Host materials and their parameter tables. Only silicon for now.
+ * Host materials and their parameter tables: Si, Ge, GaAs and 4H-SiC.
  */
 
 import { PhysicsDomainError } from '../errors';
+import { GALLIUM_ARSENIDE } from './galliumArsenide';
+import { GERMANIUM } from './germanium';
 import { SILICON } from './silicon';
+import { SILICON_CARBIDE_4H } from './siliconCarbide4H';
 import type { Material } from './types';
 
 export type {
@@ -19,9 +22,14 @@ export type {
   VarshniBandgap,
 } from './types';
 export { SILICON } from './silicon';
+export { GERMANIUM } from './germanium';
+export { GALLIUM_ARSENIDE } from './galliumArsenide';
+export { SILICON_CARBIDE_4H } from './siliconCarbide4H';
 export { checkTemperature } from './temperature';
+export { effectiveBohrRadius, mottDensity, mottScaledIonization, HYDROGENIC_CONSTANTS } from './ionizationScaling';
 
-const MATERIALS: readonly Material[] = [SILICON];
+/** Every host material, in the order users see them; the first is the default. */
+export const MATERIALS: readonly Material[] = [SILICON, GERMANIUM, GALLIUM_ARSENIDE, SILICON_CARBIDE_4H];
 
 /** Codes of the supported materials, as users type them. */
 export const MATERIAL_CODES: readonly string[] = MATERIALS.map((material) => material.code);

@@ -109,6 +109,13 @@ const LOWEST_NUMERIC_TEMPERATURE = 1; // K
 /** 8 atoms per cubic cell, lattice constant 5.431 Å (common practice, no source). */
 const SILICON_ATOMIC_DENSITY = 4.994e22; // cm⁻³
 
+/**
+ * Static relative permittivity of Si, 11.9 (S. M. Sze, K. K. Ng, Physics of
+ * Semiconductor Devices, 3rd ed., Wiley 2007, Appendix table of Si properties;
+ * from memory). Used only to scale dopant ionization models to other hosts.
+ */
+const SILICON_RELATIVE_PERMITTIVITY = 11.9;
+
 export const SILICON: Material = {
   code: 'Si',
   name: 'silicon',
@@ -120,6 +127,10 @@ export const SILICON: Material = {
       '1687 K; each model’s own validated range is narrower (see DRIFT.MODELS)',
   },
   atomicDensity: SILICON_ATOMIC_DENSITY,
+  relativePermittivity: SILICON_RELATIVE_PERMITTIVITY,
+  hostPropertiesCitation:
+    'atomic density (8 atoms per 5.431 Å cubic cell) and melting point 1687 K: common practice, no source; ' +
+    'εr = 11.9: S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)',
   bandgap: THURMOND_1975_BANDGAP,
   densityOfStates: GREEN_1990_DENSITY_OF_STATES,
   intrinsicFits: [MISIAKOS_TSAMAKIS_1993_FIT, SPROUL_GREEN_1991_FIT],

@@ -98,9 +98,12 @@ export interface Dopant {
   readonly ionizationEnergyCitation: string;
   /** Ground-state degeneracy factor: 2 for donors, 4 for acceptors (common practice). */
   readonly degeneracy: number;
-  /** Which dopant-specific mobility parameters apply: 'As' | 'P' | 'B'. */
-  readonly mobilitySpecies: 'As' | 'P' | 'B';
-  /** Why this mobility species was chosen (for dopants without their own fit). */
+  /**
+   * Which row of Masetti's dopant-specific silicon fit applies: 'As' | 'P' | 'B'.
+   * Silicon only; absent in hosts whose mobility fits do not depend on the species.
+   */
+  readonly mobilitySpecies?: 'As' | 'P' | 'B';
+  /** Why this mobility species was chosen, or why none applies. */
   readonly mobilitySpeciesNote: string;
   /** Incomplete-ionization model parameters. */
   readonly ionization: IonizationParameters;
@@ -122,6 +125,10 @@ export interface Material {
   readonly temperatureDomain: TemperatureDomain;
   /** Atomic density, cm⁻³: the total dopant density may not exceed it. */
   readonly atomicDensity: number;
+  /** Static relative permittivity εr (scales hydrogenic dopant orbits, see ionizationScaling.ts). */
+  readonly relativePermittivity: number;
+  /** Where atomicDensity, relativePermittivity and the temperature limits come from. */
+  readonly hostPropertiesCitation: string;
   readonly bandgap: VarshniBandgap;
   readonly densityOfStates: DensityOfStatesModel;
   /** Published ni(T) fits, selectable by code. */

@@ -32,6 +32,11 @@
  * ratio near exact compensation, where the neutral dopants of the two species
  * can outweigh N_net). The factor is continuous, positive and bounded for
  * every sample.
+ *
+ * Scope: the silicon fits only. The Ge, GaAs and 4H-SiC fits (materialFits.ts)
+ * were made against measured free-carrier mobilities, so transport uses them
+ * without this factor; the factor itself is defined, and computed by the same
+ * 300 K solve, for every material.
  */
 import type { Carrier, Sample } from '../sample';
 import { sampleDopants, suppliedCarrier, otherCarrier } from '../sample';

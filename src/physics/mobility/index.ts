@@ -1,6 +1,6 @@
 /**
  * Mobility models by code, the drift mobility used by transport, and the
- * Einstein diffusivity.
+ * (generalized) Einstein diffusivity.
  *
  * Codes (case-insensitive; the first is the default):
  * - 'masetti': Masetti et al. (1983), dopant-specific, at 300 K; away from
@@ -9,53 +9,117 @@
  * - 'arora': Arora et al. (1982) with its own temperature dependence.
  * - 'caughey-thomas': Caughey & Thomas (1967) at 300 K, carried to other
  *   temperatures by the same Arora ratio as 'masetti' (the 1967 fit has none).
+ * - 'klaassen': Klaassen (1992), one model for majority and minority carriers
+ *   with its own temperature dependence; takes N_D, N_A and n, p separately
+ *   (klaassen.ts).
  *
- * All fits take the total impurity density N = N_D + N_A of the sample
- * (common practice for compensated material, no source). Minority carriers use
- * the same fit for their carrier type at that total density (Klaassen's
- * minority-carrier model is not implemented yet).
+ * The other fits take the total impurity density N = N_D + N_A of the sample
+ * (common practice for compensated material, no source). With them minority
+ * carriers use the same fit for their carrier type at that total density.
  *
  * Masetti species: electrons use the named dopant's own row when it is a donor
  * (dopant.mobilitySpecies, 'As' or 'P'), otherwise the P row; holes always use
  * the B row (Masetti gives no other hole row).
+ *
+ * Materials: the models above have silicon parameters only. Ge, GaAs and
+ * 4H-SiC have their own fits (materialFits.ts: 'hilsum', 'sotoodeh',
+ * 'roschke-schwierz'), each the default of its material; a blank code means
+ * the sample material's default, and a code without parameters for the
+ * material is refused with a message naming the models it supports. The
+ * material fits describe free-carrier mobility and are used unchanged (no
+ * full-ionization correction; see materialFits.ts).
  */
 import type { Carrier, Sample } from '../sample';
-import { totalImpurityDensity } from '../sample';
+import { sampleDopants, totalImpurityDensity } from '../sample';
+import { solveEquilibrium } from '../equilibrium';
+import { einsteinDegeneracyFactor } from '../bands/einsteinRelation';
 import { thermalVoltage } from '../constants';
 import { PhysicsDomainError } from '../errors';
 import { MASETTI_TABLE, masettiMobility, type MasettiSpecies } from './masetti';
 import { aroraMobility, aroraTemperatureRatio } from './arora';
 import { caugheyThomasMobility } from './caugheyThomas';
+import { klaassenSampleMobility } from './klaassen';
 import { fullIonizationCorrection, netMajorityCarrier } from './fullIonizationCorrection';
+import { MATERIAL_MOBILITY_FIT_CODES, materialFitMobility, materialMobilityFit, mobilityFitsFor } from './materialFits';
+import { MATERIALS, SILICON, type Material } from '../materials';
 
-/** Mobility model codes; the first is the default. */
-export const MOBILITY_MODEL_CODES = ['masetti', 'arora', 'caughey-thomas'] as const;
+/** Silicon's mobility model codes (silicon parameters only; see mobilityModelCodes); the first is silicon's default. */
+export const MOBILITY_MODEL_CODES = ['masetti', 'arora', 'caughey-thomas', 'klaassen'] as const;
 
 /** A mobility model code. */
 export type MobilityModelCode = (typeof MOBILITY_MODEL_CODES)[number];
 
-/** The default mobility model. */
+/** Silicon's default mobility model (other materials: defaultMobilityModel). */
 export const DEFAULT_MOBILITY_MODEL: MobilityModelCode = MOBILITY_MODEL_CODES[0];
 
+/** Every mobility model code of every material: silicon's (MOBILITY_MODEL_CODES), then the material fits. */
+export const ALL_MOBILITY_MODEL_CODES: readonly string[] = [...MOBILITY_MODEL_CODES, ...MATERIAL_MOBILITY_FIT_CODES];
+
 /**
- * Parses a mobility model code, case-insensitively.
+ * Mobility model codes with parameters for a material; the first is its default.
  *
- * @param code - e.g. 'Masetti'; undefined or '' selects the default
- * @returns the model code
- * @throws PhysicsDomainError listing the allowed codes
- * @example resolveMobilityModel('ARORA') // 'arora'
+ * @param material - host material
+ * @returns silicon: MOBILITY_MODEL_CODES; other hosts: their own fits
+ * @example mobilityModelCodes(GALLIUM_ARSENIDE) // ['sotoodeh']
  */
-export function resolveMobilityModel(code?: string): MobilityModelCode {
-  if (code === undefined || code.trim() === '') return DEFAULT_MOBILITY_MODEL;
+export function mobilityModelCodes(material: Material): readonly string[] {
+  const own = mobilityFitsFor(material.code).map((fit) => fit.code);
+  return material.code === SILICON.code ? [...MOBILITY_MODEL_CODES, ...own] : own;
+}
+
+/**
+ * The default mobility model of a material: Si 'masetti', Ge 'hilsum',
+ * GaAs 'sotoodeh', 4H-SiC 'roschke-schwierz'.
+ *
+ * @param material - host material
+ * @returns its default model code
+ * @example defaultMobilityModel(SILICON) // 'masetti'
+ */
+export function defaultMobilityModel(material: Material): string {
+  return mobilityModelCodes(material)[0];
+}
+
+/**
+ * Names of the materials that have parameters for a model code, for messages.
+ *
+ * @param code - canonical model code
+ * @returns e.g. 'silicon' for 'masetti'
+ */
+export function materialsWithMobilityModel(code: string): string {
+  return MATERIALS.filter((material) => mobilityModelCodes(material).includes(code))
+    .map((material) => material.name)
+    .join(', ');
+}
+
+/**
+ * Parses a mobility model code, case-insensitively, for a material.
+ *
+ * @param code - e.g. 'Masetti'; undefined or '' selects the material's default
+ * @param material - host material (default silicon)
+ * @returns the model code
+ * @throws PhysicsDomainError listing the codes the material supports, for an
+ *   unknown code or one without parameters for the material
+ * @example resolveMobilityModel('ARORA') // 'arora'
+ * @example resolveMobilityModel('', GALLIUM_ARSENIDE) // 'sotoodeh'
+ */
+export function resolveMobilityModel(code?: string, material: Material = SILICON): string {
+  if (code === undefined || code.trim() === '') return defaultMobilityModel(material);
   const normalized = code.trim().toLowerCase();
-  const found = MOBILITY_MODEL_CODES.find((m) => m === normalized);
+  const allowed = mobilityModelCodes(material);
+  const found = allowed.find((m) => m === normalized);
   if (found !== undefined) return found;
+  if (ALL_MOBILITY_MODEL_CODES.includes(normalized)) {
+    throw new PhysicsDomainError(
+      `mobility model '${normalized}' has parameters for ${materialsWithMobilityModel(normalized)} only; ` +
+        `${material.name} supports: ${allowed.join(', ')}.`,
+    );
+  }
   const hint =
     normalized === 'astm-f723'
       ? ` 'astm-f723' converts resistivity and dopant density directly and has no mobility;`
       : '';
   throw new PhysicsDomainError(
-    `unknown mobility model '${code}'.${hint} Allowed: ${MOBILITY_MODEL_CODES.join(', ')}.`,
+    `unknown mobility model '${code}'.${hint} Allowed: ${allowed.join(', ')}.`,
   );
 }
 
@@ -67,10 +131,12 @@ function masettiSpecies(carrier: Carrier, sample: Sample): MasettiSpecies {
 }
 
 /** Fitted mobility for an already-parsed model code. */
-function fitted(model: MobilityModelCode, carrier: Carrier, sample: Sample): number {
+function fitted(model: string, carrier: Carrier, sample: Sample): number {
   const density = totalImpurityDensity(sample);
   const temperature = sample.temperature;
-  switch (model) {
+  const materialFit = materialMobilityFit(model);
+  if (materialFit !== undefined) return materialFitMobility(materialFit, carrier, density, temperature);
+  switch (model as MobilityModelCode) {
     case 'masetti': {
       const row = MASETTI_TABLE[masettiSpecies(carrier, sample)].parameters;
       return masettiMobility(row, density) * aroraTemperatureRatio(carrier, density, temperature);
@@ -79,6 +145,8 @@ function fitted(model: MobilityModelCode, carrier: Carrier, sample: Sample): num
       return aroraMobility(carrier, density, temperature);
     case 'caughey-thomas':
       return caugheyThomasMobility(carrier, density) * aroraTemperatureRatio(carrier, density, temperature);
+    case 'klaassen':
+      return klaassenSampleMobility(carrier, sample);
   }
 }
 
@@ -106,7 +174,7 @@ function checked(value: number, what: string, carrier: Carrier, sample: Sample):
  * @example fitMobility('masetti', 'electron', phosphorus1e16At300K) // ≈ 1184
  */
 export function fitMobility(model: string, carrier: Carrier, sample: Sample): number {
-  const code = resolveMobilityModel(model);
+  const code = resolveMobilityModel(model, sample.material);
   return checked(fitted(code, carrier, sample), 'the fitted mobility', carrier, sample);
 }
 
@@ -129,9 +197,11 @@ export interface DriftMobilities {
  * @example driftMobilities('masetti', phosphorus1e18At300K) // { electron: ≈ 343 (277 × 1.24), hole: ≈ 160 }
  */
 export function driftMobilities(model: string, sample: Sample): DriftMobilities {
-  const code = resolveMobilityModel(model);
+  const code = resolveMobilityModel(model, sample.material);
   const majority = netMajorityCarrier(sample);
-  const correction = majority === undefined ? 1 : fullIonizationCorrection(sample);
+  // Material fits describe free carriers already (materialFits.ts): no correction.
+  const corrected = majority !== undefined && materialMobilityFit(code) === undefined;
+  const correction = corrected ? fullIonizationCorrection(sample) : 1;
   const drift = (carrier: Carrier): number => {
     const fit = fitted(code, carrier, sample);
     return checked(carrier === majority ? fit * correction : fit, 'the drift mobility', carrier, sample);
@@ -155,8 +225,12 @@ export function mobility(model: string, carrier: Carrier, sample: Sample): numbe
 }
 
 /**
- * Diffusivity from the Einstein relation D = μ·kT/q (non-degenerate
- * statistics), with μ the drift mobility of `mobility`.
+ * Diffusivity from the generalized Einstein relation
+ * D = μ·(kT/q)·F½(η)/F−½(η), η the carrier's reduced Fermi level relative to
+ * its band edge in the sample's equilibrium (Fermi–Dirac statistics, parabolic
+ * bands; bands/einsteinRelation.ts), with μ the drift mobility of `mobility`.
+ * It is μ·kT/q for non-degenerate carriers (factor 1 + e^η/2^{3/2}) and larger
+ * in degenerate material (about 2.1 for electrons in 1e20 cm⁻³ P-doped Si at 300 K).
  *
  * @param model - mobility model code (case-insensitive)
  * @param carrier - 'electron' or 'hole'
@@ -165,5 +239,8 @@ export function mobility(model: string, carrier: Carrier, sample: Sample): numbe
  * @example diffusivity('masetti', 'electron', phosphorus1e16At300K) // ≈ 30.7
  */
 export function diffusivity(model: string, carrier: Carrier, sample: Sample): number {
-  return mobility(model, carrier, sample) * thermalVoltage(sample.temperature);
+  const drift = mobility(model, carrier, sample);
+  const state = solveEquilibrium(sample.material, sample.temperature, sampleDopants(sample));
+  const degeneracy = einsteinDegeneracyFactor(sample.material, sample.temperature, carrier, state.fermiLevel);
+  return drift * thermalVoltage(sample.temperature) * degeneracy;
 }

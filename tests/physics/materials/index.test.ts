@@ -2,8 +2,8 @@ import { PhysicsDomainError } from '../../../src/physics/errors';
 import { checkTemperature, MATERIAL_CODES, resolveMaterial, SILICON } from '../../../src/physics/materials';
 
 describe('materials', () => {
-  it('lists silicon only, for now', () => {
-    expect(MATERIAL_CODES).toEqual(['Si']);
+  it('lists silicon first (the default), then germanium, gallium arsenide and 4H silicon carbide', () => {
+    expect(MATERIAL_CODES).toEqual(['Si', 'Ge', 'GaAs', '4H-SiC']);
   });
 
   it('resolves codes case-insensitively and ignores surrounding blanks', () => {
@@ -13,8 +13,8 @@ describe('materials', () => {
   });
 
   it('rejects unknown codes, naming the allowed ones', () => {
-    expect(() => resolveMaterial('GaAs')).toThrow(PhysicsDomainError);
-    expect(() => resolveMaterial('GaAs')).toThrow(/unknown material 'GaAs'.*Si/);
+    expect(() => resolveMaterial('GaN')).toThrow(PhysicsDomainError);
+    expect(() => resolveMaterial('GaN')).toThrow(/unknown material 'GaN'.*Si, Ge, GaAs, 4H-SiC/);
   });
 
   it('gives every parameter table a citation and a validity range', () => {

@@ -12,12 +12,16 @@ import { aroraMobility, aroraTemperatureRatio } from '../../../src/physics/mobil
 import { caugheyThomasMobility } from '../../../src/physics/mobility/caugheyThomas';
 import { fullIonizationCorrection } from '../../../src/physics/mobility/fullIonizationCorrection';
 import { thermalVoltage } from '../../../src/physics/constants';
+import { einsteinDegeneracyFactor } from '../../../src/physics/bands';
+import { solveEquilibrium } from '../../../src/physics/equilibrium';
+import { SILICON } from '../../../src/physics/materials';
+import { sampleDopants } from '../../../src/physics/sample';
 import { PhysicsDomainError } from '../../../src/physics/errors';
 import { siliconSample } from '../transportSamples';
 
 describe('mobility model codes', () => {
-  it('lists masetti (default), arora, caughey-thomas', () => {
-    expect(MOBILITY_MODEL_CODES).toEqual(['masetti', 'arora', 'caughey-thomas']);
+  it('lists masetti (default), arora, caughey-thomas, klaassen', () => {
+    expect(MOBILITY_MODEL_CODES).toEqual(['masetti', 'arora', 'caughey-thomas', 'klaassen']);
     expect(DEFAULT_MOBILITY_MODEL).toBe('masetti');
   });
   it('parses codes case-insensitively; empty selects the default', () => {
@@ -27,7 +31,7 @@ describe('mobility model codes', () => {
     expect(resolveMobilityModel()).toBe('masetti');
   });
   it('rejects unknown codes listing the allowed ones, and explains astm-f723', () => {
-    expect(() => resolveMobilityModel('klaassen')).toThrow(/Allowed: masetti, arora, caughey-thomas/);
+    expect(() => resolveMobilityModel('no-such-model')).toThrow(/Allowed: masetti, arora, caughey-thomas, klaassen/);
     expect(() => resolveMobilityModel('astm-f723')).toThrow(/no mobility/);
     expect(() => fitMobility('x', 'hole', siliconSample('B', 1e16))).toThrow(PhysicsDomainError);
   });
@@ -91,11 +95,20 @@ describe('mobility (drift)', () => {
 });
 
 describe('diffusivity', () => {
-  it('is the Einstein relation D = μ·kT/q with the drift mobility', () => {
+  it('is the generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) with the drift mobility', () => {
     for (const t of [77, 300, 600]) {
       const sample = siliconSample('As', 1e17, t);
-      expect(diffusivity('masetti', 'electron', sample)).toBe(mobility('masetti', 'electron', sample) * thermalVoltage(t));
+      const state = solveEquilibrium(SILICON, t, sampleDopants(sample));
+      const factor = einsteinDegeneracyFactor(SILICON, t, 'electron', state.fermiLevel);
+      expect(diffusivity('masetti', 'electron', sample)).toBe(mobility('masetti', 'electron', sample) * thermalVoltage(t) * factor);
+      // 1e17 cm⁻³ is non-degenerate: the factor is 1 + e^η/2^{3/2} + … ≈ 1 to under 1 %.
+      expect(factor).toBeGreaterThanOrEqual(1);
+      expect(factor).toBeLessThan(1.01);
     }
+  });
+  it('grows above μ·kT/q in degenerate n+ silicon (5e19 cm⁻³ As at 300 K)', () => {
+    const sample = siliconSample('As', 5e19, 300);
+    expect(diffusivity('masetti', 'electron', sample) / (mobility('masetti', 'electron', sample) * thermalVoltage(300))).toBeGreaterThan(1.2);
   });
   it('is about 30.7 cm²/s for electrons in 1e16 P-doped Si at 300 K (Masetti 1983: 1184 × 1.004 ionization factor × kT/q 0.02585)', () => {
     expect(diffusivity('masetti', 'electron', siliconSample('P', 1e16))).toBeGreaterThan(30.4);

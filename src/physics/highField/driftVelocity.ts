@@ -1,0 +1,30 @@
+/**
+ * Drift velocity of a carrier type in a uniform field: the Caughey–Thomas
+ * form with the sample's own low-field drift mobility μ0 (the one
+ * DRIFT.MOBILITY and DRIFT.CONDUCTIVITY use) and the material's tabulated
+ * v_sat(T) and β(T). Combining a doping-dependent μ0 with v_sat and β
+ * measured in pure material is common practice, no source.
+ */
+import type { Carrier, Sample } from '../sample';
+import { driftMobilities } from '../mobility';
+import { caugheyThomasVelocity } from './caugheyThomasField';
+import { fieldExponent, saturationVelocity } from './saturationVelocity';
+
+/**
+ * Drift velocity v(E) = μ0·E / (1 + (μ0·|E|/v_sat)^β)^(1/β).
+ *
+ * @param field - E, V/cm (sign gives the direction)
+ * @param carrier - 'electron' or 'hole'
+ * @param sample - the sample (material, temperature, dopants)
+ * @param model - mobility model code for μ0; '' or undefined is the material's default
+ * @returns v in cm/s, with the sign of E (carriers' charge sign not applied)
+ * @throws PhysicsDomainError where the material has no saturation velocity for the carrier or temperature
+ * @example driftVelocity(1e4, 'electron', phosphorus1e16At300K) // ≈ 6.0e6 cm/s
+ */
+export function driftVelocity(field: number, carrier: Carrier, sample: Sample, model = ''): number {
+  const code = sample.material.code;
+  const vsat = saturationVelocity(code, carrier, sample.temperature);
+  const beta = fieldExponent(code, carrier, sample.temperature);
+  const lowFieldMobility = driftMobilities(model, sample)[carrier];
+  return caugheyThomasVelocity(field, lowFieldMobility, vsat, beta);
+}

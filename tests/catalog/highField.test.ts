@@ -1,0 +1,112 @@
+/**
+ * DRIFT.VELOCITY, DRIFT.VSAT, DRIFT.CURRENTDENSITY's saturating form and
+ * DRIFT.TCR as a user meets them: identities with the other functions,
+ * defaults, and the messages bad input gets. Published values are checked
+ * in tests/physics/reference (canali-1975, quay-2000, khan-cooper-2000,
+ * jacoboni-1977); identities here are definitions (common practice, no source).
+ */
+import { ELEMENTARY_CHARGE } from '../../src/physics';
+import { message, value } from './support/call';
+
+describe('DRIFT.VELOCITY', () => {
+  it('is MOBILITY·E at vanishing field for every carrier role, and tends to VSAT at high field', () => {
+    for (const role of ['majority', 'minority', 'electron', 'hole']) {
+      const mu = value('MOBILITY', 1e16, 'P', 300, role);
+      expect(value('VELOCITY', 1e-15, 1e16, 'P', 300, role)).toBe(mu * 1e-15);
+    }
+    expect(value('VELOCITY', 1e8, 1e16, 'P') / value('VSAT')).toBeCloseTo(1, 2);
+    expect(value('VELOCITY', -1e8, 1e16, 'B') / -value('VSAT', 300, 'hole')).toBeCloseTo(1, 2);
+  });
+
+  it('defaults to the majority carrier at 300 K in Si', () => {
+    expect(value('VELOCITY', 1e4, 1e16, 'B')).toBe(value('VELOCITY', 1e4, 1e16, 'B', 300, 'hole', 'Si'));
+    expect(value('VELOCITY', 1e4, 1e16, 'P')).toBe(value('VELOCITY', 1e4, 1e16, 'P', 300, 'electron'));
+  });
+
+  it('works for Ge, GaAs and 4H-SiC electrons, and refuses 4H-SiC holes', () => {
+    expect(value('VELOCITY', 1e-15, 1e16, 'As', 300, 'electron', 'Ge')).toBe(value('MOBILITY', 1e16, 'As', 300, 'electron', null, 'Ge') * 1e-15);
+    expect(value('VELOCITY', 1e8, 1e16, 'Si', 300, 'electron', 'GaAs') / value('VSAT', 300, 'electron', 'GaAs')).toBeCloseTo(1, 2);
+    expect(value('VELOCITY', 1e8, 1e16, 'N', 300, 'electron', '4H-SiC') / 2.2e7).toBeCloseTo(1, 2);
+    expect(message('VELOCITY', 1e4, 1e16, 'N', 300, 'minority', '4H-SiC')).toMatch(/no published hole saturation velocity for 4H-SiC/);
+  });
+
+  it('names the temperature range where no saturation velocity is tabulated', () => {
+    expect(message('VELOCITY', 1e4, 1e16, 'P', 50)).toMatch(/77–1000 K/);
+    expect(message('VELOCITY', 1e4, 1e16, 'N', 400, null, '4H-SiC')).toMatch(/only 300 K/);
+    expect(message('VELOCITY', 'fast', 1e16, 'P')).toMatch(/field_V_per_cm must be a number/);
+  });
+});
+
+describe('DRIFT.VSAT', () => {
+  it('defaults to electrons in Si at 300 K', () => {
+    expect(value('VSAT')).toBe(value('VSAT', 300, 'electron', 'Si'));
+    expect(value('VSAT', null, 'HOLE')).toBe(value('VSAT', 300, 'hole'));
+  });
+
+  it('refuses majority and minority (no dopant) and unknown carriers, listing electron and hole', () => {
+    expect(message('VSAT', 300, 'majority')).toMatch(/needs a dopant.*allowed: electron, hole/);
+    expect(message('VSAT', 300, 'Minority')).toMatch(/allowed: electron, hole/);
+    expect(message('VSAT', 300, 'ion')).toMatch(/allowed: electron, hole/);
+  });
+
+  it('refuses 4H-SiC holes with the stated message', () => {
+    expect(message('VSAT', 300, 'hole', '4H-SiC')).toMatch(/no published hole saturation velocity for 4H-SiC in this release/);
+  });
+});
+
+describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
+  it('is q(n·vn + p·vp) with n, p from ELECTRONS/HOLES-consistent MAJORITY/MINORITY and v from VELOCITY', () => {
+    for (const [field, doping, dopant] of [[3e3, 1e16, 'P'], [-2e4, 1e17, 'B'], [5e5, 1e15, 'As']] as const) {
+      const nMajority = value('MAJORITY', doping, dopant);
+      const nMinority = value('MINORITY', doping, dopant);
+      const vMajority = value('VELOCITY', field, doping, dopant, 300, 'majority');
+      const vMinority = value('VELOCITY', field, doping, dopant, 300, 'minority');
+      expect(value('CURRENTDENSITY', field, doping, dopant) / (ELEMENTARY_CHARGE * (nMajority * vMajority + nMinority * vMinority))).toBeCloseTo(1, 12);
+    }
+  });
+
+  it('gives J/(σE) → 1 as E → 0 and about 1 − 4e-5 at 1 V/cm in 1e16 cm⁻³ n-type Si', () => {
+    const sigma = value('CONDUCTIVITY', 1e16, 'P');
+    expect(value('CURRENTDENSITY', 1e-15, 1e16, 'P') / (sigma * 1e-15)).toBeCloseTo(1, 13);
+    // Shortfall ≈ (μE/v_sat)^β/β with Canali's β ≈ 1.109 (Canali et al. 1975, from memory): 3.7e-5.
+    const shortfall = 1 - value('CURRENTDENSITY', 1, 1e16, 'P') / sigma;
+    expect(shortfall).toBeGreaterThan(2e-5);
+    expect(shortfall).toBeLessThan(6e-5);
+  });
+
+  it('keeps its argument positions; field_dependence "ohmic" gives σE and other codes are refused', () => {
+    expect(value('CURRENTDENSITY', 1e4, 1e16, 'P', 350, 'Si', 1e15, 'OHMIC')).toBeCloseTo(1e4 * value('CONDUCTIVITY', 1e16, 'P', 350, null, null, 1e15), 8);
+    expect(message('CURRENTDENSITY', 1e4, 1e16, 'P', 300, null, null, 'linear')).toMatch(/allowed: saturating, ohmic/);
+  });
+
+  it('points to the ohmic form where the saturating form has no data', () => {
+    expect(message('CURRENTDENSITY', 1e3, 1e16, 'P', 40)).toMatch(/77–1000 K.*ohmic/);
+    expect(message('CURRENTDENSITY', 1e3, 1e16, 'Al', 300, '4H-SiC')).toMatch(/no published hole saturation velocity.*ohmic/);
+    expect(value('CURRENTDENSITY', 1e3, 1e16, 'P', 40, null, null, 'ohmic')).toBeGreaterThan(0);
+  });
+});
+
+describe('DRIFT.TCR', () => {
+  it('is positive for lightly doped Si at 300 K (about +7000 ppm/K at 1e15 cm⁻³; handbook-level, from memory)', () => {
+    expect(value('TCR', 1e15, 'P')).toBeGreaterThan(5000);
+    expect(value('TCR', 1e15, 'P')).toBeLessThan(9000);
+  });
+
+  it('is negative in freeze-out and in the intrinsic regime, and defined at both ends of 20–1000 K', () => {
+    expect(value('TCR', 1e15, 'P', 20)).toBeLessThan(0);
+    expect(value('TCR', 1e14, 'B', 600)).toBeLessThan(0);
+    expect(value('TCR', 1e14, 'P', 1000)).toBeLessThan(0);
+  });
+
+  it('agrees with a wide central difference of DRIFT.RESISTIVITY to its truncation error', () => {
+    // Over ±0.5 K the central difference of ln ρ is accurate to ~1e-6 relative at 300 K.
+    const up = value('RESISTIVITY', 1e16, 'B', 300.5);
+    const down = value('RESISTIVITY', 1e16, 'B', 299.5);
+    expect(value('TCR', 1e16, 'B') / (1e6 * Math.log(up / down))).toBeCloseTo(1, 5);
+  });
+
+  it('refuses astm-f723 and temperatures outside 20–1000 K', () => {
+    expect(message('TCR', 1e15, 'B', 300, 'astm-f723')).toMatch(/no temperature dependence/);
+    expect(message('TCR', 1e15, 'B', 1200)).toMatch(/temperature_K must be/);
+  });
+});
