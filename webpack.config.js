@@ -4,7 +4,10 @@
  * - taskpane.html, the shared-runtime page that loads Office.js, then both bundles;
  * - functions.json and help/*.html, generated from the catalog as compiled by
  *   tsc into dist/node (package.json "build" runs tsc before webpack);
- * - the icons and the task pane stylesheet.
+ * - the icons and the task pane stylesheets (taskpane.css, tools.css).
+ *
+ * The pane's test harness (engine-backed, HyperFormula inside) has its own
+ * config, tests/taskpane/harness/webpack.config.js, and never lands in dist/addin.
  */
 'use strict';
 const fs = require('fs');
@@ -115,6 +118,8 @@ module.exports = (env, argv) => {
         patterns: [
           { from: 'assets/*.png', to: 'assets/[name][ext]' },
           { from: 'src/taskpane/taskpane.css', to: 'taskpane.css' },
+          // The tools' own stylesheet (certificate check, function reference).
+          { from: 'src/taskpane/tools.css', to: 'tools.css' },
         ],
       }),
       new CatalogFilesPlugin(),

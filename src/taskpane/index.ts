@@ -1,10 +1,16 @@
 /**
- * Task pane script (bundled as taskpane.js). The pane only hosts the shared
+ * Task pane script (bundled as taskpane.js). The pane hosts the shared
  * runtime and says where it runs: inside Excel it reports how many DRIFT
- * functions the functions bundle bound; anywhere else the page keeps its
- * "outside Excel" text, with the reason added.
+ * functions the functions bundle bound, follows the Office theme and mounts
+ * the tools (sweep builder, certificate check, function reference) on the
+ * Excel workbook port; anywhere else the page keeps its "outside Excel" text,
+ * with the reason added, and shows no tools (they need a workbook).
  */
 import { readStatus } from '../excel/status';
+import { createExcelPort } from './excelPort';
+import { applyTheme } from './shell/theme';
+import { mountTools } from './shell/start';
+import { PANE_TOOLS } from './shell/toolList';
 
 /** Where the page finds itself. */
 export type PaneSituation =
@@ -50,6 +56,8 @@ export function startPane(doc: Document = document): void {
   void office.onReady((info) => {
     if (info.host === office.HostType.Excel) {
       show({ kind: 'excel', boundCount: readStatus()?.boundIds.length ?? 0 }, doc);
+      if (doc.documentElement !== undefined) applyTheme(doc, office.context?.officeTheme?.bodyBackgroundColor);
+      mountTools(doc, createExcelPort(), PANE_TOOLS);
     } else {
       show({ kind: 'not-excel', host: info.host === null || info.host === undefined ? null : String(info.host) }, doc);
     }

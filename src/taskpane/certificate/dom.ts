@@ -1,0 +1,87 @@
+/**
+ * A few DOM helpers for the pane's tools: plain elements, no framework.
+ * Every control the tools build goes through `labelledControl`, so none is
+ * left without a label.
+ */
+
+/** Attributes and properties for `element`: strings become attributes, `text` the text content. */
+export type ElementOptions = Readonly<Record<string, string | boolean | undefined>> & { readonly text?: string };
+
+/**
+ * Creates an element with attributes and children.
+ *
+ * @param doc - the pane's document
+ * @param tag - element name
+ * @param options - attributes (false/undefined omitted, true as empty), `text` for text content
+ * @param children - appended in order
+ * @example element(document, 'button', { type: 'button', text: 'Check' })
+ */
+export function element<K extends keyof HTMLElementTagNameMap>(
+  doc: Document,
+  tag: K,
+  options: ElementOptions = {},
+  children: readonly (Node | string)[] = [],
+): HTMLElementTagNameMap[K] {
+  const node = doc.createElement(tag);
+  for (const [name, value] of Object.entries(options)) {
+    if (name === 'text') node.textContent = String(value ?? '');
+    else if (value === true) node.setAttribute(name, '');
+    else if (typeof value === 'string') node.setAttribute(name, value);
+  }
+  for (const child of children) node.append(typeof child === 'string' ? doc.createTextNode(child) : child);
+  return node;
+}
+
+/**
+ * A labelled field: `<div class="dc-field"><label for=id>…</label>control</div>`.
+ *
+ * @param doc - document
+ * @param label - visible label text
+ * @param control - input or select; its id must be set
+ * @param hint - optional help text, tied to the control by aria-describedby
+ */
+export function labelledControl(doc: Document, label: string, control: HTMLElement, hint?: string): HTMLDivElement {
+  const field = element(doc, 'div', { class: 'dc-field' }, [element(doc, 'label', { for: control.id, text: label }), control]);
+  if (hint !== undefined) {
+    const hintId = `${control.id}-hint`;
+    control.setAttribute('aria-describedby', hintId);
+    field.append(element(doc, 'p', { class: 'dc-hint', id: hintId, text: hint }));
+  }
+  return field;
+}
+
+/**
+ * A <select> of options.
+ *
+ * @param doc - document
+ * @param id - element id
+ * @param options - [value, label] pairs
+ * @param selected - value to select
+ */
+export function selectOf(doc: Document, id: string, options: readonly (readonly [string, string])[], selected: string): HTMLSelectElement {
+  const select = element(doc, 'select', { id });
+  for (const [value, label] of options) {
+    const option = element(doc, 'option', { value, text: label });
+    option.selected = value === selected;
+    select.append(option);
+  }
+  return select;
+}
+
+/**
+ * Reads a number typed by the user ('1e15', '2.5E+16', ' 300 ').
+ *
+ * @param text - field text
+ * @param what - what the field is, for the message
+ * @returns the number, or null when the field is blank
+ * @throws Error saying what was typed and what is allowed
+ * @example parseNumberField('1e15', 'Needed doping min') // 1e15
+ */
+export function parseNumberField(text: string, what: string): number | null {
+  const trimmed = text.trim();
+  if (trimmed === '') return null;
+  if (!/^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(trimmed)) {
+    throw new Error(`${what}: '${trimmed}' is not a number; type digits with a point for decimals, e.g. 1e15 or 2.5E+16.`);
+  }
+  return Number(trimmed);
+}

@@ -1,0 +1,279 @@
+/**
+ * Plans the certificate check: new columns of live DRIFT formulas to the right
+ * of a supplier's table, one formula per wafer row, and a small block of
+ * labelled parameter cells (the needed doping window, temperature, model,
+ * material…) that every formula references, so changing a parameter cell
+ * re-checks the whole table. The plan is data (see sheetPlan.ts); nothing
+ * here touches a workbook.
+ *
+ * Layout, left to right, starting in the first column after the table:
+ *   [dopant code] | doping at ρmax | doping at ρmin | window check | [readings check] | [Rs] | [radial variation] | pass/fail
+ *   (one empty column) | parameter label | parameter value
+ *
+ * Pass/fail: PASS when the window check says "yes", the readings check (if
+ * readings are mapped) is not "no", and |radial variation| is within the
+ * optional limit; FAIL otherwise. An error in a row's inputs shows as that
+ * error (with its message) rather than as PASS or FAIL.
+ */
+import { blockAddress, columnName, type CellBlock, type CellInput } from '../port';
+import { callText, parameterNamed } from '../reference/callText';
+import { READING_ROLES, type ColumnRole } from './roles';
+import type { CertificateSettings, CertificateTable } from './settings';
+import { sheetAddress, type SheetPlan } from './sheetPlan';
+import { dopantCodeFormula } from './typeCodes';
+import { RESISTIVITY_UNITS, THICKNESS_UNITS, unitByCode } from './units';
+import { catalogEntry, rowWarnings, validateSettings } from './validate';
+
+export type { CertificateSettings, CertificateTable, WindowRule } from './settings';
+
+/** The plan plus what the pane tells the user. */
+export interface CertificatePlan extends SheetPlan {
+  /** Headers of the new columns, left to right. */
+  readonly headers: readonly string[];
+  /** All new columns, header row included. */
+  readonly columnsBlock: CellBlock;
+  /** The pass/fail cells (data rows only). */
+  readonly passFailBlock: CellBlock;
+  /** Labels and values of the parameter cells. */
+  readonly parameterBlock: CellBlock;
+  /** Problems in single rows that do not stop the check (unknown type, swapped window…). */
+  readonly warnings: readonly string[];
+  /** One sentence saying what will be written where. */
+  readonly summary: string;
+}
+
+/** Words the formulas write; the highlight rules match them exactly. */
+export const VERDICT = { pass: 'PASS', fail: 'FAIL', yes: 'yes', no: 'no', none: 'none' } as const;
+
+/** Highlight colours of our own choosing, readable in light and dark sheets. */
+const PASS_COLOURS = { fill: '#cdebd6', fontColor: '#0f4d26' } as const;
+const FAIL_COLOURS = { fill: '#f6d3cf', fontColor: '#7a1a10' } as const;
+
+const FORMATS = { density: '0.00E+00', sheetResistance: '0.0', percent: '0.00' } as const;
+
+/** A1 references of several columns in one row, contiguous runs as ranges: 'F2:H2,J2'. */
+export function rowReferences(columns: readonly number[], row: number): string {
+  const sorted = [...columns].sort((a, b) => a - b);
+  const parts: string[] = [];
+  for (let i = 0; i < sorted.length; ) {
+    let j = i;
+    while (j + 1 < sorted.length && sorted[j + 1] === sorted[j] + 1) j += 1;
+    const first = `${columnName(sorted[i])}${row + 1}`;
+    parts.push(j === i ? first : `${first}:${columnName(sorted[j])}${row + 1}`);
+    i = j + 1;
+  }
+  return parts.join(',');
+}
+
+function scaled(expression: string, factor: number): string {
+  return factor === 1 ? expression : `${expression}*${factor}`;
+}
+
+function absolute(row: number, column: number): string {
+  return `$${columnName(column)}$${row + 1}`;
+}
+
+/** One new column: header, number format, and its formula for a sheet row. */
+interface PlannedColumn {
+  readonly header: string;
+  readonly numberFormat?: string;
+  readonly formula: (sheetRow: number) => string;
+}
+
+/** One labelled parameter cell. */
+interface PlannedParameter {
+  readonly key: string;
+  readonly label: string;
+  readonly value: CellInput;
+  readonly numberFormat?: string;
+}
+
+/**
+ * Plans the check of a certificate table.
+ *
+ * @param table - the selection (header row + wafer rows) and its contents
+ * @param settings - mapping, needed window and options from the pane
+ * @returns the cells, styles and highlights to write, with warnings and a summary
+ * @throws PaneRefusal with a message for the user when the table or settings cannot be checked
+ * @example planCertificateCheck(table, { ...settings, neededMin: 1e15, neededMax: 2e15 }).headers
+ */
+export function planCertificateCheck(table: CertificateTable, settings: CertificateSettings): CertificatePlan {
+  const { block, contents } = table;
+  const headers = (contents.values[0] ?? []).map((value) => (value === null || typeof value === 'object' ? '' : String(value)));
+  validateSettings(table, settings, headers);
+  const warnings = rowWarnings(table, settings);
+
+  const doping = catalogEntry('DOPING');
+  const sheetRes = catalogEntry('SHEETRES');
+  const radial = catalogEntry('RADIALVARIATION');
+  const densityUnit = doping.result.unit ?? 'cm⁻³';
+
+  const sheetColumn = (role: ColumnRole): number => block.column + settings.mapping.indexOf(role);
+  const columnsOf = (roles: ReadonlySet<ColumnRole> | ColumnRole): number[] =>
+    settings.mapping.flatMap((role, index) =>
+      (typeof roles === 'string' ? role === roles : roles.has(role)) ? [block.column + index] : [],
+    );
+  const has = (role: ColumnRole): boolean => settings.mapping.includes(role);
+  const ref = (role: ColumnRole, sheetRow: number): string => `${columnName(sheetColumn(role))}${sheetRow + 1}`;
+
+  const rhoFactor = unitByCode(RESISTIVITY_UNITS, settings.resistivityUnit).factor;
+  const readingColumns = columnsOf(READING_ROLES);
+  const edgeColumns = columnsOf('rho-edge');
+  const hasRadial = has('rho-center') && edgeColumns.length > 0;
+  const radialLimit = hasRadial ? settings.radialLimitPercent : null;
+  if (!hasRadial && settings.radialLimitPercent !== null) {
+    warnings.push('The radial variation limit is not used: map a centre column and at least one edge column to check it.');
+  }
+
+  // Parameter block: to the right of the new columns, after one empty column.
+  const parameters: PlannedParameter[] = [
+    { key: 'title', label: 'Certificate check parameters', value: null },
+    { key: 'neededMin', label: `Needed doping min (${densityUnit})`, value: settings.neededMin, numberFormat: FORMATS.density },
+    { key: 'neededMax', label: `Needed doping max (${densityUnit})`, value: settings.neededMax, numberFormat: FORMATS.density },
+    ...(has('type') ? [] : [{ key: 'dopant', label: 'Dopant (no type column)', value: settings.dopant.trim() }]),
+    { key: 'temperature', label: `Temperature (${parameterNamed(doping, 'temperature_K').unit ?? 'K'})`, value: settings.temperatureK },
+    // A model or material left to its default gets no cell: the formulas then omit the argument, rather than
+    // pass a reference to a blank cell (how Excel hands a blank cell to a custom function is not documented).
+    ...(settings.model.trim() === '' ? [] : [{ key: 'model', label: 'Doping model', value: settings.model.trim() }]),
+    ...(settings.material.trim() === '' ? [] : [{ key: 'material', label: 'Material', value: settings.material.trim() }]),
+    ...(radialLimit === null ? [] : [{ key: 'radialLimit', label: `Max |radial variation| (${radial.result.unit ?? '%'})`, value: radialLimit }]),
+  ];
+
+  const columns: PlannedColumn[] = [];
+  const firstNew = block.column + block.columnCount;
+  const newColumn = (offset: number): string => columnName(firstNew + offset);
+  // Parameter cell references need the parameter block's column, known once the column count is;
+  // columns are built as closures and the block column is fixed below before any formula is produced.
+  let parameterColumn = -1;
+  const optionalParameterRef = (key: string): string | undefined =>
+    parameters.some((parameter) => parameter.key === key) ? parameterRef(key) : undefined;
+  const parameterRef = (key: string): string => {
+    const index = parameters.findIndex((parameter) => parameter.key === key);
+    if (index < 0) throw new Error(`no parameter '${key}'`);
+    return absolute(block.row + index, parameterColumn + 1);
+  };
+
+  const dopantColumn = has('type') ? columns.length : -1;
+  if (has('type')) {
+    columns.push({
+      header: settings.typeMeansConductivity ? 'Dopant code (P/N read as p-/n-type)' : 'Dopant code',
+      formula: (row) => dopantCodeFormula(ref('type', row), settings.typeMeansConductivity),
+    });
+  }
+  const dopantArgument = (row: number): string => (dopantColumn >= 0 ? `${newColumn(dopantColumn)}${row + 1}` : parameterRef('dopant'));
+  const dopingAt = (role: 'rho-min' | 'rho-max') => (row: number): string =>
+    callText(doping, {
+      resistivity: scaled(ref(role, row), rhoFactor),
+      dopant: dopantArgument(row),
+      temperature_K: parameterRef('temperature'),
+      model: optionalParameterRef('model'),
+      material: optionalParameterRef('material'),
+    });
+  const atRhoMaxColumn = columns.length;
+  columns.push({ header: `Doping at ρmax (${densityUnit})`, numberFormat: FORMATS.density, formula: dopingAt('rho-max') });
+  const atRhoMinColumn = columns.length;
+  columns.push({ header: `Doping at ρmin (${densityUnit})`, numberFormat: FORMATS.density, formula: dopingAt('rho-min') });
+
+  const windowColumn = columns.length;
+  columns.push({
+    header: settings.windowRule === 'certified-inside-needed' ? 'Certified doping inside needed window' : 'Needed window inside certified doping',
+    formula: (row) => {
+      const pair = `${newColumn(atRhoMaxColumn)}${row + 1},${newColumn(atRhoMinColumn)}${row + 1}`;
+      const [low, high] = [`MIN(${pair})`, `MAX(${pair})`];
+      const [min, max] = [parameterRef('neededMin'), parameterRef('neededMax')];
+      const inside = settings.windowRule === 'certified-inside-needed' ? `AND(${low}>=${min},${high}<=${max})` : `AND(${low}<=${min},${high}>=${max})`;
+      return `IF(${inside},"${VERDICT.yes}","${VERDICT.no}")`;
+    },
+  });
+
+  const readingsColumn = readingColumns.length > 0 ? columns.length : -1;
+  if (readingsColumn >= 0) {
+    columns.push({
+      header: 'Readings inside ρ window',
+      formula: (row) => {
+        const readings = rowReferences(readingColumns, row);
+        const window = `${ref('rho-min', row)},${ref('rho-max', row)}`;
+        return `IF(COUNT(${readings})=0,"${VERDICT.none}",IF(AND(MIN(${readings})>=MIN(${window}),MAX(${readings})<=MAX(${window})),"${VERDICT.yes}","${VERDICT.no}"))`;
+      },
+    });
+  }
+
+  if (has('thickness')) {
+    const thicknessFactor = unitByCode(THICKNESS_UNITS, settings.thicknessUnit ?? '').factor;
+    const fromReadings = readingColumns.length > 0;
+    columns.push({
+      header: `Rs at nominal thickness, ${fromReadings ? 'mean reading' : 'mid-window ρ'} (${sheetRes.result.unit ?? 'Ω/sq'})`,
+      numberFormat: FORMATS.sheetResistance,
+      formula: (row) => {
+        const rho = fromReadings ? `AVERAGE(${rowReferences(readingColumns, row)})` : `AVERAGE(${ref('rho-min', row)},${ref('rho-max', row)})`;
+        return callText(sheetRes, { resistivity: scaled(rho, rhoFactor), thickness_um: scaled(ref('thickness', row), thicknessFactor) });
+      },
+    });
+  }
+
+  const radialColumn = hasRadial ? columns.length : -1;
+  if (hasRadial) {
+    const contiguous = edgeColumns.every((column, index) => index === 0 || column === edgeColumns[index - 1] + 1);
+    columns.push({
+      header: `Radial variation (${radial.result.unit ?? '%'})`,
+      numberFormat: FORMATS.percent,
+      formula: (row) => {
+        const edges = rowReferences(edgeColumns, row);
+        // edge_values takes one range; separate edge columns are averaged first, which is the same mean.
+        return callText(radial, { center: ref('rho-center', row), edge_values: contiguous ? edges : `AVERAGE(${edges})` });
+      },
+    });
+  }
+
+  const passColumn = columns.length;
+  columns.push({
+    header: 'Pass/fail',
+    formula: (row) => {
+      const cell = (column: number): string => `${newColumn(column)}${row + 1}`;
+      const conditions = [`${cell(windowColumn)}="${VERDICT.yes}"`];
+      if (readingsColumn >= 0) conditions.push(`${cell(readingsColumn)}<>"${VERDICT.no}"`);
+      if (radialLimit !== null) conditions.push(`ABS(${cell(radialColumn)})<=${parameterRef('radialLimit')}`);
+      return `IF(AND(${conditions.join(',')}),"${VERDICT.pass}","${VERDICT.fail}")`;
+    },
+  });
+
+  parameterColumn = firstNew + columns.length + 1;
+  const dataRows = block.rowCount - 1;
+  const columnsBlock: CellBlock = { sheet: block.sheet, row: block.row, column: firstNew, rowCount: block.rowCount, columnCount: columns.length };
+  const parameterBlock: CellBlock = { sheet: block.sheet, row: block.row, column: parameterColumn, rowCount: parameters.length, columnCount: 2 };
+  const cells: CellInput[][] = [
+    columns.map((column) => column.header),
+    ...Array.from({ length: dataRows }, (_, index) => columns.map((column) => `=${column.formula(block.row + 1 + index)}`)),
+  ];
+  const passFailBlock: CellBlock = { sheet: block.sheet, row: block.row + 1, column: firstNew + passColumn, rowCount: dataRows, columnCount: 1 };
+
+  const dataColumn = (offset: number): CellBlock => ({ sheet: block.sheet, row: block.row + 1, column: firstNew + offset, rowCount: dataRows, columnCount: 1 });
+  const styles = [
+    { block: { ...columnsBlock, rowCount: 1 }, bold: true },
+    { block: { ...parameterBlock, rowCount: 1, columnCount: 1 }, bold: true },
+    ...columns.flatMap((column, offset) => (column.numberFormat ? [{ block: dataColumn(offset), numberFormat: column.numberFormat }] : [])),
+    ...parameters.flatMap((parameter, index) =>
+      parameter.numberFormat ? [{ block: { sheet: block.sheet, row: block.row + index, column: parameterColumn + 1, rowCount: 1, columnCount: 1 }, numberFormat: parameter.numberFormat }] : [],
+    ),
+  ];
+
+  return {
+    writes: [
+      { block: columnsBlock, cells },
+      { block: parameterBlock, cells: parameters.map((parameter) => [parameter.label, parameter.value]) },
+    ],
+    styles,
+    highlights: [
+      { block: passFailBlock, text: VERDICT.pass, ...PASS_COLOURS },
+      { block: passFailBlock, text: VERDICT.fail, ...FAIL_COLOURS },
+    ],
+    headers: columns.map((column) => column.header),
+    columnsBlock,
+    passFailBlock,
+    parameterBlock,
+    warnings,
+    summary:
+      `Checks ${dataRows} wafer row${dataRows === 1 ? '' : 's'}: ${columns.length} new columns in ${sheetAddress(columnsBlock)}, ` +
+      `parameters in ${blockAddress(parameterBlock)} (change them there to re-check).`,
+  };
+}

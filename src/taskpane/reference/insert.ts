@@ -1,0 +1,207 @@
+/**
+ * Lays a catalog function out at the active cell: one labelled row per
+ * argument (label "name (unit)" | value cell), then the formula, which
+ * references those value cells so the user edits arguments in place. Values
+ * are prefilled from the entry's first example made of plain values; the
+ * rest stay blank (an optional argument left blank takes its default).
+ */
+import { qualifiedName } from '../../catalog/naming';
+import type { FunctionSpec, ParameterSpec } from '../../catalog/types';
+import { blockAddress, cellName, type CellBlock, type CellInput, type WorkbookPort } from '../port';
+import { applySheetPlan, sheetAddress, type SheetPlan } from '../certificate/sheetPlan';
+import { callText } from './callText';
+
+/** One argument of an example: a plain value, a row of values (inline array), or something else (a reference, a call). */
+export type ExampleArgument =
+  | { readonly kind: 'blank' }
+  | { readonly kind: 'value'; readonly value: CellInput }
+  | { readonly kind: 'array'; readonly values: readonly CellInput[] }
+  | { readonly kind: 'other'; readonly text: string };
+
+/** Splits text at top-level commas, outside quotes, parentheses and braces. */
+function splitTopLevel(text: string, separator: RegExp): string[] {
+  const parts: string[] = [];
+  let depth = 0;
+  let quoted = false;
+  let start = 0;
+  for (let i = 0; i < text.length; i += 1) {
+    const character = text[i];
+    if (character === '"') quoted = !quoted;
+    else if (!quoted && (character === '(' || character === '{')) depth += 1;
+    else if (!quoted && (character === ')' || character === '}')) depth -= 1;
+    else if (!quoted && depth === 0 && separator.test(character)) {
+      parts.push(text.slice(start, i));
+      start = i + 1;
+    }
+  }
+  parts.push(text.slice(start));
+  return parts;
+}
+
+/** True when brackets outside quotes never close more than they opened: the call's own ')' is the last character. */
+function balanced(text: string): boolean {
+  let depth = 0;
+  let quoted = false;
+  for (const character of text) {
+    if (character === '"') quoted = !quoted;
+    else if (!quoted && (character === '(' || character === '{')) depth += 1;
+    else if (!quoted && (character === ')' || character === '}')) depth -= 1;
+    if (depth < 0) return false;
+  }
+  return depth === 0 && !quoted;
+}
+
+const NUMBER = /^[-+]?(\d+(\.\d*)?|\.\d+)(e[-+]?\d+)?$/i;
+
+function plainValue(text: string): CellInput | undefined {
+  const trimmed = text.trim();
+  if (NUMBER.test(trimmed)) return Number(trimmed);
+  if (/^"([^"]|"")*"$/.test(trimmed)) return trimmed.slice(1, -1).replace(/""/g, '"');
+  if (/^(true|false)$/i.test(trimmed)) return trimmed.toLowerCase() === 'true';
+  return undefined;
+}
+
+/**
+ * The arguments of an example formula `=DRIFT.NAME(a, b, …)`.
+ *
+ * @param formula - as in the catalog, e.g. '=DRIFT.DOPING(10,"B")'
+ * @param spec - the entry the example belongs to
+ * @returns one entry per written argument, or null when the formula is not a plain call of that entry
+ * @example exampleArguments('=DRIFT.DOPING(10,"B")', DOPING) // [{ kind: 'value', value: 10 }, { kind: 'value', value: 'B' }]
+ */
+export function exampleArguments(formula: string, spec: FunctionSpec): ExampleArgument[] | null {
+  const prefix = `=${qualifiedName(spec)}(`;
+  const text = formula.trim();
+  if (!text.toUpperCase().startsWith(prefix.toUpperCase()) || !text.endsWith(')')) return null;
+  const inner = text.slice(prefix.length, -1);
+  if (!balanced(inner)) return null;
+  if (inner.trim() === '') return [];
+  return splitTopLevel(inner, /,/).map((argument): ExampleArgument => {
+    const trimmed = argument.trim();
+    if (trimmed === '') return { kind: 'blank' };
+    const value = plainValue(trimmed);
+    if (value !== undefined) return { kind: 'value', value };
+    if (trimmed.startsWith('{') && trimmed.endsWith('}')) {
+      const values = splitTopLevel(trimmed.slice(1, -1), /[,;]/).map(plainValue);
+      if (values.every((element) => element !== undefined)) return { kind: 'array', values: values as CellInput[] };
+    }
+    return { kind: 'other', text: trimmed };
+  });
+}
+
+/** What goes into one argument's value cells: one value, or a row of values for a reducing argument. */
+type Prefill = readonly CellInput[];
+
+function usable(argument: ExampleArgument | undefined, parameter: ParameterSpec): Prefill | null {
+  if (argument === undefined || argument.kind === 'blank') return [null];
+  if (argument.kind === 'value') return [argument.value];
+  // A reducing argument takes a whole range: its inline array is laid out along the row.
+  if (argument.kind === 'array' && parameter.reduce !== undefined) return argument.values;
+  return null;
+}
+
+/**
+ * Values to prefill, one row per parameter: from the first example whose
+ * every argument is usable as cell values; failing that, the usable arguments
+ * of the first example, blanks elsewhere.
+ *
+ * @param spec - catalog entry
+ * @example prefillValues(DOPING) // [[10], ['B'], [null], [null], [null], [null]]
+ */
+export function prefillValues(spec: FunctionSpec): Prefill[] {
+  const parsed = spec.examples.map((example) => exampleArguments(example.formula, spec)).filter((args): args is ExampleArgument[] => args !== null);
+  const complete = parsed.find((args) => spec.parameters.every((parameter, index) => usable(args[index], parameter) !== null));
+  const chosen = complete ?? parsed[0] ?? [];
+  return spec.parameters.map((parameter, index) => usable(chosen[index], parameter) ?? [null]);
+}
+
+/** Rows × columns a call of the entry with one value per argument shows. */
+export function resultSize(spec: FunctionSpec): { rows: number; columns: number } {
+  if (spec.kind === 'tuple') return { rows: 1, columns: spec.columns.length };
+  if (spec.kind === 'table') {
+    const table = spec.table();
+    return { rows: Math.max(1, table.length), columns: Math.max(1, table[0]?.length ?? 1) };
+  }
+  return { rows: 1, columns: 1 };
+}
+
+/**
+ * A parameter's label in the sheet: name with unit, and for an optional one what blank means.
+ *
+ * @example argumentLabel(temperature) // 'temperature_K (K), optional: blank = 300'
+ */
+export function argumentLabel(parameter: ParameterSpec): string {
+  const named = parameter.unit === null ? parameter.name : `${parameter.name} (${parameter.unit})`;
+  if (!parameter.optional) return named;
+  return parameter.defaultText === undefined ? `${named}, optional` : `${named}, optional: blank = ${parameter.defaultText}`;
+}
+
+/** The insertion plan plus what the pane tells the user. */
+export interface InsertPlan extends SheetPlan {
+  /** The formula cell. */
+  readonly formulaCell: CellBlock;
+  readonly formula: string;
+  /** Required arguments left blank, which the user must fill in. */
+  readonly missing: readonly string[];
+  readonly summary: string;
+}
+
+/**
+ * Plans the argument block and formula at a cell.
+ *
+ * @param spec - catalog entry
+ * @param at - top-left cell of the block (the active cell)
+ * @returns cells to write, with the formula cell and its spill area required empty
+ * @example planInsert(SHEETRES, { sheet: 'Sheet1', row: 0, column: 0, rowCount: 1, columnCount: 1 }).formula // '=DRIFT.SHEETRES(B1,B2)'
+ */
+export function planInsert(spec: FunctionSpec, at: CellBlock): InsertPlan {
+  const prefill = prefillValues(spec);
+  const { rows: resultRows, columns: resultColumns } = resultSize(spec);
+  const valueWidth = Math.max(1, resultColumns, ...prefill.map((values) => values.length));
+  const width = 1 + valueWidth;
+  const argumentRows = spec.parameters.length;
+  const references = spec.parameters.map((parameter, index) => {
+    const row = at.row + index;
+    const first = cellName(row, at.column + 1);
+    const cells = prefill[index].length;
+    return parameter.reduce !== undefined && cells > 1 ? `${first}:${cellName(row, at.column + cells)}` : first;
+  });
+  const formula = `=${callText(spec, Object.fromEntries(spec.parameters.map((parameter, index) => [parameter.name, references[index]])))}`;
+  const pad = (cells: readonly CellInput[]): CellInput[] => [...cells, ...Array<CellInput>(width - cells.length).fill(null)];
+  const cells: CellInput[][] = [
+    ...spec.parameters.map((parameter, index) => pad([argumentLabel(parameter), ...prefill[index]])),
+    pad([spec.result.unit === null ? qualifiedName(spec) : `${qualifiedName(spec)} (${spec.result.unit})`, formula]),
+  ];
+  const block: CellBlock = { sheet: at.sheet, row: at.row, column: at.column, rowCount: argumentRows + 1, columnCount: width };
+  const formulaCell: CellBlock = { sheet: at.sheet, row: at.row + argumentRows, column: at.column + 1, rowCount: 1, columnCount: 1 };
+  const spill: CellBlock = { ...formulaCell, rowCount: resultRows, columnCount: resultColumns };
+  const missing = spec.parameters.filter((parameter, index) => !parameter.optional && prefill[index].every((value) => value === null)).map((parameter) => parameter.name);
+  return {
+    writes: [{ block, cells }],
+    alsoEmpty: resultRows > 1 || resultColumns > 1 ? [spill] : [],
+    styles: [{ block: { ...formulaCell, column: at.column }, bold: true }],
+    highlights: [],
+    formulaCell,
+    formula,
+    missing,
+    summary:
+      `Inserted ${qualifiedName(spec)} in ${sheetAddress(formulaCell)}` +
+      (argumentRows > 0 ? ` with its arguments in ${blockAddress({ ...block, rowCount: argumentRows })}; edit them there.` : '.') +
+      (missing.length > 0 ? ` Fill in ${missing.join(', ')}.` : ''),
+  };
+}
+
+/**
+ * Inserts a function at the active cell, refusing to write over anything.
+ *
+ * @param port - workbook
+ * @param spec - catalog entry
+ * @returns the plan that was written
+ * @throws PaneRefusal naming the block when a target cell is not empty
+ */
+export async function insertFunction(port: WorkbookPort, spec: FunctionSpec): Promise<InsertPlan> {
+  const selection = await port.selection();
+  const plan = planInsert(spec, { ...selection, rowCount: 1, columnCount: 1 });
+  await applySheetPlan(port, plan);
+  return plan;
+}

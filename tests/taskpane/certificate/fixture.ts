@@ -1,0 +1,32 @@
+/**
+ * A wafer certificate table for tests. Everything in it is invented: the
+ * supplier "Kestrel Substrates" is fictional, and so are its lots, wafers and
+ * readings. Shared by the unit tests and the browser test.
+ */
+import type { CellInput } from '../../../src/taskpane/port';
+
+export const FICTIONAL_SUPPLIER = 'Kestrel Substrates (fictional)';
+
+export const CERTIFICATE_HEADERS = [
+  'Lot',
+  'Wafer',
+  'Type',
+  'Rho min (ohm-cm)',
+  'Rho max (ohm-cm)',
+  'Rho centre',
+  'Rho edge 1',
+  'Rho edge 2',
+  'Rho edge 3',
+  'Thickness (um)',
+] as const;
+
+/** Invented wafer rows: [lot, wafer, type, ρmin, ρmax, centre, edge1, edge2, edge3, thickness µm]. */
+export const CERTIFICATE_ROWS: readonly (readonly CellInput[])[] = [
+  ['KS-2301', 'W01', 'P', 8, 12, 10.1, 10.4, 10.6, 10.3, 525],
+  ['KS-2301', 'W02', 'P', 8, 12, 9.8, 10.9, 11.2, 10.8, 525],
+  ['KS-2302', 'W01', 'N', 1, 3, 2.1, 2.2, 2.0, 2.3, 525],
+  ['KS-2303', 'W07', 'Boron', 9, 11, 12.5, 12.9, 13.1, 12.7, 675],
+];
+
+/** The whole table, header row first. */
+export const CERTIFICATE_TABLE: readonly (readonly CellInput[])[] = [CERTIFICATE_HEADERS, ...CERTIFICATE_ROWS];
