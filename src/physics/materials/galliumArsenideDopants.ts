@@ -21,7 +21,7 @@
  * acceptor (C on As sites), as in carbon-doped epitaxial layers.
  */
 
-import { mottScaledIonization } from './ionizationScaling';
+import { mottScaledDopant, type MottScaledHost } from './ionizationScaling';
 import type { Dopant, DopantKind } from './types';
 
 /** Static relative permittivity of GaAs (Sze & Ng 2007, Appendix; from memory). */
@@ -31,22 +31,13 @@ const SZE_NG_2007_GAAS =
   'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, ionization energies in ' +
   'GaAs (from memory)';
 
-const DEGENERACY: Readonly<Record<DopantKind, number>> = { donor: 2, acceptor: 4 };
-
 const SPECIES_NOTE = 'the GaAs mobility fit (sotoodeh) does not depend on the dopant species';
 
-/** One dopant of GaAs from its symbol, name, kind and ΔE0 (eV). */
+const HOST: MottScaledHost = { relativePermittivity: GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY, mobilitySpeciesNote: SPECIES_NOTE };
+
+/** One dopant of this host from its symbol, name, kind and ΔE0 (eV). */
 function galliumArsenideDopant(symbol: string, name: string, kind: DopantKind, energy: number, energySource = SZE_NG_2007_GAAS): Dopant {
-  return {
-    symbol,
-    name,
-    kind,
-    ionizationEnergy: energy,
-    ionizationEnergyCitation: energySource,
-    degeneracy: DEGENERACY[kind],
-    mobilitySpeciesNote: SPECIES_NOTE,
-    ionization: mottScaledIonization(kind, energy, GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY, energySource),
-  };
+  return mottScaledDopant(HOST, symbol, name, kind, energy, energySource);
 }
 
 /** Isolated ionization energies in GaAs, eV (Sze & Ng 2007, from memory). */

@@ -16,7 +16,7 @@
  * - Degeneracy g = 2 for donors, 4 for acceptors: common practice, no source.
  */
 
-import { mottScaledIonization } from './ionizationScaling';
+import { mottScaledDopant, type MottScaledHost } from './ionizationScaling';
 import type { Dopant, DopantKind } from './types';
 
 /** Static relative permittivity of Ge (Sze & Ng 2007, Appendix; from memory). */
@@ -25,22 +25,13 @@ export const GERMANIUM_RELATIVE_PERMITTIVITY = 16.0;
 const SZE_NG_2007_GE =
   'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, ionization energies in Ge (from memory)';
 
-const DEGENERACY: Readonly<Record<DopantKind, number>> = { donor: 2, acceptor: 4 };
-
 const SPECIES_NOTE = 'the germanium mobility fit (hilsum) does not depend on the dopant species';
 
-/** One dopant of germanium from its symbol, name, kind and ΔE0 (eV). */
+const HOST: MottScaledHost = { relativePermittivity: GERMANIUM_RELATIVE_PERMITTIVITY, mobilitySpeciesNote: SPECIES_NOTE };
+
+/** One dopant of this host from its symbol, name, kind and ΔE0 (eV). */
 function germaniumDopant(symbol: string, name: string, kind: DopantKind, energy: number, energySource = SZE_NG_2007_GE): Dopant {
-  return {
-    symbol,
-    name,
-    kind,
-    ionizationEnergy: energy,
-    ionizationEnergyCitation: energySource,
-    degeneracy: DEGENERACY[kind],
-    mobilitySpeciesNote: SPECIES_NOTE,
-    ionization: mottScaledIonization(kind, energy, GERMANIUM_RELATIVE_PERMITTIVITY, energySource),
-  };
+  return mottScaledDopant(HOST, symbol, name, kind, energy, energySource);
 }
 
 /** Isolated ionization energies in Ge, eV (Sze & Ng 2007, from memory). */

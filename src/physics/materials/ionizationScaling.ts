@@ -40,7 +40,7 @@
  */
 
 import { SILICON } from './silicon';
-import type { DopantKind, IonizationParameters } from './types';
+import type { Dopant, DopantKind, IonizationParameters } from './types';
 
 /** Constants of the hydrogenic estimate, with their sources. */
 export const HYDROGENIC_CONSTANTS = {
@@ -124,5 +124,50 @@ export function mottScaledIonization(
     validity:
       'freeze-out from the measured isolated level; full ionization above the estimated Mott density, ' +
       'whose position is a hydrogenic estimate (within about a factor of 2), not a fit',
+  };
+}
+
+/** Degeneracy factors of donor and acceptor levels: 2 (spin) and 4 (spin and the two degenerate valence-band maxima); common practice, no source. */
+export const LEVEL_DEGENERACY: Readonly<Record<DopantKind, number>> = { donor: 2, acceptor: 4 };
+
+/** What one host's Mott-scaled dopant table shares. */
+export interface MottScaledHost {
+  /** Static relative permittivity εr of the host. */
+  readonly relativePermittivity: number;
+  /** Why the host's mobility fit ignores the dopant species (shown in help). */
+  readonly mobilitySpeciesNote: string;
+}
+
+/**
+ * One dopant of a non-silicon host: its isolated level, the usual level
+ * degeneracy, and Altermatt-form ionization parameters scaled by the Mott
+ * density (mottScaledIonization).
+ *
+ * @param host permittivity and mobility note of the host
+ * @param symbol element symbol as users type it (or 'n' / 'p')
+ * @param name element name
+ * @param kind 'donor' or 'acceptor'
+ * @param isolatedEnergy ΔE0, eV
+ * @param energySource citation of ΔE0
+ * @returns the dopant's table row
+ * @example mottScaledDopant({ relativePermittivity: 16, mobilitySpeciesNote: '…' }, 'P', 'phosphorus', 'donor', 0.012, 'Sze & Ng 2007').degeneracy // 2
+ */
+export function mottScaledDopant(
+  host: MottScaledHost,
+  symbol: string,
+  name: string,
+  kind: DopantKind,
+  isolatedEnergy: number,
+  energySource: string,
+): Dopant {
+  return {
+    symbol,
+    name,
+    kind,
+    ionizationEnergy: isolatedEnergy,
+    ionizationEnergyCitation: energySource,
+    degeneracy: LEVEL_DEGENERACY[kind],
+    mobilitySpeciesNote: host.mobilitySpeciesNote,
+    ionization: mottScaledIonization(kind, isolatedEnergy, host.relativePermittivity, energySource),
   };
 }

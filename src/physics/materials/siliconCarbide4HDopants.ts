@@ -32,7 +32,7 @@
  * Degeneracy g = 2 for donors, 4 for acceptors: common practice, no source.
  */
 
-import { mottScaledIonization } from './ionizationScaling';
+import { mottScaledDopant, type MottScaledHost } from './ionizationScaling';
 import type { Dopant, DopantKind } from './types';
 
 /**
@@ -57,22 +57,13 @@ const SOURCES = {
   B: `shallow boron acceptor ≈0.28–0.35 eV (deep D centre ignored); ${LEVINSHTEIN_2001}`,
 } as const;
 
-const DEGENERACY: Readonly<Record<DopantKind, number>> = { donor: 2, acceptor: 4 };
-
 const SPECIES_NOTE = 'the 4H-SiC mobility fit (roschke-schwierz) does not depend on the dopant species';
 
-/** One dopant of 4H-SiC from its symbol, name, kind and ΔE0 (eV). */
+const HOST: MottScaledHost = { relativePermittivity: SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY, mobilitySpeciesNote: SPECIES_NOTE };
+
+/** One dopant of this host from its symbol, name, kind and ΔE0 (eV). */
 function siliconCarbideDopant(symbol: string, name: string, kind: DopantKind, energy: number, energySource: string): Dopant {
-  return {
-    symbol,
-    name,
-    kind,
-    ionizationEnergy: energy,
-    ionizationEnergyCitation: energySource,
-    degeneracy: DEGENERACY[kind],
-    mobilitySpeciesNote: SPECIES_NOTE,
-    ionization: mottScaledIonization(kind, energy, SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY, energySource),
-  };
+  return mottScaledDopant(HOST, symbol, name, kind, energy, energySource);
 }
 
 /** Ionization energies in 4H-SiC, eV (see the module note). */
