@@ -9,7 +9,7 @@
  */
 import type { Locator, Page } from 'playwright-core';
 import { value } from '../catalog/support/call';
-import { CERTIFICATE_HEADERS, CERTIFICATE_ROWS, CERTIFICATE_TABLE } from './certificate/fixture';
+import { CERTIFICATE_HEADERS, CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './certificate/fixture';
 import { announced, cells, highlightPlans, readBlock, saveScreenshot, selectBlock, startHarness, writeBlock, type PaneHarness } from './support/harness';
 import type { CellInput, CellShown } from '../../src/taskpane/port';
 
@@ -92,16 +92,7 @@ describe('the Certificate check in Chromium', () => {
     expect(await announced(page)).toMatch(/^Checks 4 wafer rows: 8 new columns in Sheet1!L2:S6, parameters in U2:V6 \(change them there to re-check\)\.$/);
 
     const written = await readBlock(page, cells({ row: TOP, column: FIRST_NEW, rowCount: CERTIFICATE_TABLE.length, columnCount: 8 }));
-    expect(written.values[0]).toEqual([
-      'Dopant code (P/N read as p-/n-type)',
-      'Doping at ρmax (cm⁻³)',
-      'Doping at ρmin (cm⁻³)',
-      'Certified doping inside needed window',
-      'Readings inside ρ window',
-      'Rs at nominal thickness, mean reading (Ω/sq)',
-      'Radial variation (%)',
-      'Pass/fail',
-    ]);
+    expect(written.values[0]).toEqual(CHECK_HEADERS);
     CERTIFICATE_ROWS.forEach((row, index) => {
       const shown = written.values[index + 1];
       const expected = expectedRow(row);

@@ -30,3 +30,15 @@ export const CERTIFICATE_ROWS: readonly (readonly CellInput[])[] = [
 
 /** The whole table, header row first. */
 export const CERTIFICATE_TABLE: readonly (readonly CellInput[])[] = [CERTIFICATE_HEADERS, ...CERTIFICATE_ROWS];
+
+/** Headers of the columns the check adds for this table with every column mapped (the tool's own wording). */
+export const CHECK_HEADERS: readonly string[] = [
+  'Dopant code (P/N read as p-/n-type)',
+  'Doping at ρmax (cm⁻³)',
+  'Doping at ρmin (cm⁻³)',
+  'Certified doping inside needed window',
+  'Readings inside ρ window',
+  'Rs at nominal thickness, mean reading (Ω/sq)',
+  'Radial variation (%)',
+  'Pass/fail',
+];

@@ -14,7 +14,7 @@ import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
 import type { ResultElement } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
 import { MemoryPort, valueAt } from '../support/memoryPort';
-import { CERTIFICATE_ROWS, CERTIFICATE_TABLE } from './fixture';
+import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './fixture';
 
 const TOP = 1; // table at B2: row 1, column 1 (0-based)
 const LEFT = 1;
@@ -56,16 +56,7 @@ describe('certificate check on the fictional test table', () => {
   it('writes one formula row per wafer that the engine evaluates to the catalog’s numbers', async () => {
     const { port, mapping } = await portWithTable();
     const plan = await addCertificateCheck(port, (await port.selection()), { ...BASE, mapping });
-    expect(plan.headers).toEqual([
-      'Dopant code (P/N read as p-/n-type)',
-      'Doping at ρmax (cm⁻³)',
-      'Doping at ρmin (cm⁻³)',
-      'Certified doping inside needed window',
-      'Readings inside ρ window',
-      'Rs at nominal thickness, mean reading (Ω/sq)',
-      'Radial variation (%)',
-      'Pass/fail',
-    ]);
+    expect(plan.headers).toEqual(CHECK_HEADERS);
     const values = port.engineValues();
     CERTIFICATE_ROWS.forEach((row, index) => {
       const sheetRow = TOP + 1 + index;
