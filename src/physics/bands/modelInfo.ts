@@ -58,13 +58,13 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     citation:
       'F½ as normalised by J. S. Blakemore, Solid-State Electron. 25, 1067 (1982); computed by its alternating ' +
       'series (η ≤ −2), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, SIAM Review 56, 385 ' +
-      '(2014)) and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ 35 (citations from memory); ' +
+      '(2014)), tabulated once as Chebyshev interpolants of degree 18 on unit intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ 35 (citations from memory); ' +
       'checked against mpmath polylog values',
     validity:
       'parabolic bands with the densities of states of the material; any Fermi level (F½ to 1e-13 relative for ' +
       'η from −708 up); band tails and non-parabolicity at very heavy doping (≳ 1e20 cm⁻³) are not modelled',
     notes:
-      'Used by the equilibrium solver (default since issue 3). Non-degenerate results equal Boltzmann ones to ' +
+      'Used by the equilibrium solver (the default statistics). Non-degenerate results equal Boltzmann ones to ' +
       'rounding; n·p = ni² then holds to the factor F½(ηc)/e^ηc of the majority carriers (1 − 1.2e-4 at 1e16 cm⁻³, ' +
       '300 K). Also gives the generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) used by DRIFT.DIFFUSIVITY. ' +
       'Bandgap narrowing is not included (see klaassen-bgn).',
