@@ -3,10 +3,7 @@
  * units, defaults and allowed ranges cannot drift apart between functions.
  */
 import {
-  ALL_MOBILITY_MODEL_CODES,
-  ALL_RESISTIVITY_MODEL_CODES,
   MATERIAL_CODES,
-  MATERIALS,
   dopantCodes,
   intrinsicModelCodes,
   mobilityModelCodes,
@@ -24,6 +21,7 @@ import {
   type Material,
   type Sample,
 } from '../physics';
+import { allCodes, perMaterial } from './citedModels';
 import { codeParameter, optionalNumber, requiredCode, requiredNumber } from './parameters';
 import type { ParameterSpec } from './types';
 
@@ -49,6 +47,13 @@ export const requiredTemperature = requiredNumber({
   max: TEMPERATURE_RANGE_K.max,
 });
 
+/** A uniform electric field; the results it drives (velocity, current density) take its sign. */
+export const field = requiredNumber({
+  name: 'field_V_per_cm',
+  unit: 'V/cm',
+  description: 'Electric field in V/cm; its sign sets the direction of the result.',
+});
+
 export const material = codeParameter<Material>({
   name: 'material',
   description: `Semiconductor: ${MATERIAL_CODES.join(', ')}; blank means Si.`,
@@ -63,20 +68,18 @@ export const material = codeParameter<Material>({
  * and 'p' the generic acceptor, 'N' nitrogen and 'n' the generic donor).
  */
 export function allDopantCodes(): readonly string[] {
-  const codes: string[] = [];
-  for (const host of MATERIALS) for (const code of dopantCodes(host)) if (!codes.includes(code)) codes.push(code);
-  return codes;
+  return allCodes(dopantCodes);
 }
 
-/** "Si: B, Al, …; Ge: …" — the dopant codes of each material, for descriptions. */
-export function dopantCodesByMaterial(): string {
-  return MATERIALS.map((host) => `${host.code}: ${dopantCodes(host).filter((code) => code !== 'n' && code !== 'p').join(', ')}`).join('; ');
+/** A material's dopant codes without its generic donor and acceptor. */
+function namedDopantCodes(host: Material): readonly string[] {
+  return dopantCodes(host).filter((code) => code !== host.genericDopants.donor && code !== host.genericDopants.acceptor);
 }
 
 export const dopant = requiredCode({
   name: 'dopant',
   description:
-    `Dopant element symbol for the material (${dopantCodesByMaterial()}) or n / p for a generic donor / acceptor. ` +
+    `Dopant element symbol for the material (${perMaterial(namedDopantCodes)}) or n / p for a generic donor / acceptor. ` +
     'Case-insensitive, except that P is phosphorus and p a generic acceptor, N nitrogen and n a generic donor.',
   choices: allDopantCodes,
 });
@@ -123,29 +126,18 @@ export const carrier = codeParameter<CarrierRole>({
 /** Display form of the default of a model argument whose blank means the material's own default. */
 export const MATERIAL_DEFAULT_TEXT = 'the material’s default';
 
-/** "Si: masetti, arora; Ge: hilsum; …" — model codes per material, the default first. */
-function codesByMaterial(codesOf: (host: Material) => readonly string[]): string {
-  return MATERIALS.map((host) => `${host.code}: ${codesOf(host).join(', ')}`).join('; ');
-}
-
-/** Every code of codesOf over all materials, each once, in material order. */
-function allCodes(codesOf: (host: Material) => readonly string[]): readonly string[] {
-  const codes: string[] = [];
-  for (const host of MATERIALS) for (const code of codesOf(host)) if (!codes.includes(code)) codes.push(code);
-  return codes;
-}
-
 /**
  * A model argument: any code of any material parses here; a blank is passed
  * on as '' so the core takes the material's default, and the core refuses a
  * code the material has no parameters for, naming what it supports.
  */
-function materialModelParameter(what: string, codes: () => readonly string[], codesOf: (host: Material) => readonly string[]): ParameterSpec<string> {
+function materialModelParameter(what: string, codesOf: (host: Material) => readonly string[]): ParameterSpec<string> {
+  const codes = allCodes(codesOf);
   return {
     ...codeParameter<string>({
       name: 'model',
-      description: `${what} by material (${codesByMaterial(codesOf)}); blank means the material’s default, listed first.`,
-      choices: codes,
+      description: `${what} by material (${perMaterial(codesOf)}); blank means the material’s default, listed first.`,
+      choices: () => codes,
       defaultCode: '',
       resolve: (code) => code,
     }),
@@ -153,11 +145,11 @@ function materialModelParameter(what: string, codes: () => readonly string[], co
   };
 }
 
-export const mobilityModel = materialModelParameter('Mobility model', () => ALL_MOBILITY_MODEL_CODES, mobilityModelCodes);
+export const mobilityModel = materialModelParameter('Mobility model', mobilityModelCodes);
 
-export const resistivityModel = materialModelParameter('Model', () => ALL_RESISTIVITY_MODEL_CODES, resistivityModelCodes);
+export const resistivityModel = materialModelParameter('Model', resistivityModelCodes);
 
-export const intrinsicModel = materialModelParameter('Intrinsic-density model', () => allCodes(intrinsicModelCodes), intrinsicModelCodes);
+export const intrinsicModel = materialModelParameter('Intrinsic-density model', intrinsicModelCodes);
 
 export const resistivity = requiredNumber({
   name: 'resistivity',

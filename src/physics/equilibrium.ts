@@ -39,6 +39,7 @@ import { thermalVoltage } from './constants';
 import { PhysicsDomainError } from './errors';
 import { bandEdges, type BandEdges } from './bands/bandEdges';
 import { DEFAULT_CARRIER_STATISTICS, type CarrierStatistics } from './bands/statistics';
+import { GAMMA_FIVE_HALVES } from './bands/fermiDirac';
 import type { Dopant, Material } from './materials/types';
 import { checkTemperature } from './materials/temperature';
 import { ionizationState, prepareIonization, preparedIonizationState, type IonizationState, type PreparedIonization } from './ionization';
@@ -71,8 +72,8 @@ const BRACKET_MARGIN = 1e-6;
 /** Absolute tolerance on η; with the solver's 2ε|η| term, n and p are exact to ~1e-13. */
 const ETA_TOLERANCE = 1e-15;
 
-/** 3√π/4 = 1/(4/(3√π)), the inverse of the leading Sommerfeld coefficient of F½ (module note). */
-const INVERSE_SOMMERFELD_COEFFICIENT = (3 * Math.sqrt(Math.PI)) / 4;
+/** 3√π/4 = Γ(5/2), the inverse of the leading Sommerfeld coefficient 4/(3√π) of F½ (module note). */
+const INVERSE_SOMMERFELD_COEFFICIENT = GAMMA_FIVE_HALVES;
 
 /**
  * The smallest reduced band Fermi level x the module note proves sufficient

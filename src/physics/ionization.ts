@@ -26,7 +26,8 @@ import { levelOccupancy } from './bands/statistics';
 /** Code of the ionization model, for the model registry. */
 export const IONIZATION_MODEL_CODE = 'altermatt-2006';
 
-function checkDensity(density: number): void {
+/** Refuses a dopant density that is not a finite number ≥ 0 (cm⁻³), naming the value. */
+export function checkDopantDensity(density: number): void {
   if (!Number.isFinite(density) || density < 0) {
     throw new PhysicsDomainError(`dopant density ${density} cm⁻³ is not allowed: it must be a finite number >= 0`);
   }
@@ -41,7 +42,7 @@ function checkDensity(density: number): void {
  * @example dopantIonizationEnergy(phosphorus, 1e15) // ≈ 0.0455 eV
  */
 export function dopantIonizationEnergy(dopant: Dopant, density: number): number {
-  checkDensity(density);
+  checkDopantDensity(density);
   const p = dopant.ionization;
   return p.isolatedEnergy / (1 + Math.pow(density / p.referenceDensity, p.screeningExponent));
 }
@@ -63,7 +64,7 @@ export interface LocalizedSplit {
  * @example localizedFraction(phosphorus, 6e18).localized // 0.5
  */
 export function localizedFraction(dopant: Dopant, density: number): LocalizedSplit {
-  checkDensity(density);
+  checkDopantDensity(density);
   const p = dopant.ionization;
   const r = Math.pow(density / p.localizationDensity, p.localizationExponent);
   return { localized: 1 / (1 + r), delocalized: r / (1 + r) };

@@ -131,6 +131,14 @@ describe('DRIFT.MODELS', () => {
     expect(table).toHaveLength(MODEL_REGISTRY.length + 1);
     for (const row of table.slice(1)) for (const cell of row) expect(typeof cell === 'string' && cell.length > 0).toBe(true);
   });
+  it('every code a function\'s model argument accepts is cited on its help page, its default first', () => {
+    for (const spec of CATALOG) {
+      const model = spec.parameters.find((p) => p.name === 'model');
+      if (model?.choices === undefined) continue;
+      for (const code of model.choices()) expect([spec.name, spec.models]).toEqual([spec.name, expect.arrayContaining([code])]);
+      expect([spec.name, spec.models[0]]).toEqual([spec.name, model.choices()[0]]);
+    }
+  });
   it('lists every model any function cites', () => {
     const codes = new Set(table.slice(1).map((row) => row[0]));
     for (const spec of CATALOG) for (const code of spec.models) expect(codes).toContain(code);

@@ -1,13 +1,18 @@
 /**
  * Sample construction shared by the transport tests (not a test file).
  */
-import { SILICON } from '../../src/physics/materials';
+import { SILICON, type Material } from '../../src/physics/materials';
 import { resolveDopant } from '../../src/physics/dopants';
 import type { Sample } from '../../src/physics/sample';
 
+/** A sample of one dopant in any material, optionally counter-doped. */
+export function materialSample(material: Material, dopant: string, density: number, temperature = 300, counterDensity = 0): Sample {
+  return { material, temperature, dopant: resolveDopant(material, dopant), density, counterDensity };
+}
+
 /** A silicon sample of one dopant, optionally counter-doped. */
 export function siliconSample(dopant: string, density: number, temperature = 300, counterDensity = 0): Sample {
-  return { material: SILICON, temperature, dopant: resolveDopant(SILICON, dopant), density, counterDensity };
+  return materialSample(SILICON, dopant, density, temperature, counterDensity);
 }
 
 /** The same sample without its density, as dopingForResistivity takes it. */

@@ -6,14 +6,13 @@
 import {
   CARRIER_ROLES,
   MATERIAL_CODES,
-  MATERIALS,
   MODEL_REGISTRY,
   dopantCodes,
   intrinsicModelCodes,
   mobilityModelCodes,
   resistivityModelCodes,
-  type Material,
 } from '../../physics';
+import { perMaterial } from '../citedModels';
 import type { FunctionSpec } from '../types';
 import { signature } from './signature';
 
@@ -27,14 +26,6 @@ export function renderFunctionTable(catalog: readonly FunctionSpec[]): string {
     (spec) => `| \`${signature(spec)}\` | ${spec.result.unit ?? '—'} | ${cell(spec.summary)} |`,
   );
   return ['| Function | Result unit | What it gives |', '| --- | --- | --- |', ...rows].join('\n');
-}
-
-/** "Si: a, b; Ge: c" — codes per material; with the first code of each when `firstOnly`. */
-function perMaterial(codesOf: (material: Material) => readonly string[], firstOnly = false): string {
-  return MATERIALS.map((material) => {
-    const codes = codesOf(material);
-    return `${material.code}: ${(firstOnly ? codes.slice(0, 1) : codes).join(', ')}`;
-  }).join('; ');
 }
 
 export function renderCodeTable(): string {

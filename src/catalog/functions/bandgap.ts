@@ -1,6 +1,7 @@
 import { bandgap as bandgapModel } from '../../physics';
 import { material, requiredTemperature } from '../common';
 import { elementwise } from '../types';
+import { BANDGAP_MODELS } from '../citedModels';
 
 export const BANDGAP = elementwise({
   name: 'BANDGAP',
@@ -12,6 +13,6 @@ export const BANDGAP = elementwise({
     { formula: '=DRIFT.BANDGAP(300)', note: 'silicon at 300 K, about 1.12 eV' },
     { formula: '=DRIFT.BANDGAP(A2:A20)', note: 'a column of temperatures gives a column of gaps' },
   ],
-  models: ['thurmond', 'thurmond-ge', 'thurmond-gaas', 'levinshtein-gap-4h-sic'],
+  models: BANDGAP_MODELS,
   compute: (temperatureK, materialValue) => bandgapModel(materialValue, temperatureK),
 });

@@ -1,6 +1,7 @@
 import { conductivity } from '../../physics';
 import { counterDoping, dopant, doping, material, resistivityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
+import { RESISTIVITY_MODELS } from '../citedModels';
 
 export const CONDUCTIVITY = elementwise({
   name: 'CONDUCTIVITY',
@@ -12,7 +13,7 @@ export const CONDUCTIVITY = elementwise({
     { formula: '=DRIFT.CONDUCTIVITY(1e16,"P")', note: 'about 1.9 S/cm' },
     { formula: '=DRIFT.CONDUCTIVITY(1e16,"P",{250,300,350})', note: 'across a row of temperatures' },
   ],
-  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
+  models: RESISTIVITY_MODELS,
   compute: (density, dopantCode, temperatureK, model, materialValue, counter) =>
     conductivity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), model),
 });

@@ -1,6 +1,7 @@
 import { carrierFor, diffusivity } from '../../physics';
 import { carrier, counterDoping, dopant, doping, material, mobilityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
+import { EQUILIBRIUM_MODELS, MOBILITY_MODELS } from '../citedModels';
 
 export const DIFFUSIVITY = elementwise({
   name: 'DIFFUSIVITY',
@@ -12,7 +13,7 @@ export const DIFFUSIVITY = elementwise({
     { formula: '=DRIFT.DIFFUSIVITY(1e17,"B",300,"minority")', note: 'minority electrons in a p-type base' },
     { formula: '=DRIFT.DIFFUSIVITY(1e15,"P")', note: 'electrons in lightly doped n-type Si' },
   ],
-  models: ['fermi-dirac', 'masetti', 'arora', 'caughey-thomas', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
+  models: [...MOBILITY_MODELS, ...EQUILIBRIUM_MODELS],
   compute: (density, dopantCode, temperatureK, role, model, materialValue, counter) => {
     const sample = sampleOf(materialValue, temperatureK, dopantCode, density, counter);
     return diffusivity(model, carrierFor(sample.dopant, role), sample);

@@ -1,6 +1,7 @@
 import { dopingForResistivity, resolveDopant } from '../../physics';
 import { counterDoping, dopant, material, resistivity, resistivityModel, temperature } from '../common';
 import { elementwise } from '../types';
+import { RESISTIVITY_MODELS } from '../citedModels';
 
 export const DOPING = elementwise({
   name: 'DOPING',
@@ -12,7 +13,7 @@ export const DOPING = elementwise({
     { formula: '=DRIFT.DOPING(10,"B")', note: 'boron density of a 10 Ω·cm p-type wafer' },
     { formula: '=DRIFT.DOPING(B2:C2,"P")', note: 'a certificate’s ρ window to a doping window' },
   ],
-  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
+  models: RESISTIVITY_MODELS,
   compute: (target, dopantCode, temperatureK, model, materialValue, counter) =>
     dopingForResistivity(
       target,

@@ -1,5 +1,6 @@
 import { acceptors, donors, genericEquilibrium, material, temperature } from '../common';
 import { elementwise } from '../types';
+import { EQUILIBRIUM_MODELS } from '../citedModels';
 
 export const ELECTRONS = elementwise({
   name: 'ELECTRONS',
@@ -11,7 +12,7 @@ export const ELECTRONS = elementwise({
     { formula: '=DRIFT.ELECTRONS(1e16,0)', note: 'n-type 1e16 cm⁻³ at 300 K: nearly all donors ionized' },
     { formula: '=DRIFT.ELECTRONS(1e16,0,77)', note: 'the same at 77 K: partly frozen out' },
   ],
-  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
+  models: EQUILIBRIUM_MODELS,
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
     genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).electrons,
 });

@@ -1,5 +1,6 @@
 import { acceptors, donors, genericEquilibrium, material, temperature } from '../common';
 import { elementwise } from '../types';
+import { EQUILIBRIUM_MODELS } from '../citedModels';
 
 export const FERMILEVEL = elementwise({
   name: 'FERMILEVEL',
@@ -11,7 +12,7 @@ export const FERMILEVEL = elementwise({
     { formula: '=DRIFT.FERMILEVEL(1e16,0)', note: 'n-type 1e16 cm⁻³ at 300 K, about +0.35 eV' },
     { formula: '=DRIFT.FERMILEVEL(0,1e16,B1:H1)', note: 'p-type across a row of temperatures' },
   ],
-  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
+  models: EQUILIBRIUM_MODELS,
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
     genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).fermiLevel,
 });

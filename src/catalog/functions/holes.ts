@@ -1,5 +1,6 @@
 import { acceptors, donors, genericEquilibrium, material, temperature } from '../common';
 import { elementwise } from '../types';
+import { EQUILIBRIUM_MODELS } from '../citedModels';
 
 export const HOLES = elementwise({
   name: 'HOLES',
@@ -11,7 +12,7 @@ export const HOLES = elementwise({
     { formula: '=DRIFT.HOLES(0,5e15)', note: 'p-type 5e15 cm⁻³ at 300 K' },
     { formula: '=DRIFT.HOLES(1e16,0)', note: 'minority holes in n-type 1e16 cm⁻³: ni²/n' },
   ],
-  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
+  models: EQUILIBRIUM_MODELS,
   compute: (donorDensity, acceptorDensity, temperatureK, materialValue) =>
     genericEquilibrium(materialValue, temperatureK, donorDensity, acceptorDensity).holes,
 });

@@ -1,6 +1,7 @@
 import { ionizedFraction, resolveDopant, solveEquilibrium } from '../../physics';
 import { dopant, doping, material, temperature } from '../common';
 import { elementwise } from '../types';
+import { IONIZATION_MODELS } from '../citedModels';
 
 export const IONIZED = elementwise({
   name: 'IONIZED',
@@ -12,7 +13,7 @@ export const IONIZED = elementwise({
     { formula: '=DRIFT.IONIZED(1e16,"P",77)', note: 'phosphorus at 77 K' },
     { formula: '=DRIFT.IONIZED(1e16,"In")', note: 'indium is deep: well below 1 at 300 K' },
   ],
-  models: ['altermatt-2006', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
+  models: IONIZATION_MODELS,
   compute: (density, dopantCode, temperatureK, materialValue) => {
     const species = resolveDopant(materialValue, dopantCode);
     const state = solveEquilibrium(materialValue, temperatureK, [{ dopant: species, density }]);

@@ -1,5 +1,6 @@
 import { counterDoping, dopant, doping, material, sampleCarrierDensity, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
+import { EQUILIBRIUM_MODELS } from '../citedModels';
 
 export const MAJORITY = elementwise({
   name: 'MAJORITY',
@@ -12,7 +13,7 @@ export const MAJORITY = elementwise({
     { formula: '=DRIFT.MAJORITY(1e17,"B",77)', note: 'holes at 77 K: freeze-out lowers them' },
     { formula: '=DRIFT.MAJORITY(1e16,"P",300,,4e15)', note: 'compensated: about 6e15 cm⁻³' },
   ],
-  models: ['altermatt-2006', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
+  models: EQUILIBRIUM_MODELS,
   compute: (density, dopantCode, temperatureK, materialValue, counter) =>
     sampleCarrierDensity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), 'majority'),
 });

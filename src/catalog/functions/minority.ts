@@ -1,5 +1,6 @@
 import { counterDoping, dopant, doping, material, sampleCarrierDensity, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
+import { EQUILIBRIUM_MODELS } from '../citedModels';
 
 export const MINORITY = elementwise({
   name: 'MINORITY',
@@ -11,7 +12,7 @@ export const MINORITY = elementwise({
     { formula: '=DRIFT.MINORITY(1e15,"B")', note: 'electrons in 1e15 cm⁻³ boron-doped Si, about 9e4 cm⁻³' },
     { formula: '=DRIFT.MINORITY(1e15,"B",{300,400,500})', note: 'the rise with temperature along a row' },
   ],
-  models: ['altermatt-2006', 'fermi-dirac', 'misiakos', 'altermatt-mott-ge', 'altermatt-mott-gaas', 'altermatt-mott-4h-sic'],
+  models: EQUILIBRIUM_MODELS,
   compute: (density, dopantCode, temperatureK, materialValue, counter) =>
     sampleCarrierDensity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), 'minority'),
 });

@@ -1,6 +1,7 @@
 import { carrierFor, mobility } from '../../physics';
 import { carrier, counterDoping, dopant, doping, material, mobilityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
+import { MOBILITY_MODELS } from '../citedModels';
 
 export const MOBILITY = elementwise({
   name: 'MOBILITY',
@@ -25,7 +26,7 @@ Other materials have their own fit, which is their default (blank model): hilsum
     { formula: '=DRIFT.MOBILITY(1e19,"B",300,"minority","klaassen")', note: 'minority electrons in p+ Si with Klaassen’s model' },
     { formula: '=DRIFT.MOBILITY(1e17,"Si",,,,"GaAs")', note: 'electrons in Si-doped GaAs (sotoodeh, the GaAs default)' },
   ],
-  models: ['masetti', 'arora', 'caughey-thomas', 'klaassen', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
+  models: MOBILITY_MODELS,
   compute: (density, dopantCode, temperatureK, role, model, materialValue, counter) => {
     const sample = sampleOf(materialValue, temperatureK, dopantCode, density, counter);
     return mobility(model, carrierFor(sample.dopant, role), sample);

@@ -1,6 +1,7 @@
 import { conductionBandDensity } from '../../physics';
 import { material, requiredTemperature } from '../common';
 import { elementwise } from '../types';
+import { DENSITY_OF_STATES_MODELS } from '../citedModels';
 
 export const NC = elementwise({
   name: 'NC',
@@ -9,6 +10,6 @@ export const NC = elementwise({
   result: { unit: 'cm⁻³', description: 'Conduction-band effective density of states Nc' },
   parameters: [requiredTemperature, material] as const,
   examples: [{ formula: '=DRIFT.NC(300)', note: 'silicon at 300 K, about 2.9e19 cm⁻³' }],
-  models: ['green-1990', 'sze-ng-dos-ge', 'sze-ng-dos-gaas', 'levinshtein-dos-4h-sic'],
+  models: DENSITY_OF_STATES_MODELS,
   compute: (temperatureK, materialValue) => conductionBandDensity(materialValue, temperatureK),
 });

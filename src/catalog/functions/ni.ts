@@ -1,6 +1,7 @@
 import { intrinsicDensity } from '../../physics';
 import { intrinsicModel, material, requiredTemperature } from '../common';
 import { elementwise } from '../types';
+import { INTRINSIC_MODELS } from '../citedModels';
 
 export const NI = elementwise({
   name: 'NI',
@@ -13,6 +14,6 @@ export const NI = elementwise({
     { formula: '=DRIFT.NI(300,,"sproul-green")', note: 'the same with the Sproul–Green fit' },
     { formula: '=DRIFT.NI(300,"Ge")', note: 'germanium at 300 K, about 2.1e13 cm⁻³ (dos model)' },
   ],
-  models: ['misiakos', 'sproul-green', 'dos', 'thurmond-ge', 'thurmond-gaas', 'levinshtein-gap-4h-sic', 'sze-ng-dos-ge', 'sze-ng-dos-gaas', 'levinshtein-dos-4h-sic'],
+  models: INTRINSIC_MODELS,
   compute: (temperatureK, materialValue, model) => intrinsicDensity(materialValue, temperatureK, model),
 });

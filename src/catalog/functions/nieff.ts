@@ -7,6 +7,7 @@ import {
 import { dopant, doping, material, temperature } from '../common';
 import { codeParameter } from '../parameters';
 import { elementwise } from '../types';
+import { BANDGAP_NARROWING_MODELS } from '../citedModels';
 
 /** The apparent bandgap-narrowing model; blank means the default, klaassen-bgn. */
 const bandgapNarrowingModel = codeParameter<string>({
@@ -32,7 +33,7 @@ Validity: silicon only (other materials give an error), dopant densities of abou
     { formula: '=DRIFT.NIEFF(1e20,"B",300,"slotboom-1976")', note: 'the original 1976 parameters for a boron-doped emitter' },
     { formula: '=DRIFT.NIEFF(1e19,"P")^2/DRIFT.MAJORITY(1e19,"P")', note: 'the minority holes in a 1e19 cm⁻³ n+ region with narrowing' },
   ],
-  models: [...BANDGAP_NARROWING_MODEL_CODES, 'misiakos'],
+  models: BANDGAP_NARROWING_MODELS,
   compute: (density, dopantCode, temperatureK, model, materialValue) => {
     // The model's material check comes first, so Ge, GaAs or 4H-SiC get the "silicon only" message.
     resolveBandgapNarrowingModel(materialValue, model);

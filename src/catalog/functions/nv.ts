@@ -1,6 +1,7 @@
 import { valenceBandDensity } from '../../physics';
 import { material, requiredTemperature } from '../common';
 import { elementwise } from '../types';
+import { DENSITY_OF_STATES_MODELS } from '../citedModels';
 
 export const NV = elementwise({
   name: 'NV',
@@ -9,6 +10,6 @@ export const NV = elementwise({
   result: { unit: 'cm⁻³', description: 'Valence-band effective density of states Nv' },
   parameters: [requiredTemperature, material] as const,
   examples: [{ formula: '=DRIFT.NV(300)', note: 'silicon at 300 K, about 3.1e19 cm⁻³' }],
-  models: ['green-1990', 'sze-ng-dos-ge', 'sze-ng-dos-gaas', 'levinshtein-dos-4h-sic'],
+  models: DENSITY_OF_STATES_MODELS,
   compute: (temperatureK, materialValue) => valenceBandDensity(materialValue, temperatureK),
 });

@@ -1,6 +1,7 @@
 import { resistivity } from '../../physics';
 import { counterDoping, dopant, doping, material, resistivityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
+import { RESISTIVITY_MODELS } from '../citedModels';
 
 export const RESISTIVITY = elementwise({
   name: 'RESISTIVITY',
@@ -16,7 +17,7 @@ For Ge, GaAs and 4H-SiC (material argument) a blank model means the material's o
     { formula: '=DRIFT.RESISTIVITY(A2:A40,"B",B1:H1)', note: 'doping down, temperature across: a full table' },
     { formula: '=DRIFT.RESISTIVITY(1e18,"Al",,,"4H-SiC")', note: 'Al-doped 4H-SiC: about 1.3 Ω·cm, most of the deep acceptors neutral' },
   ],
-  models: ['masetti', 'arora', 'caughey-thomas', 'astm-f723', 'hilsum', 'sotoodeh', 'roschke-schwierz'],
+  models: RESISTIVITY_MODELS,
   compute: (density, dopantCode, temperatureK, model, materialValue, counter) =>
     resistivity(sampleOf(materialValue, temperatureK, dopantCode, density, counter), model),
 });

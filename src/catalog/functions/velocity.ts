@@ -1,13 +1,7 @@
 import { carrierFor, driftVelocity } from '../../physics';
-import { carrier, dopant, doping, material, sampleOf, temperature } from '../common';
-import { requiredNumber } from '../parameters';
+import { carrier, dopant, doping, field, material, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
-
-const field = requiredNumber({
-  name: 'field_V_per_cm',
-  unit: 'V/cm',
-  description: 'Electric field in V/cm; the velocity has its sign.',
-});
+import { HIGH_FIELD_MODELS } from '../citedModels';
 
 export const VELOCITY = elementwise({
   name: 'VELOCITY',
@@ -24,7 +18,7 @@ Si: Canali et al. (1975) v_sat(T) and β(T), measured 3e2–6e4 V/cm up to 430 K
     { formula: '=DRIFT.VELOCITY(A2:A40,1e15,"B",,"hole")', note: 'a velocity–field curve of holes' },
     { formula: '=DRIFT.VELOCITY(5e3,1e16,"Si",300,"electron","GaAs")', note: 'electrons in Si-doped GaAs (no transferred-electron peak)' },
   ],
-  models: ['caughey-thomas-field', 'canali-1975', 'quay-2000', 'khan-cooper-2000'],
+  models: HIGH_FIELD_MODELS,
   compute: (fieldValue, density, dopantCode, temperatureK, role, materialValue) => {
     const sample = sampleOf(materialValue, temperatureK, dopantCode, density, 0);
     return driftVelocity(fieldValue, carrierFor(sample.dopant, role), sample);

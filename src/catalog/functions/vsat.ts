@@ -3,6 +3,7 @@ import { material, temperature } from '../common';
 import { codeParameter } from '../parameters';
 import { elementwise, type ParameterSpec } from '../types';
 import { InputError } from '../values';
+import { SATURATION_VELOCITY_MODELS } from '../citedModels';
 
 /** Carrier types only: without a dopant, 'majority' and 'minority' name nothing. */
 const CARRIER_TYPES: readonly Carrier[] = ['electron', 'hole'];
@@ -40,7 +41,7 @@ Si: v_sat = 1.53e9·T^−0.87 cm/s (electrons), 1.62e8·T^−0.52 cm/s (holes) a
     { formula: '=DRIFT.VSAT(400,"hole")', note: 'holes in Si at 400 K' },
     { formula: '=DRIFT.VSAT(A2:A10,"electron","Ge")', note: 'a temperature column for Ge' },
   ],
-  models: ['canali-1975', 'quay-2000', 'khan-cooper-2000'],
+  models: SATURATION_VELOCITY_MODELS,
   compute: (temperatureK, carrierValue, materialValue) =>
     saturationVelocity(materialValue.code, carrierValue, temperatureK),
 });

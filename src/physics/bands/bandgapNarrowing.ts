@@ -27,6 +27,7 @@ import { PhysicsDomainError } from '../errors';
 import { SILICON } from '../materials/silicon';
 import type { Material } from '../materials/types';
 import { logIntrinsicDensity } from './intrinsicDensity';
+import { checkDopantDensity } from '../ionization';
 
 /** One apparent-BGN parameter set, with its source. */
 export interface ApparentBandgapNarrowingModel {
@@ -123,12 +124,6 @@ export function resolveBandgapNarrowingModel(material: Material, code?: string):
   return found;
 }
 
-function checkDensity(density: number): void {
-  if (!Number.isFinite(density) || density < 0) {
-    throw new PhysicsDomainError(`dopant density ${density} cm⁻³ is not allowed: it must be a finite number >= 0`);
-  }
-}
-
 /**
  * Apparent bandgap narrowing ΔEg = E0·[ln(N/Nref) + sqrt(ln²(N/Nref) + C)].
  * For N < Nref the bracket is written as C/(sqrt(L² + C) − L), L = ln(N/Nref),
@@ -141,7 +136,7 @@ function checkDensity(density: number): void {
  * @example apparentBandgapNarrowing(KLAASSEN_BGN, 1e19) // ≈ 0.0601 eV
  */
 export function apparentBandgapNarrowing(model: ApparentBandgapNarrowingModel, density: number): number {
-  checkDensity(density);
+  checkDopantDensity(density);
   if (density === 0) return 0;
   const L = Math.log(density / model.referenceDensity);
   const root = Math.sqrt(L * L + model.constant);

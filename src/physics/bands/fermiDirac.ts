@@ -112,10 +112,14 @@ interface OrderConstants {
 const SQRT_PI = Math.sqrt(Math.PI);
 /** Γ(3/2) = √π/2 and Γ(5/2) = 3√π/4. */
 const GAMMA_THREE_HALVES = SQRT_PI / 2;
-const GAMMA_FIVE_HALVES = (3 * SQRT_PI) / 4;
+/** Γ(5/2); F½(η) → η^{3/2}/Γ(5/2) for η → ∞ (the leading Sommerfeld term). */
+export const GAMMA_FIVE_HALVES = (3 * SQRT_PI) / 4;
+
+/** η(2k), k = 0 … MAX_SOMMERFELD_TERMS − 1, shared by both orders. */
+const DIRICHLET_ETA_EVEN = dirichletEtaAtEvenArguments();
 
 function orderConstants(order: FermiDiracOrder): OrderConstants {
-  const eta = dirichletEtaAtEvenArguments();
+  const eta = DIRICHLET_ETA_EVEN;
   const seriesWeights: number[] = [];
   for (let k = 1; k <= MAX_SERIES_TERMS; k++) seriesWeights.push(Math.pow(k, -(order + 1)));
   const sommerfeldCoefficients: number[] = [];
@@ -184,7 +188,7 @@ function trapezoid(eta: number): TrapezoidSums {
 }
 
 /** Degree of the Chebyshev interpolants that tabulate method 2 on unit intervals (module note). */
-const TABLE_DEGREE = 18;
+export const FERMI_DIRAC_TABLE_DEGREE = 18;
 /** Unit intervals [m, m + 1] tabulated: m = SERIES_LIMIT … SOMMERFELD_LIMIT − 1. */
 const TABLE_INTERVALS = SOMMERFELD_LIMIT - SERIES_LIMIT;
 
@@ -212,8 +216,8 @@ function intervalTable(index: number): IntervalTable {
     return found;
   };
   const table: IntervalTable = {
-    half: chebyshevInterpolant((eta) => sumsAt(eta).half, lower, lower + 1, TABLE_DEGREE),
-    minusHalf: chebyshevInterpolant((eta) => sumsAt(eta).minusHalf, lower, lower + 1, TABLE_DEGREE),
+    half: chebyshevInterpolant((eta) => sumsAt(eta).half, lower, lower + 1, FERMI_DIRAC_TABLE_DEGREE),
+    minusHalf: chebyshevInterpolant((eta) => sumsAt(eta).minusHalf, lower, lower + 1, FERMI_DIRAC_TABLE_DEGREE),
   };
   intervalTables[index] = table;
   return table;
@@ -236,7 +240,7 @@ function tabulated(order: FermiDiracOrder, eta: number): number {
  * @example fermiDiracByQuadrature(0.5, 0) // ≈ 0.7651470246254079
  */
 export function fermiDiracByQuadrature(order: FermiDiracOrder, eta: number): number {
-  constantsOf(order);
+  constantsOf(order); // refuses an order other than ±1/2, as fermiDiracIntegral does
   const sums = trapezoid(eta);
   return order === 0.5 ? sums.half : sums.minusHalf;
 }

@@ -4,7 +4,7 @@
  *   J = q·(n·v_n(E) + p·v_p(E)),
  *
  * with n, p from the equilibrium solve and v_n, v_p the Caughey–Thomas drift
- * velocities of driftVelocity.ts (same μ0 as DRIFT.MOBILITY), so J → σ·E as
+ * velocities of driftVelocity.ts (same μ0 as DRIFT.MOBILITY, computed once for both carriers), so J → σ·E as
  * E → 0. Both carriers drift so that their current follows E.
  */
 import type { Carrier, Sample } from '../sample';
@@ -13,8 +13,7 @@ import { solveEquilibrium } from '../equilibrium';
 import { ELEMENTARY_CHARGE } from '../constants';
 import { PhysicsDomainError } from '../errors';
 import { driftMobilities } from '../mobility';
-import { caugheyThomasVelocity } from './caugheyThomasField';
-import { fieldExponent, saturationVelocity } from './saturationVelocity';
+import { velocityAtMobility } from './driftVelocity';
 import { missingSaturationVelocity } from './tables';
 
 /**
@@ -41,27 +40,25 @@ export function saturatedCurrentDensity(field: number, sample: Sample, model = '
   const code = sample.material.code;
 
   const flux = (carrier: Carrier): number => {
-    let vsat: number;
-    let beta: number;
     try {
-      vsat = saturationVelocity(code, carrier, sample.temperature);
-      beta = fieldExponent(code, carrier, sample.temperature);
+      return density[carrier] * velocityAtMobility(field, carrier, sample, mobilities[carrier]);
     } catch (error) {
       if (!(error instanceof PhysicsDomainError)) throw error;
       throw new PhysicsDomainError(`${error.message}; use the ohmic form J = σE instead`);
     }
-    return density[carrier] * caugheyThomasVelocity(field, mobilities[carrier], vsat, beta);
   };
 
+  const fluxes: Partial<Record<Carrier, number>> = {};
+  const fluxOf = (carrier: Carrier): number => (fluxes[carrier] ??= flux(carrier));
   let total = 0;
   for (const carrier of ['electron', 'hole'] as const) {
     const missing = missingSaturationVelocity(code, carrier);
     if (missing === undefined) {
-      total += flux(carrier);
+      total += fluxOf(carrier);
       continue;
     }
     const ohmicBound = density[carrier] * mobilities[carrier] * Math.abs(field);
-    const other = flux(carrier === 'electron' ? 'hole' : 'electron');
+    const other = fluxOf(carrier === 'electron' ? 'hole' : 'electron');
     if (!(ohmicBound <= Number.EPSILON * Math.abs(other))) {
       throw new PhysicsDomainError(
         `${missing}; the ${carrier}s of this ${code} sample (${density[carrier]} cm⁻³) carry too large a share of the ` +

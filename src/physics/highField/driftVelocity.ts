@@ -8,7 +8,7 @@
 import type { Carrier, Sample } from '../sample';
 import { driftMobilities } from '../mobility';
 import { caugheyThomasVelocity } from './caugheyThomasField';
-import { fieldExponent, saturationVelocity } from './saturationVelocity';
+import { highFieldParameters } from './saturationVelocity';
 
 /**
  * Drift velocity v(E) = μ0·E / (1 + (μ0·|E|/v_sat)^β)^(1/β).
@@ -22,9 +22,22 @@ import { fieldExponent, saturationVelocity } from './saturationVelocity';
  * @example driftVelocity(1e4, 'electron', phosphorus1e16At300K) // ≈ 6.0e6 cm/s
  */
 export function driftVelocity(field: number, carrier: Carrier, sample: Sample, model = ''): number {
-  const code = sample.material.code;
-  const vsat = saturationVelocity(code, carrier, sample.temperature);
-  const beta = fieldExponent(code, carrier, sample.temperature);
-  const lowFieldMobility = driftMobilities(model, sample)[carrier];
-  return caugheyThomasVelocity(field, lowFieldMobility, vsat, beta);
+  return velocityAtMobility(field, carrier, sample, driftMobilities(model, sample)[carrier]);
+}
+
+/**
+ * The same law for a low-field mobility the caller already has (the current
+ * density computes both carriers' μ0 at once).
+ *
+ * @param field - E, V/cm
+ * @param carrier - 'electron' or 'hole'
+ * @param sample - gives the material and temperature of v_sat and β
+ * @param lowFieldMobility - μ0, cm²/(V·s)
+ * @returns v in cm/s, with the sign of E
+ * @throws PhysicsDomainError where the material has no saturation velocity for the carrier or temperature
+ * @example velocityAtMobility(1e4, 'electron', phosphorus1e16At300K, 1180) // ≈ 6.0e6 cm/s
+ */
+export function velocityAtMobility(field: number, carrier: Carrier, sample: Sample, lowFieldMobility: number): number {
+  const { saturationVelocity, fieldExponent } = highFieldParameters(sample.material.code, carrier, sample.temperature);
+  return caugheyThomasVelocity(field, lowFieldMobility, saturationVelocity, fieldExponent);
 }

@@ -73,3 +73,27 @@ export function fieldExponent(materialCode: string, carrier: Carrier, temperatur
   const table = carrierHighFieldTable(materialCode, carrier);
   return exponentFromLaw(table.fieldExponent, checkedTemperature(table, materialCode, carrier, temperature));
 }
+
+/** v_sat and β of one carrier at one temperature: what the Caughey–Thomas field law needs. */
+export interface HighFieldParameters {
+  /** v_sat, cm/s. */
+  readonly saturationVelocity: number;
+  /** β, dimensionless. */
+  readonly fieldExponent: number;
+}
+
+/**
+ * Saturation velocity and field exponent together, from one table lookup.
+ *
+ * @param materialCode - 'Si', 'Ge', 'GaAs' or '4H-SiC' (case-insensitive)
+ * @param carrier - 'electron' or 'hole'
+ * @param temperature - T, K, inside the table's evaluation range
+ * @returns v_sat (cm/s) and β
+ * @throws PhysicsDomainError as saturationVelocity
+ * @example highFieldParameters('Si', 'electron', 300).saturationVelocity // ≈ 1.07e7 cm/s
+ */
+export function highFieldParameters(materialCode: string, carrier: Carrier, temperature: number): HighFieldParameters {
+  const table = carrierHighFieldTable(materialCode, carrier);
+  const t = checkedTemperature(table, materialCode, carrier, temperature);
+  return { saturationVelocity: saturationFromLaw(table.saturationVelocity, t), fieldExponent: exponentFromLaw(table.fieldExponent, t) };
+}

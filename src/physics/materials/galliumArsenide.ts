@@ -6,6 +6,7 @@
 
 import { GALLIUM_ARSENIDE_DOPANTS, GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY } from './galliumArsenideDopants';
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
+import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 
 /**
  * Varshni-form fit of the GaAs gap as Thurmond gives it (form of
@@ -49,8 +50,6 @@ export const SZE_NG_2007_GALLIUM_ARSENIDE_DENSITY_OF_STATES: DensityOfStatesMode
 /** Melting point of GaAs, 1238 °C (common practice, no source). */
 const GALLIUM_ARSENIDE_MELTING_POINT = 1511; // K
 
-/** Below this the exponentials in ni and freeze-out leave the range of doubles (as for Si). */
-const LOWEST_NUMERIC_TEMPERATURE = 1; // K
 
 /** 8 atoms per cubic cell, lattice constant 5.653 Å (common practice, no source). */
 const GALLIUM_ARSENIDE_ATOMIC_DENSITY = 4.42e22; // cm⁻³

@@ -7,6 +7,7 @@
 
 import { GERMANIUM_DOPANTS, GERMANIUM_RELATIVE_PERMITTIVITY } from './germaniumDopants';
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
+import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 
 /**
  * Varshni-form fit of the Ge gap as Thurmond gives it (the form of
@@ -49,8 +50,6 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
 /** Melting point of Ge, 938 °C: solid-state models end there (common practice, no source). */
 const GERMANIUM_MELTING_POINT = 1211; // K
 
-/** Below this the exponentials in ni and freeze-out leave the range of doubles (as for Si). */
-const LOWEST_NUMERIC_TEMPERATURE = 1; // K
 
 /** 8 atoms per cubic cell, lattice constant 5.658 Å (common practice, no source). */
 const GERMANIUM_ATOMIC_DENSITY = 4.42e22; // cm⁻³

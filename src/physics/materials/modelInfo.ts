@@ -5,14 +5,20 @@
  * and validity come from the parameter tables themselves.
  */
 import type { ModelInfo } from '../modelInfo';
-import { GALLIUM_ARSENIDE } from './galliumArsenide';
-import { GERMANIUM } from './germanium';
+import { MATERIALS } from './index';
 import { HYDROGENIC_CONSTANTS, mottDensity } from './ionizationScaling';
-import { SILICON_CARBIDE_4H } from './siliconCarbide4H';
+import { SILICON } from './silicon';
 import type { Material } from './types';
 
-/** The non-silicon hosts described here. */
-const HOSTS: readonly Material[] = [GERMANIUM, GALLIUM_ARSENIDE, SILICON_CARBIDE_4H];
+/** The non-silicon hosts described here, in catalog order. */
+const HOSTS: readonly Material[] = MATERIALS.filter((material) => material !== SILICON);
+
+/** A host's dopants other than the generic donor and acceptor. */
+function namedDopants(material: Material) {
+  return material.dopants.filter(
+    (dopant) => dopant.symbol !== material.genericDopants.donor && dopant.symbol !== material.genericDopants.acceptor,
+  );
+}
 
 /** Code of a host's dopant-ionization parameter set, e.g. 'altermatt-mott-gaas'. */
 export function ionizationModelCode(material: Material): string {
@@ -21,16 +27,13 @@ export function ionizationModelCode(material: Material): string {
 
 /** The distinct citations of a host's named dopants' ionization energies. */
 function energySources(material: Material): string {
-  const named = material.dopants.filter(
-    (dopant) => dopant.symbol !== material.genericDopants.donor && dopant.symbol !== material.genericDopants.acceptor,
-  );
+  const named = namedDopants(material);
   const sources = [...new Set(named.map((dopant) => dopant.ionizationEnergyCitation))];
   return sources.length === 1 ? sources[0] : named.map((dopant) => `${dopant.symbol}: ${dopant.ionizationEnergyCitation}`).join('; ');
 }
 
 function dopantSummary(material: Material): string {
-  return material.dopants
-    .filter((dopant) => dopant.symbol !== material.genericDopants.donor && dopant.symbol !== material.genericDopants.acceptor)
+  return namedDopants(material)
     .map((dopant) => {
       const mott = mottDensity(dopant.ionizationEnergy, material.relativePermittivity);
       return `${dopant.symbol} ${dopant.kind} ${(dopant.ionizationEnergy * 1000).toPrecision(3)} meV (N_M ≈ ${mott.toExponential(1)} cm⁻³)`;

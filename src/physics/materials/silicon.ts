@@ -7,6 +7,7 @@
 
 import { SILICON_DOPANTS } from './siliconDopants';
 import type { DensityOfStatesModel, IntrinsicDensityFit, Material, VarshniBandgap } from './types';
+import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 
 /**
  * Thurmond's Varshni-form fit of the Si gap.
@@ -103,8 +104,6 @@ export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
 /** Melting point of Si: solid-state models end there. */
 const SILICON_MELTING_POINT = 1687; // K (1414 °C), common practice, no source
 
-/** Below this the exponentials in ni and freeze-out leave the range of doubles. */
-const LOWEST_NUMERIC_TEMPERATURE = 1; // K
 
 /** 8 atoms per cubic cell, lattice constant 5.431 Å (common practice, no source). */
 const SILICON_ATOMIC_DENSITY = 4.994e22; // cm⁻³

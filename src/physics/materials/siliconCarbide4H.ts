@@ -6,12 +6,9 @@
  * All values from memory.
  */
 
-import { SILICON_CARBIDE_4H_DOPANTS, SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY } from './siliconCarbide4HDopants';
+import { LEVINSHTEIN_2001, SILICON_CARBIDE_4H_DOPANTS, SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY } from './siliconCarbide4HDopants';
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
-
-const LEVINSHTEIN_2001 =
-  'Yu. Goldberg, M. E. Levinshtein, S. L. Rumyantsev, "Silicon carbide (SiC)", in M. E. Levinshtein, ' +
-  'S. L. Rumyantsev, M. S. Shur (eds.), Properties of Advanced Semiconductor Materials, Wiley 2001';
+import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 
 /**
  * Varshni-form gap of 4H-SiC, Eg(T) = 3.265 − 6.5e-4·T²/(T + 1300) eV:
@@ -48,8 +45,6 @@ export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES: DensityOfSta
 /** 4H-SiC decomposes (sublimes) near 2830 °C instead of melting (common practice, no source). */
 const SILICON_CARBIDE_DECOMPOSITION = 3100; // K
 
-/** Below this the exponentials in ni and freeze-out leave the range of doubles (as for Si). */
-const LOWEST_NUMERIC_TEMPERATURE = 1; // K
 
 /** Si–C pairs per volume of the 4H cell, 9.64e22 atoms/cm³ (common practice, no source). */
 const SILICON_CARBIDE_ATOMIC_DENSITY = 9.64e22; // cm⁻³

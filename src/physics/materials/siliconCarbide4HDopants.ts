@@ -42,19 +42,23 @@ import type { Dopant, DopantKind } from './types';
  */
 export const SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY = 9.7;
 
-const LEVINSHTEIN_2001 =
-  'Yu. Goldberg, M. E. Levinshtein, S. L. Rumyantsev in M. E. Levinshtein, S. L. Rumyantsev, M. S. Shur (eds.), ' +
-  'Properties of Advanced Semiconductor Materials, Wiley 2001, SiC chapter (from memory)';
+/** The SiC chapter of Levinshtein et al. (2001), cited by the 4H-SiC dopant, band-gap and density-of-states tables. */
+export const LEVINSHTEIN_2001 =
+  'Yu. Goldberg, M. E. Levinshtein, S. L. Rumyantsev, "Silicon carbide (SiC)", in M. E. Levinshtein, ' +
+  'S. L. Rumyantsev, M. S. Shur (eds.), Properties of Advanced Semiconductor Materials, Wiley 2001';
+
+/** As cited for ionization energies. */
+const LEVINSHTEIN_2001_LEVELS = `${LEVINSHTEIN_2001} (from memory)`;
 
 const SOURCES = {
   N:
     `effective level between the h-site (≈0.05–0.06 eV) and k-site (≈0.09–0.125 eV) donor levels (decision); ` +
-    `W. Götz et al., J. Appl. Phys. 73, 3332 (1993); ${LEVINSHTEIN_2001}`,
+    `W. Götz et al., J. Appl. Phys. 73, 3332 (1993); ${LEVINSHTEIN_2001_LEVELS}`,
   P:
     `effective level between the h-site (≈0.05 eV) and k-site (≈0.09 eV) donor levels (decision); ` +
     `M. A. Capano et al., J. Appl. Phys. 87, 8773 (2000) (from memory)`,
-  Al: `Al acceptor ≈0.19–0.23 eV; ${LEVINSHTEIN_2001}`,
-  B: `shallow boron acceptor ≈0.28–0.35 eV (deep D centre ignored); ${LEVINSHTEIN_2001}`,
+  Al: `Al acceptor ≈0.19–0.23 eV; ${LEVINSHTEIN_2001_LEVELS}`,
+  B: `shallow boron acceptor ≈0.28–0.35 eV (deep D centre ignored); ${LEVINSHTEIN_2001_LEVELS}`,
 } as const;
 
 const SPECIES_NOTE = 'the 4H-SiC mobility fit (roschke-schwierz) does not depend on the dopant species';

@@ -5,6 +5,9 @@
 import { PhysicsDomainError } from '../errors';
 import type { Material } from './types';
 
+/** Lowest temperature of every material's domain: below it the exponentials in ni and freeze-out leave the range of doubles. */
+export const LOWEST_NUMERIC_TEMPERATURE = 1; // K
+
 /**
  * Checks that a temperature lies in the material's temperature domain.
  *

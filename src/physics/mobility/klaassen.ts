@@ -79,6 +79,7 @@ import { solveEquilibrium } from '../equilibrium';
 import { findRoot } from '../solve';
 import type { DopantKind } from '../materials/types';
 import { fullIonizationCorrection, netMajorityCarrier } from './fullIonizationCorrection';
+import { MASETTI_TABLE, type MasettiParameters } from './masetti';
 
 /** Citation and validity of Klaassen's model, for the model registry. */
 export const KLAASSEN_SOURCE = {
@@ -111,9 +112,14 @@ export interface KlaassenCarrierParameters {
  * least certain). Validity: see KLAASSEN_SOURCE.
  */
 export const KLAASSEN_CARRIER_TABLE: Readonly<Record<Carrier, KlaassenCarrierParameters>> = {
-  electron: { maximum: 1414, latticeExponent: 2.285, minimum: 68.5, referenceDensity: 9.2e16, alpha: 0.711, massRatio: 1 },
-  hole: { maximum: 470.5, latticeExponent: 2.247, minimum: 44.9, referenceDensity: 2.23e17, alpha: 0.719, massRatio: 1.258 },
+  electron: { ...fromMasetti(MASETTI_TABLE.P.parameters), latticeExponent: 2.285, massRatio: 1 },
+  hole: { ...fromMasetti(MASETTI_TABLE.B.parameters), latticeExponent: 2.247, massRatio: 1.258 },
 };
+
+/** The four parameters Klaassen shares with a Masetti row (read from it, so the two tables cannot disagree). */
+function fromMasetti(row: MasettiParameters): Pick<KlaassenCarrierParameters, 'maximum' | 'minimum' | 'referenceDensity' | 'alpha'> {
+  return { maximum: row.maximum, minimum: row.minimum1, referenceDensity: row.referenceDensity, alpha: row.alpha };
+}
 
 /** Exponents of the temperature laws of μ_N and μ_c (paper II, from memory): μ_N ∝ T^(3α − 3/2), μ_c ∝ T^(−1/2). */
 export const KLAASSEN_TEMPERATURE_LAWS = {

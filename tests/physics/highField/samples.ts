@@ -2,13 +2,12 @@
  * Samples in each material for the high-field tests (not a test file).
  */
 import { resolveMaterial } from '../../../src/physics/materials';
-import { resolveDopant } from '../../../src/physics/dopants';
 import type { Sample } from '../../../src/physics/sample';
+import { materialSample } from '../transportSamples';
 
 /** A uniformly doped sample of one dopant in a material given by code. */
 export function sampleIn(materialCode: string, dopant: string, density: number, temperature = 300, counterDensity = 0): Sample {
-  const material = resolveMaterial(materialCode);
-  return { material, temperature, dopant: resolveDopant(material, dopant), density, counterDensity };
+  return materialSample(resolveMaterial(materialCode), dopant, density, temperature, counterDensity);
 }
 
 /** One n-type and one p-type sample per material, at 300 K. */

@@ -11,16 +11,14 @@ import {
   resolveResistivityModel,
 } from '../../../src/physics/transport';
 import { dopingForResistivity } from '../../../src/physics/inverse';
-import { GALLIUM_ARSENIDE, GERMANIUM, SILICON, SILICON_CARBIDE_4H, type Material } from '../../../src/physics/materials';
+import { GALLIUM_ARSENIDE, GERMANIUM, SILICON, SILICON_CARBIDE_4H } from '../../../src/physics/materials';
 import { resolveDopant } from '../../../src/physics/dopants';
 import { ELEMENTARY_CHARGE } from '../../../src/physics/constants';
 import { solveEquilibrium } from '../../../src/physics/equilibrium';
 import { mobility } from '../../../src/physics/mobility';
-import type { Sample } from '../../../src/physics/sample';
+import { materialSample } from '../transportSamples';
 
-function sample(material: Material, symbol: string, density: number, temperature = 300, counterDensity = 0): Sample {
-  return { material, temperature, dopant: resolveDopant(material, symbol), density, counterDensity };
-}
+const sample = materialSample;
 
 describe('resistivity model codes per material', () => {
   it('lists astm-f723 for silicon only', () => {

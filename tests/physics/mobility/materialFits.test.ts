@@ -19,13 +19,11 @@ import {
 } from '../../../src/physics/mobility/materialFits';
 import { fullIonizationCorrection } from '../../../src/physics/mobility/fullIonizationCorrection';
 import { GALLIUM_ARSENIDE, GERMANIUM, MATERIALS, SILICON, SILICON_CARBIDE_4H, type Material } from '../../../src/physics/materials';
-import { resolveDopant } from '../../../src/physics/dopants';
 import { PhysicsDomainError } from '../../../src/physics/errors';
-import type { Carrier, Sample } from '../../../src/physics/sample';
+import type { Carrier } from '../../../src/physics/sample';
+import { materialSample } from '../transportSamples';
 
-function sample(material: Material, symbol: string, density: number, temperature = 300, counterDensity = 0): Sample {
-  return { material, temperature, dopant: resolveDopant(material, symbol), density, counterDensity };
-}
+const sample = materialSample;
 
 const NEW_HOSTS: readonly Material[] = [GERMANIUM, GALLIUM_ARSENIDE, SILICON_CARBIDE_4H];
 
