@@ -23,6 +23,23 @@ export function describeValue(value: Plain): string {
  */
 const DECIMAL_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
 
+/**
+ * Reads text as a number the way a spreadsheet does: decimal notation with an
+ * optional exponent, surrounding spaces ignored. The one reader of typed
+ * numbers for the catalog and the task pane.
+ *
+ * @param text - what was typed
+ * @returns the number, or null for anything else (blank, hex/binary/octal, '1,5', '1e400', 'Infinity')
+ * @example parseDecimalText(' 2.5E+16 ') // 2.5e16
+ * @example parseDecimalText('0x10') // null
+ */
+export function parseDecimalText(text: string): number | null {
+  const trimmed = text.trim();
+  if (!DECIMAL_TEXT.test(trimmed)) return null;
+  const parsed = Number(trimmed);
+  return Number.isFinite(parsed) ? parsed : null;
+}
+
 /** Reads a number from a cell element: numbers as they are, numeric text trimmed; blanks give null. */
 function readNumber(name: string, value: Plain): number | null {
   if (value === null || (typeof value === 'string' && value.trim() === '')) return null;
@@ -30,9 +47,9 @@ function readNumber(name: string, value: Plain): number | null {
     if (!Number.isFinite(value)) throw new InputError(`${name} must be a finite number; got ${value}`);
     return value;
   }
-  if (typeof value === 'string' && DECIMAL_TEXT.test(value.trim())) {
-    const parsed = Number(value.trim());
-    if (Number.isFinite(parsed)) return parsed;
+  if (typeof value === 'string') {
+    const parsed = parseDecimalText(value);
+    if (parsed !== null) return parsed;
   }
   throw new InputError(`${name} must be a number; got ${describeValue(value)}`);
 }

@@ -15,6 +15,7 @@ import { readFile, stat } from 'node:fs/promises';
 import ExcelJS from 'exceljs';
 import { CellError, CellType, DetailedCellError, ErrorType } from 'hyperformula';
 import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, SimpleCellRange } from 'hyperformula';
+import { areaName, cellName, columnName } from './a1';
 import { createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
 import { fileErrorText } from './errorTypes';
@@ -60,16 +61,12 @@ export interface RecalcSummary {
 
 /** A1 column letters of a 1-based column number. */
 export function columnLetters(column: number): string {
-  let letters = '';
-  for (let n = column; n > 0; n = Math.floor((n - 1) / 26)) {
-    letters = String.fromCharCode(65 + ((n - 1) % 26)) + letters;
-  }
-  return letters;
+  return columnName(column - 1);
 }
 
 /** A1 address of a 1-based row and column. */
 export function cellAddress(row: number, column: number): string {
-  return `${columnLetters(column)}${row}`;
+  return cellName(row - 1, column - 1);
 }
 
 interface Box {
@@ -85,9 +82,7 @@ function columnNumber(letters: string): number {
 
 /** A1 form of an engine range: `C8:C27`, or `C8` for one cell, as Excel writes it. */
 function rangeAddress(range: SimpleCellRange): string {
-  const start = cellAddress(range.start.row + 1, range.start.col + 1);
-  const end = cellAddress(range.end.row + 1, range.end.col + 1);
-  return start === end ? start : `${start}:${end}`;
+  return areaName(range.start.row, range.start.col, range.end.row, range.end.col);
 }
 
 /** 1-based bounds of an A1 range such as `C1:D5` or `$C$1`. */

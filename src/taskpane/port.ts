@@ -8,6 +8,7 @@
  * Coordinates are zero-based (row 0, column 0 is A1). A cell input that is a
  * string starting with '=' is a formula; any other string is text.
  */
+import { areaName } from '../engine/a1';
 
 /** A rectangle of cells on one sheet. */
 export interface CellBlock {
@@ -87,22 +88,15 @@ export interface WorkbookPort {
   addHighlight(plan: HighlightPlan): Promise<void>;
 }
 
+/** A1 names of cells and areas from 0-based coordinates, shared with the workbook recalculation. */
+export { areaName, cellName, columnName } from '../engine/a1';
+
 /** A1-style address of a block without the sheet, e.g. 'B2:D9' or 'B2'. */
 export function blockAddress(block: CellBlock): string {
-  const start = cellName(block.row, block.column);
-  if (block.rowCount === 1 && block.columnCount === 1) return start;
-  return `${start}:${cellName(block.row + block.rowCount - 1, block.column + block.columnCount - 1)}`;
+  return areaName(block.row, block.column, block.row + block.rowCount - 1, block.column + block.columnCount - 1);
 }
 
-/** A1-style name of one cell from 0-based row and column, e.g. (0, 27) → 'AB1'. */
-export function cellName(row: number, column: number): string {
-  return `${columnName(column)}${row + 1}`;
-}
-
-/** Column letters for a 0-based column index: 0 → 'A', 25 → 'Z', 26 → 'AA'. */
-export function columnName(column: number): string {
-  if (!Number.isInteger(column) || column < 0) throw new RangeError(`column index ${column} must be an integer >= 0`);
-  let name = '';
-  for (let n = column + 1; n > 0; n = Math.floor((n - 1) / 26)) name = String.fromCharCode(65 + ((n - 1) % 26)) + name;
-  return name;
+/** A1 address with the sheet, as messages show it: "Sheet1!B2:D9". */
+export function sheetAddress(block: CellBlock): string {
+  return `${block.sheet}!${blockAddress(block)}`;
 }

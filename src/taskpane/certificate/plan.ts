@@ -3,7 +3,7 @@
  * of a supplier's table, one formula per wafer row, and a small block of
  * labelled parameter cells (the needed doping window, temperature, model,
  * material…) that every formula references, so changing a parameter cell
- * re-checks the whole table. The plan is data (see sheetPlan.ts); nothing
+ * re-checks the whole table. The plan is data (see ../sheetPlan.ts); nothing
  * here touches a workbook.
  *
  * Layout, left to right, starting in the first column after the table:
@@ -15,11 +15,11 @@
  * optional limit; FAIL otherwise. An error in a row's inputs shows as that
  * error (with its message) rather than as PASS or FAIL.
  */
-import { blockAddress, columnName, type CellBlock, type CellInput } from '../port';
+import { areaName, blockAddress, cellName, columnName, sheetAddress, type CellBlock, type CellInput } from '../port';
 import { callText, parameterNamed } from '../reference/callText';
 import { READING_ROLES, type ColumnRole } from './roles';
 import type { CertificateSettings, CertificateTable } from './settings';
-import { sheetAddress, type SheetPlan } from './sheetPlan';
+import type { SheetPlan } from '../sheetPlan';
 import { dopantCodeFormula } from './typeCodes';
 import { RESISTIVITY_UNITS, THICKNESS_UNITS, unitByCode } from './units';
 import { catalogEntry, rowWarnings, validateSettings } from './validate';
@@ -58,8 +58,7 @@ export function rowReferences(columns: readonly number[], row: number): string {
   for (let i = 0; i < sorted.length; ) {
     let j = i;
     while (j + 1 < sorted.length && sorted[j + 1] === sorted[j] + 1) j += 1;
-    const first = `${columnName(sorted[i])}${row + 1}`;
-    parts.push(j === i ? first : `${first}:${columnName(sorted[j])}${row + 1}`);
+    parts.push(areaName(row, sorted[i], row, sorted[j]));
     i = j + 1;
   }
   return parts.join(',');
@@ -114,7 +113,7 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
       (typeof roles === 'string' ? role === roles : roles.has(role)) ? [block.column + index] : [],
     );
   const has = (role: ColumnRole): boolean => settings.mapping.includes(role);
-  const ref = (role: ColumnRole, sheetRow: number): string => `${columnName(sheetColumn(role))}${sheetRow + 1}`;
+  const ref = (role: ColumnRole, sheetRow: number): string => cellName(sheetRow, sheetColumn(role));
 
   const rhoFactor = unitByCode(RESISTIVITY_UNITS, settings.resistivityUnit).factor;
   const readingColumns = columnsOf(READING_ROLES);
@@ -141,7 +140,8 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
 
   const columns: PlannedColumn[] = [];
   const firstNew = block.column + block.columnCount;
-  const newColumn = (offset: number): string => columnName(firstNew + offset);
+  /** The cell of a new column (by offset) in a sheet row. */
+  const newCell = (offset: number, row: number): string => cellName(row, firstNew + offset);
   // Parameter cell references need the parameter block's column, known once the column count is;
   // columns are built as closures and the block column is fixed below before any formula is produced.
   let parameterColumn = -1;
@@ -160,7 +160,7 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
       formula: (row) => dopantCodeFormula(ref('type', row), settings.typeMeansConductivity),
     });
   }
-  const dopantArgument = (row: number): string => (dopantColumn >= 0 ? `${newColumn(dopantColumn)}${row + 1}` : parameterRef('dopant'));
+  const dopantArgument = (row: number): string => (dopantColumn >= 0 ? newCell(dopantColumn, row) : parameterRef('dopant'));
   const dopingAt = (role: 'rho-min' | 'rho-max') => (row: number): string =>
     callText(doping, {
       resistivity: scaled(ref(role, row), rhoFactor),
@@ -178,7 +178,7 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
   columns.push({
     header: settings.windowRule === 'certified-inside-needed' ? 'Certified doping inside needed window' : 'Needed window inside certified doping',
     formula: (row) => {
-      const pair = `${newColumn(atRhoMaxColumn)}${row + 1},${newColumn(atRhoMinColumn)}${row + 1}`;
+      const pair = `${newCell(atRhoMaxColumn, row)},${newCell(atRhoMinColumn, row)}`;
       const [low, high] = [`MIN(${pair})`, `MAX(${pair})`];
       const [min, max] = [parameterRef('neededMin'), parameterRef('neededMax')];
       const inside = settings.windowRule === 'certified-inside-needed' ? `AND(${low}>=${min},${high}<=${max})` : `AND(${low}<=${min},${high}>=${max})`;
@@ -229,10 +229,9 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
   columns.push({
     header: 'Pass/fail',
     formula: (row) => {
-      const cell = (column: number): string => `${newColumn(column)}${row + 1}`;
-      const conditions = [`${cell(windowColumn)}="${VERDICT.yes}"`];
-      if (readingsColumn >= 0) conditions.push(`${cell(readingsColumn)}<>"${VERDICT.no}"`);
-      if (radialLimit !== null) conditions.push(`ABS(${cell(radialColumn)})<=${parameterRef('radialLimit')}`);
+      const conditions = [`${newCell(windowColumn, row)}="${VERDICT.yes}"`];
+      if (readingsColumn >= 0) conditions.push(`${newCell(readingsColumn, row)}<>"${VERDICT.no}"`);
+      if (radialLimit !== null) conditions.push(`ABS(${newCell(radialColumn, row)})<=${parameterRef('radialLimit')}`);
       return `IF(AND(${conditions.join(',')}),"${VERDICT.pass}","${VERDICT.fail}")`;
     },
   });

@@ -4,12 +4,13 @@
  * check. The pane's controls (view.ts) call these; unit tests call them with
  * an in-memory port.
  */
-import type { CellBlock, WorkbookPort } from '../port';
+import { sheetAddress, type CellBlock, type WorkbookPort } from '../port';
+import { applySheetPlan, PaneRefusal } from '../sheetPlan';
 import { guessMapping } from './headers';
 import { planCertificateCheck, type CertificatePlan, type CertificateSettings, type CertificateTable } from './plan';
 import { RESISTIVITY_ROLES, type ColumnRole } from './roles';
-import { applySheetPlan, PaneRefusal, sheetAddress } from './sheetPlan';
 import { readResistivityUnit, readThicknessUnit, RESISTIVITY_UNITS } from './units';
+import { requireTableRows } from './validate';
 
 /** What the pane proposes after reading a table. */
 export interface CertificateGuess {
@@ -78,9 +79,7 @@ export const MAX_TABLE = { rows: 5000, columns: 60 } as const;
  */
 export async function readCertificateTable(port: WorkbookPort): Promise<{ table: CertificateTable; guess: CertificateGuess }> {
   const block = await port.selection();
-  if (block.rowCount < 2) {
-    throw new PaneRefusal(`Select the whole certificate table, header row included: the selection ${sheetAddress(block)} has only one row.`);
-  }
+  requireTableRows(block);
   if (block.rowCount > MAX_TABLE.rows || block.columnCount > MAX_TABLE.columns) {
     throw new PaneRefusal(
       `The selection ${sheetAddress(block)} is ${block.rowCount} rows × ${block.columnCount} columns; select just the certificate table ` +

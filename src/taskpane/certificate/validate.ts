@@ -7,11 +7,11 @@
 import { findFunction } from '../../catalog';
 import { MAX_DENSITY, TEMPERATURE_RANGE_K } from '../../catalog/common';
 import type { FunctionSpec } from '../../catalog/types';
-import type { CellShown } from '../port';
+import { sheetAddress, type CellBlock, type CellShown } from '../port';
 import { parameterNamed } from '../reference/callText';
 import { duplicateRole, ROLE_LABELS, type ColumnRole } from './roles';
 import type { CertificateSettings, CertificateTable } from './settings';
-import { PaneRefusal, sheetAddress } from './sheetPlan';
+import { PaneRefusal } from '../sheetPlan';
 import { dopantCodeFor, dopantCodeList, knownDopant } from './typeCodes';
 import { RESISTIVITY_UNITS, THICKNESS_UNITS } from './units';
 
@@ -33,6 +33,18 @@ export function materialCode(settings: CertificateSettings): string {
 }
 
 /**
+ * Refuses a selection of one row: a certificate table needs its header row and at least one wafer row.
+ *
+ * @param block - the selection
+ * @throws PaneRefusal naming the selection
+ */
+export function requireTableRows(block: CellBlock): void {
+  if (block.rowCount < 2) {
+    throw new PaneRefusal(`Select the whole certificate table, header row included: the selection ${sheetAddress(block)} has only one row.`);
+  }
+}
+
+/**
  * Refuses a table or settings the check cannot work with.
  *
  * @param table - the selection and its contents
@@ -42,11 +54,7 @@ export function materialCode(settings: CertificateSettings): string {
  */
 export function validateSettings(table: CertificateTable, settings: CertificateSettings, headers: readonly string[]): void {
   const { block } = table;
-  if (block.rowCount < 2) {
-    throw new PaneRefusal(
-      `Select the whole certificate table, header row included: the selection ${sheetAddress(block)} has only one row.`,
-    );
-  }
+  requireTableRows(block);
   if (settings.mapping.length !== block.columnCount) {
     throw new Error(`mapping has ${settings.mapping.length} roles for ${block.columnCount} columns`);
   }

@@ -6,14 +6,14 @@
  * builds elements and reads them back.
  */
 import { findFunction } from '../../catalog';
-import { columnName, type CellBlock } from '../port';
+import { columnName, sheetAddress, type CellBlock } from '../port';
 import type { ToolContext } from '../tool';
 import { parameterNamed } from '../reference/callText';
-import { element, labelledControl, parseNumberField, selectOf } from './dom';
+import { element, labelledControl, parseNumberField, selectOf } from '../dom';
+import { PaneRefusal } from '../sheetPlan';
 import type { CertificateSettings, WindowRule } from './plan';
 import { COLUMN_ROLES, ROLE_LABELS, type ColumnRole } from './roles';
 import { addCertificateCheck, guessUnits, readCertificateTable, type CertificateGuess } from './session';
-import { PaneRefusal } from './sheetPlan';
 import { RESISTIVITY_UNITS, THICKNESS_UNITS } from './units';
 
 const ID = 'certificate';
@@ -137,7 +137,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     rhoUnit.value = guess.resistivityUnit ?? CHOOSE;
     thicknessUnit.value = guess.thicknessUnit ?? CHOOSE;
     mappingSection.replaceChildren(
-      element(doc, 'h3', { id: `${ID}-mapping-title`, text: `Columns of ${block.sheet}!${columnName(block.column)}${block.row + 1}:${columnName(block.column + block.columnCount - 1)}${block.row + block.rowCount}` }),
+      element(doc, 'h3', { id: `${ID}-mapping-title`, text: `Columns of ${sheetAddress(block)}` }),
       element(doc, 'p', { class: 'dc-hint', text: 'Check the guessed meaning of each column and correct it where needed.' }),
       element(doc, 'div', { class: 'dc-scroll' }, [mappingTable]),
       labelledControl(doc, 'Resistivity unit (all ρ columns)', rhoUnit),
@@ -171,8 +171,8 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   }
 
   function reportFailure(error: unknown): void {
-    const message = error instanceof Error ? error.message : String(error);
-    context.announce(error instanceof PaneRefusal || error instanceof Error ? message : `Unexpected problem: ${message}`, 'error');
+    // A PaneRefusal (and any other Error) says what went wrong in its message; anything else thrown is unexpected.
+    context.announce(error instanceof Error ? error.message : `Unexpected problem: ${String(error)}`, 'error');
   }
 
   readButton.addEventListener('click', () => {

@@ -6,7 +6,8 @@
  */
 import { qualifiedName } from '../../catalog/naming';
 import type { FunctionSpec, ParameterSpec } from '../../catalog/types';
-import { MODEL_REGISTRY, type ModelInfo } from '../../physics/models';
+import { PhysicsDomainError } from '../../physics/errors';
+import { modelInfo, type ModelInfo } from '../../physics/models';
 
 /** One parameter as the reference lists it. */
 export interface ParameterDetail {
@@ -38,6 +39,20 @@ export interface FunctionDetails {
   readonly examples: FunctionSpec['examples'];
   /** Help text as paragraphs. */
   readonly help: readonly string[];
+}
+
+/**
+ * A model code's registry entry (the registry's own look-up, case-insensitive), or null when it has none.
+ *
+ * @example citedModel('masetti')?.citation
+ */
+export function citedModel(code: string): ModelInfo | null {
+  try {
+    return modelInfo(code);
+  } catch (error) {
+    if (error instanceof PhysicsDomainError) return null;
+    throw error;
+  }
 }
 
 /**
@@ -81,7 +96,7 @@ export function describeFunction(spec: FunctionSpec): FunctionDetails {
     })),
     result: spec.result,
     columns: spec.kind === 'tuple' ? spec.columns : [],
-    models: spec.models.map((code) => ({ code, info: MODEL_REGISTRY.find((entry) => entry.code.toLowerCase() === code.toLowerCase()) ?? null })),
+    models: spec.models.map((code) => ({ code, info: citedModel(code) })),
     examples: spec.examples,
     help: spec.help.split(/\n\s*\n/).map((paragraph) => paragraph.trim()).filter((paragraph) => paragraph !== ''),
   };

@@ -5,10 +5,11 @@
  * are prefilled from the entry's first example made of plain values; the
  * rest stay blank (an optional argument left blank takes its default).
  */
+import { readCall } from '../../catalog/literalCall';
 import { qualifiedName } from '../../catalog/naming';
 import type { FunctionSpec, ParameterSpec } from '../../catalog/types';
-import { blockAddress, cellName, type CellBlock, type CellInput, type WorkbookPort } from '../port';
-import { applySheetPlan, sheetAddress, type SheetPlan } from '../certificate/sheetPlan';
+import { blockAddress, cellName, sheetAddress, type CellBlock, type CellInput, type WorkbookPort } from '../port';
+import { applySheetPlan, type SheetPlan } from '../sheetPlan';
 import { callText } from './callText';
 
 /** One argument of an example: a plain value, a row of values (inline array), or something else (a reference, a call). */
@@ -18,75 +19,19 @@ export type ExampleArgument =
   | { readonly kind: 'array'; readonly values: readonly CellInput[] }
   | { readonly kind: 'other'; readonly text: string };
 
-/** Splits text at top-level commas, outside quotes, parentheses and braces. */
-function splitTopLevel(text: string, separator: RegExp): string[] {
-  const parts: string[] = [];
-  let depth = 0;
-  let quoted = false;
-  let start = 0;
-  for (let i = 0; i < text.length; i += 1) {
-    const character = text[i];
-    if (character === '"') quoted = !quoted;
-    else if (!quoted && (character === '(' || character === '{')) depth += 1;
-    else if (!quoted && (character === ')' || character === '}')) depth -= 1;
-    else if (!quoted && depth === 0 && separator.test(character)) {
-      parts.push(text.slice(start, i));
-      start = i + 1;
-    }
-  }
-  parts.push(text.slice(start));
-  return parts;
-}
-
-/** True when brackets outside quotes never close more than they opened: the call's own ')' is the last character. */
-function balanced(text: string): boolean {
-  let depth = 0;
-  let quoted = false;
-  for (const character of text) {
-    if (character === '"') quoted = !quoted;
-    else if (!quoted && (character === '(' || character === '{')) depth += 1;
-    else if (!quoted && (character === ')' || character === '}')) depth -= 1;
-    if (depth < 0) return false;
-  }
-  return depth === 0 && !quoted;
-}
-
-const NUMBER = /^[-+]?(\d+(\.\d*)?|\.\d+)(e[-+]?\d+)?$/i;
-
-function plainValue(text: string): CellInput | undefined {
-  const trimmed = text.trim();
-  if (NUMBER.test(trimmed)) return Number(trimmed);
-  if (/^"([^"]|"")*"$/.test(trimmed)) return trimmed.slice(1, -1).replace(/""/g, '"');
-  if (/^(true|false)$/i.test(trimmed)) return trimmed.toLowerCase() === 'true';
-  return undefined;
-}
-
 /**
  * The arguments of an example formula `=DRIFT.NAME(a, b, …)`.
  *
  * @param formula - as in the catalog, e.g. '=DRIFT.DOPING(10,"B")'
  * @param spec - the entry the example belongs to
- * @returns one entry per written argument, or null when the formula is not a plain call of that entry
+ * @returns one entry per written argument (an inline array's rows joined into one row), or null when the
+ *   formula is not a plain call of that entry
  * @example exampleArguments('=DRIFT.DOPING(10,"B")', DOPING) // [{ kind: 'value', value: 10 }, { kind: 'value', value: 'B' }]
  */
 export function exampleArguments(formula: string, spec: FunctionSpec): ExampleArgument[] | null {
-  const prefix = `=${qualifiedName(spec)}(`;
-  const text = formula.trim();
-  if (!text.toUpperCase().startsWith(prefix.toUpperCase()) || !text.endsWith(')')) return null;
-  const inner = text.slice(prefix.length, -1);
-  if (!balanced(inner)) return null;
-  if (inner.trim() === '') return [];
-  return splitTopLevel(inner, /,/).map((argument): ExampleArgument => {
-    const trimmed = argument.trim();
-    if (trimmed === '') return { kind: 'blank' };
-    const value = plainValue(trimmed);
-    if (value !== undefined) return { kind: 'value', value };
-    if (trimmed.startsWith('{') && trimmed.endsWith('}')) {
-      const values = splitTopLevel(trimmed.slice(1, -1), /[,;]/).map(plainValue);
-      if (values.every((element) => element !== undefined)) return { kind: 'array', values: values as CellInput[] };
-    }
-    return { kind: 'other', text: trimmed };
-  });
+  const call = readCall(formula);
+  if (call === null || call.name.toUpperCase() !== qualifiedName(spec).toUpperCase()) return null;
+  return call.arguments.map((argument): ExampleArgument => (argument.kind === 'array' ? { kind: 'array', values: argument.rows.flat() } : argument));
 }
 
 /** What goes into one argument's value cells: one value, or a row of values for a reducing argument. */

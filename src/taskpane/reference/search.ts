@@ -7,7 +7,7 @@
  */
 import { CATALOG } from '../../catalog';
 import type { FunctionSpec } from '../../catalog/types';
-import { MODEL_REGISTRY } from '../../physics/models';
+import { citedModel } from './details';
 
 /**
  * Text folded for matching: lower case, Ω → 'ohm', µ → 'u', ρ → 'rho',
@@ -53,14 +53,27 @@ interface Fields {
   readonly help: string;
 }
 
+/** Fields by entry, built the first time an entry is searched; entries do not change while the pane runs. */
+const FIELDS = new WeakMap<FunctionSpec, Fields>();
+
 function fieldsOf(spec: FunctionSpec): Fields {
+  let fields = FIELDS.get(spec);
+  if (fields === undefined) {
+    fields = buildFields(spec);
+    FIELDS.set(spec, fields);
+  }
+  return fields;
+}
+
+function buildFields(spec: FunctionSpec): Fields {
   const units = [spec.result.unit, ...spec.parameters.map((parameter) => parameter.unit)].filter((unit): unit is string => unit !== null);
   return {
     name: spec.name.toLowerCase(),
     models: spec.models.map((code) => code.toLowerCase()),
     modelNames: foldSearchText(
-      MODEL_REGISTRY.filter((entry) => spec.models.some((code) => code.toLowerCase() === entry.code.toLowerCase()))
-        .map((entry) => entry.name)
+      spec.models
+        .map((code) => citedModel(code)?.name)
+        .filter((name): name is string => name !== undefined)
         .join(' '),
     ),
     parameters: spec.parameters.map((parameter) => parameter.name.toLowerCase()),
@@ -102,11 +115,11 @@ export interface SearchHit {
  */
 export function searchCatalog(query: string, catalog: readonly FunctionSpec[] = CATALOG): SearchHit[] {
   const folded = foldSearchText(query.replace(/\bdrift\./gi, ''));
-  const hits = catalog.map((spec, order) => ({ spec, order, fields: fieldsOf(spec) }));
-  if (folded === '') return hits.map(({ spec }) => ({ spec, score: 0 }));
+  if (folded === '') return catalog.map((spec) => ({ spec, score: 0 }));
   const words = folded.split(' ');
-  return hits
-    .flatMap(({ spec, order, fields }) => {
+  return catalog
+    .flatMap((spec, order) => {
+      const fields = fieldsOf(spec);
       const scores = words.map((word) => wordScore(word, fields));
       if (scores.some((score) => score === 0)) return [];
       // A phrase that is a whole unit ("ohm cm") ranks that unit's functions above loose matches.

@@ -4,10 +4,11 @@
  * option), the chosen entry's details, and "Insert at the active cell".
  * Search, details and insertion live in search.ts, details.ts and insert.ts.
  */
+import { CATALOG } from '../../catalog';
 import type { FunctionSpec } from '../../catalog/types';
 import { qualifiedName } from '../../catalog/naming';
 import type { ToolContext } from '../tool';
-import { element } from '../certificate/dom';
+import { element } from '../dom';
 import { describeFunction } from './details';
 import { insertFunction } from './insert';
 import { searchCatalog } from './search';
@@ -163,7 +164,7 @@ export function mountFunctionReference(panel: HTMLElement, context: ToolContext)
         return option;
       }),
     );
-    count.textContent = search.value.trim() === '' ? `${shown.length} functions` : `${shown.length} of ${searchCatalog('').length} functions match`;
+    count.textContent = search.value.trim() === '' ? `${shown.length} functions` : `${shown.length} of ${CATALOG.length} functions match`;
     select(shown.includes(selected as FunctionSpec) ? selected : shown[0] ?? null, false);
   }
 

@@ -3,6 +3,7 @@
  * twice: as formula text referencing the axis cells, and as catalog input
  * for the live preview, so the preview computes what the cells will show.
  */
+import { parseDecimalText } from '../../catalog/parameters';
 import type { ParameterSpec } from '../../catalog/types';
 import { qualifiedName } from '../../catalog/naming';
 import { DOPING_PARAMETER, TEMPERATURE_PARAMETER, type SweepQuantity } from './quantities';
@@ -30,8 +31,8 @@ function enteredArgument(spec: ParameterSpec, raw: string | undefined): SweepArg
   const text = (raw ?? '').trim();
   if (text === '') return null;
   if (spec.type === 'text') return { kind: 'text', value: text };
-  const value = Number(text);
-  if (!Number.isFinite(value)) return `${spec.name} must be a number${spec.unit ? ` in ${spec.unit}` : ''} (got "${text}").`;
+  const value = parseDecimalText(text);
+  if (value === null) return `${spec.name} must be a number${spec.unit ? ` in ${spec.unit}` : ''} (got "${text}").`;
   return { kind: 'number', value };
 }
 

@@ -4,9 +4,8 @@
  * handed to formulas in K. Bad settings give messages that say what is
  * allowed.
  */
+import { MAX_DENSITY } from '../../catalog/common';
 
-/** Highest doping the builder accepts, cm⁻³ (above any solid's atomic density; common practice, no source). */
-export const MAX_DOPING = 1e22;
 /** Most rows a doping axis may have (keeps the table and chart readable). */
 export const MAX_DOPING_POINTS = 400;
 /** Most points per decade. */
@@ -47,7 +46,8 @@ export function dopingAxisProblems(axis: DopingAxisSettings): string[] {
   if (!finite) problems.push('Doping from and to must be numbers in cm⁻³, e.g. 1e14 and 1e19.');
   else {
     if (axis.from <= 0) problems.push(`Doping "from" must be above 0 cm⁻³ (got ${axis.from}).`);
-    if (axis.to > MAX_DOPING) problems.push(`Doping "to" must be at most ${MAX_DOPING.toExponential()} cm⁻³ (got ${axis.to.toExponential()}).`);
+    // The catalog's own upper limit for dopant densities, so every grid point is a doping the functions accept.
+    if (axis.to > MAX_DENSITY) problems.push(`Doping "to" must be at most ${MAX_DENSITY.toExponential()} cm⁻³ (got ${axis.to.toExponential()}).`);
     if (axis.from >= axis.to) problems.push(`Doping "from" (${axis.from.toExponential()}) must be below "to" (${axis.to.toExponential()}).`);
   }
   if (!Number.isInteger(axis.pointsPerDecade) || axis.pointsPerDecade < 1 || axis.pointsPerDecade > MAX_POINTS_PER_DECADE) {

@@ -10,6 +10,7 @@
  */
 import type { CellBlock, CellInput, ChartPlan, StylePlan } from '../port';
 import { blockAddress, cellName } from '../port';
+import type { BlockWrite, SheetPlan } from '../sheetPlan';
 import { formulaText, type SweepCall } from './arguments';
 import type { TemperatureUnit } from './axes';
 import type { SweepQuantity } from './quantities';
@@ -35,23 +36,15 @@ export interface SweepLayoutInput {
   readonly description: string;
 }
 
-/** One write of the plan. */
-export interface CellWrite {
-  readonly block: CellBlock;
-  readonly cells: readonly (readonly CellInput[])[];
-}
-
-/** The whole insertion. */
-export interface SweepPlan {
+/** The whole insertion: the table as a sheet plan (no highlights), its footprint and the chart. */
+export interface SweepPlan extends SheetPlan {
   /** Every cell the table occupies, spill included; must be empty before writing. */
   readonly footprint: CellBlock;
-  readonly writes: readonly CellWrite[];
   /** The anchor of the spilled formula and its text. */
   readonly formulaCell: CellBlock;
   readonly formula: string;
   /** Where the results spill. */
   readonly results: CellBlock;
-  readonly styles: readonly StylePlan[];
   readonly chart: ChartPlan;
 }
 
@@ -85,7 +78,7 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
   const resultHeader = withUnit(quantity.label, quantity.unit);
   const title = `${resultHeader}: ${call.outerName}, ${input.description}`;
   const celsius = temperature !== null && temperature.unit === '°C';
-  const writes: CellWrite[] = [];
+  const writes: BlockWrite[] = [];
   const styles: StylePlan[] = [];
   let footprint: CellBlock;
   let formulaCell: CellBlock;
@@ -161,5 +154,5 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
     yLogarithmic: quantity.logValues,
     anchor: block(sheet, top, left + footprint.columnCount + 1),
   };
-  return { footprint, writes, formulaCell, formula, results, styles, chart };
+  return { footprint, writes, formulaCell, formula, results, styles, highlights: [], chart };
 }

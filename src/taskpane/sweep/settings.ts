@@ -3,6 +3,7 @@
  * checked sweep: the axes, the call, and words for the title; or the list
  * of problems, each saying what is wrong and what is allowed.
  */
+import { parseDecimalText } from '../../catalog/parameters';
 import { buildCall, numberText, settingKey, type SettingValues } from './arguments';
 import { MAX_TEMPERATURE_COLUMNS, MAX_TEMPERATURE_POINTS, dopingAxis, dopingAxisProblems, temperatureAxis, temperatureAxisProblems, toKelvin, type TemperatureUnit } from './axes';
 import type { SweepLayoutInput } from './plan';
@@ -34,9 +35,9 @@ export type ResolvedSweep =
   | { readonly ok: true; readonly input: SweepLayoutInput }
   | { readonly ok: false; readonly problems: readonly string[]; readonly invalid: readonly string[] };
 
-/** Reads a number field; '' and non-numbers give NaN. */
+/** Reads a number field in decimal notation (parseDecimalText); '', non-numbers and hex/binary/octal text ('0x10') give NaN. */
 function number(text: string): number {
-  return text.trim() === '' ? NaN : Number(text.trim());
+  return parseDecimalText(text) ?? NaN;
 }
 
 /**

@@ -5,17 +5,19 @@
  * plan.ts, preview.ts and insert.ts; this module builds elements and reads
  * them back.
  */
+import { parseDecimalText } from '../../catalog/parameters';
 import type { ParameterSpec } from '../../catalog/types';
+import { blockAddress, sheetAddress } from '../port';
+import { PaneRefusal } from '../sheetPlan';
 import type { ToolContext } from '../tool';
 import { settingKey } from './arguments';
 import { fromKelvin, toKelvin, type TemperatureUnit } from './axes';
-import { insertSweep, SweepRefusal } from './insert';
+import { insertSweep } from './insert';
 import { planSweep, withUnit } from './plan';
 import { describePreview, drawPreview } from './plot';
 import { previewSweep } from './preview';
 import { availableQuantities, settingParameters, TEMPERATURE_PARAMETER, type SweepQuantity } from './quantities';
 import { resolveSweep, type SweepForm } from './settings';
-import { blockAddress } from '../port';
 
 /** Starting values of the axis controls (a typical wafer range; common practice, no source). */
 const START = { dopingFrom: '1e14', dopingTo: '1e20', pointsPerDecade: '5', fixedDoping: '1e15', temperatureFrom: '250', temperatureTo: '400', temperatureStep: '50' };
@@ -252,14 +254,14 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
     insert.disabled = true;
     try {
       const { plan, chartError } = await insertSweep(context.port, resolved.input);
-      const where = `${plan.footprint.sheet}!${blockAddress(plan.footprint)}`;
+      const where = sheetAddress(plan.footprint);
       const axes = `${plan.chart.xLogarithmic ? 'log' : 'linear'} x, ${plan.chart.yLogarithmic ? 'log' : 'linear'} y`;
       const table = `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ${plan.results.rowCount} × ${plan.results.columnCount} values`;
       if (chartError === null) context.announce(`${table}; chart added (${axes}).`, 'success');
       else context.announce(`${table}; the chart could not be added: ${chartError}.`, 'error');
     } catch (error) {
       const message = error instanceof Error ? error.message : String(error);
-      context.announce(error instanceof SweepRefusal ? message : `Not inserted: ${message}`, 'error');
+      context.announce(error instanceof PaneRefusal ? message : `Not inserted: ${message}`, 'error');
     } finally {
       insert.disabled = false;
     }
@@ -271,8 +273,8 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
     const next = unit.select.value as TemperatureUnit;
     if (next === shownUnit) return;
     for (const input of [temperatureFrom.input, temperatureTo.input, fixedTemperature.input]) {
-      const value = Number(input.value);
-      if (input.value.trim() === '' || !Number.isFinite(value)) continue;
+      const value = parseDecimalText(input.value);
+      if (value === null) continue;
       input.value = String(next === '°C' ? fromKelvin(value, '°C') : toKelvin(value, '°C'));
     }
     shownUnit = next;

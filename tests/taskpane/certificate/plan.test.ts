@@ -9,7 +9,7 @@ import { findFunction, qualifiedName } from '../../../src/catalog';
 import { dopantCodes, SILICON } from '../../../src/physics';
 import { planCertificateCheck, type CertificateSettings } from '../../../src/taskpane/certificate/plan';
 import { addCertificateCheck, readCertificateTable } from '../../../src/taskpane/certificate/session';
-import { PaneRefusal } from '../../../src/taskpane/certificate/sheetPlan';
+import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
 import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
 import type { ResultElement } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';

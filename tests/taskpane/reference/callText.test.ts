@@ -1,7 +1,7 @@
 import { findFunction } from '../../../src/catalog';
 import { rowReferences } from '../../../src/taskpane/certificate/plan';
-import { applySheetPlan, firstFilledCell, PaneRefusal } from '../../../src/taskpane/certificate/sheetPlan';
-import { parseNumberField } from '../../../src/taskpane/certificate/dom';
+import { applySheetPlan, firstFilledCell, PaneRefusal } from '../../../src/taskpane/sheetPlan';
+import { parseNumberField } from '../../../src/taskpane/dom';
 import { callText, parameterNamed, stringLiteral } from '../../../src/taskpane/reference/callText';
 import { MemoryPort } from '../support/memoryPort';
 

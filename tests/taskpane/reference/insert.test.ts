@@ -6,7 +6,7 @@
  */
 import { CATALOG, evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../../src/catalog';
 import type { ResultElement } from '../../../src/engine/engine';
-import { PaneRefusal } from '../../../src/taskpane/certificate/sheetPlan';
+import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
 import { exampleArguments, insertFunction, planInsert, prefillValues, resultSize } from '../../../src/taskpane/reference/insert';
 import { MemoryPort, valueAt } from '../support/memoryPort';
 

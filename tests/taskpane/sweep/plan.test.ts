@@ -72,6 +72,27 @@ describe('resolveSweep', () => {
     expect(result.invalid).toEqual(['dopingFrom', 'dopingTo', 'pointsPerDecade', 'outer:thickness_um']);
   });
 
+  it('refuses hex, binary and octal text such as "0x10" instead of reading it as 16', () => {
+    const fixed = resolveSweep({ ...BASE, dopingSwept: false, temperatureSwept: true, fixedDoping: '0x10' }, quantities);
+    expect(fixed.ok).toBe(false);
+    if (!fixed.ok) {
+      expect(fixed.problems).toEqual(['Fixed doping must be a number above 0 in cm⁻³, e.g. 1e15 (got "0x10").']);
+      expect(fixed.invalid).toEqual(['fixedDoping']);
+    }
+    const axis = resolveSweep({ ...BASE, dopingFrom: '0x10' }, quantities);
+    expect(axis.ok).toBe(false);
+    if (!axis.ok) expect(axis.problems).toEqual(['Doping from and to must be numbers in cm⁻³, e.g. 1e14 and 1e19.']);
+    const setting = resolveSweep({ ...BASE, quantityId: 'SHEETRES', values: { 'inner:dopant': 'B', 'outer:thickness_um': '0b11' } }, quantities);
+    expect(setting.ok).toBe(false);
+    if (!setting.ok) {
+      expect(setting.problems).toEqual(['thickness_um must be a number in µm (got "0b11").']);
+      expect(setting.invalid).toEqual(['outer:thickness_um']);
+    }
+    const temperature = resolveSweep({ ...BASE, fixedTemperature: '0o17' }, quantities);
+    expect(temperature.ok).toBe(false);
+    if (!temperature.ok) expect(temperature.problems).toEqual(['Fixed temperature must be a number above absolute zero in K (got "0o17").']);
+  });
+
   it('needs an axis', () => {
     const result = resolveSweep({ ...BASE, dopingSwept: false }, quantities);
     expect(result.ok).toBe(false);

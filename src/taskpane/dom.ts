@@ -3,6 +3,7 @@
  * Every control the tools build goes through `labelledControl`, so none is
  * left without a label.
  */
+import { parseDecimalText } from '../catalog/parameters';
 
 /** Attributes and properties for `element`: strings become attributes, `text` the text content. */
 export type ElementOptions = Readonly<Record<string, string | boolean | undefined>> & { readonly text?: string };
@@ -69,7 +70,8 @@ export function selectOf(doc: Document, id: string, options: readonly (readonly 
 }
 
 /**
- * Reads a number typed by the user ('1e15', '2.5E+16', ' 300 ').
+ * Reads a number typed by the user ('1e15', '2.5E+16', ' 300 ') in decimal notation only, as a
+ * spreadsheet does: '0x10', '1,5' or '1e400' are refused.
  *
  * @param text - field text
  * @param what - what the field is, for the message
@@ -80,8 +82,9 @@ export function selectOf(doc: Document, id: string, options: readonly (readonly 
 export function parseNumberField(text: string, what: string): number | null {
   const trimmed = text.trim();
   if (trimmed === '') return null;
-  if (!/^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(trimmed)) {
+  const value = parseDecimalText(trimmed);
+  if (value === null) {
     throw new Error(`${what}: '${trimmed}' is not a number; type digits with a point for decimals, e.g. 1e15 or 2.5E+16.`);
   }
-  return Number(trimmed);
+  return value;
 }
