@@ -4,6 +4,14 @@
  * broadcasting and validation) and maps the result grid back, failures as
  * CustomFunctions.Error values in place.
  *
+ * Binding and errors come from the runtime at different times. Office.js
+ * defines `CustomFunctions.associate` as soon as office.js has run, which is
+ * before functions.js runs; `CustomFunctions.Error` and `ErrorCode` arrive
+ * later, with the custom-functions runtime script Office.js loads for the host
+ * (custom-functions-runtime.js, or the host's excel-*.js file). So binding
+ * needs only `associate`, and the error constructor is looked up when a
+ * function runs, by which time the runtime that calls it has defined it.
+ *
  * The runtime is passed in rather than read from a global so that this module
  * loads and is testable anywhere; src/excel/functions.ts hands it the real one.
  */
@@ -13,14 +21,21 @@ import { failure, isFailure, type CellFailure, type CellOutput, type Grid } from
 import { toArgumentInputs } from './arguments';
 import { toExcelErrorSpec, type ExcelErrorCodeName } from './errors';
 
-/** The part of the CustomFunctions namespace Driftcell uses. */
-export interface CustomFunctionsRuntime {
+/** What binding needs: the part of CustomFunctions that office.js itself defines. */
+export interface CustomFunctionsBinder {
   associate(id: string, functionObject: (...args: unknown[]) => unknown): void;
+}
+
+/** What returning an error needs: the part the custom-functions runtime script defines. */
+export interface CustomFunctionsErrors {
   /** CustomFunctions.Error; `never` lets the runtime's own ErrorCode-typed constructor fit. */
   readonly Error: new (code: never, message?: string) => object;
   /** CustomFunctions.ErrorCode; its member values equal the cells' error texts. */
   readonly ErrorCode?: Partial<Record<ExcelErrorCodeName, string>>;
 }
+
+/** Finds the error constructor at call time; undefined if the runtime has not defined it. */
+export type ErrorsLookup = () => CustomFunctionsErrors | undefined;
 
 /** One element of a returned matrix: a number, text (DRIFT.MODELS), or a runtime Error instance. */
 export type ExcelResultElement = number | string | object;
@@ -28,30 +43,44 @@ export type ExcelResultElement = number | string | object;
 /**
  * Makes a CustomFunctions.Error for a catalog failure.
  *
- * @param runtime - the custom-functions runtime
+ * @param errors - the runtime's Error constructor and ErrorCode enum
  * @param cellFailure - the catalog failure
- * @returns an instance of runtime.Error with the mapped code (and message where Excel shows one)
+ * @returns an instance of errors.Error with the mapped code (and message where Excel shows one)
  */
-export function toExcelError(runtime: CustomFunctionsRuntime, cellFailure: CellFailure): object {
+export function toExcelError(errors: CustomFunctionsErrors, cellFailure: CellFailure): object {
   const spec = toExcelErrorSpec(cellFailure);
   // ErrorCode's values are the cell texts; the literal is the fallback where the enum is absent.
-  const code = (runtime.ErrorCode?.[spec.excelName] ?? spec.cellText) as never;
-  return spec.message === undefined ? new runtime.Error(code) : new runtime.Error(code, spec.message);
+  const code = (errors.ErrorCode?.[spec.excelName] ?? spec.cellText) as never;
+  return spec.message === undefined ? new errors.Error(code) : new errors.Error(code, spec.message);
 }
 
-/** Maps a catalog result grid to the matrix Excel receives. */
-export function toExcelMatrix(runtime: CustomFunctionsRuntime, grid: Grid<CellOutput>): ExcelResultElement[][] {
-  return grid.map((row) => row.map((value) => (isFailure(value) ? toExcelError(runtime, value) : value)));
+/**
+ * Maps a catalog result grid to the matrix Excel receives.
+ *
+ * @throws Error when the grid holds a failure and the runtime has no Error
+ *   constructor: the runtime turns a thrown error into #VALUE! for the whole
+ *   cell, which is the honest result when no per-element error can be built.
+ */
+export function toExcelMatrix(lookup: ErrorsLookup, grid: Grid<CellOutput>): ExcelResultElement[][] {
+  let errors: CustomFunctionsErrors | undefined;
+  return grid.map((row) =>
+    row.map((value) => {
+      if (!isFailure(value)) return value;
+      errors ??= lookup();
+      if (errors === undefined) throw new Error(`${value.code} ${value.message} (CustomFunctions.Error is not available)`);
+      return toExcelError(errors, value);
+    }),
+  );
 }
 
 /**
  * The function Excel calls for one catalog entry.
  *
- * @param runtime - the custom-functions runtime
+ * @param lookup - finds the runtime's Error constructor when a result needs one
  * @param spec - the catalog function
  * @returns a function taking Excel's arguments (invocation object last) and returning a matrix
  */
-export function makeExcelFunction(runtime: CustomFunctionsRuntime, spec: FunctionSpec): (...args: unknown[]) => ExcelResultElement[][] {
+export function makeExcelFunction(lookup: ErrorsLookup, spec: FunctionSpec): (...args: unknown[]) => ExcelResultElement[][] {
   return (...rawArgs: unknown[]) => {
     let grid: Grid<CellOutput>;
     try {
@@ -61,22 +90,24 @@ export function makeExcelFunction(runtime: CustomFunctionsRuntime, spec: Functio
       const detail = e instanceof Error ? e.message : String(e);
       grid = [[failure('#VALUE!', `internal error in ${NAMESPACE}.${spec.name}: ${detail}`)]];
     }
-    return toExcelMatrix(runtime, grid);
+    return toExcelMatrix(lookup, grid);
   };
 }
 
 /**
  * Associates every catalog function with its metadata id (the function name).
+ * Needs nothing but `associate`.
  *
- * @param runtime - the custom-functions runtime
+ * @param binder - CustomFunctions as office.js defines it
  * @param catalog - the functions to bind
+ * @param lookup - finds CustomFunctions.Error when a function runs
  * @returns the ids bound, in catalog order
  */
-export function registerCatalog(runtime: CustomFunctionsRuntime, catalog: readonly FunctionSpec[]): string[] {
+export function registerCatalog(binder: CustomFunctionsBinder, catalog: readonly FunctionSpec[], lookup: ErrorsLookup): string[] {
   return catalog.map((spec) => {
     // The metadata id is the function name (see metadata.ts); tests hold the two together.
     const id = spec.name;
-    runtime.associate(id, makeExcelFunction(runtime, spec));
+    binder.associate(id, makeExcelFunction(lookup, spec));
     return id;
   });
 }

@@ -42,6 +42,21 @@ describe('functions.ts entry', () => {
     expect(readStatus()?.boundIds).toEqual([]);
   });
 
+  it('binds with only associate present, as office.js leaves CustomFunctions before the runtime script loads', () => {
+    const associate = jest.fn();
+    globals.CustomFunctions = { associate };
+    const entry = loadEntry();
+    expect(entry.registeredIds).toEqual(CATALOG.map((s) => s.name));
+    expect(entry.currentErrors()).toBeUndefined();
+    // The runtime script adds Error later; the bound functions find it then.
+    class LateError {
+      constructor(readonly code: string, readonly message?: string) {}
+    }
+    (globals.CustomFunctions as Record<string, unknown>).Error = LateError;
+    const mobility = associate.mock.calls.find((c) => c[0] === 'MOBILITY')?.[1] as (...a: unknown[]) => unknown[][];
+    expect(mobility([[-5]], [['P']], null, null, null, null, null, {})[0][0]).toBeInstanceOf(LateError);
+  });
+
   it('ignores a CustomFunctions object that is not a runtime', () => {
     globals.CustomFunctions = { associate: 'no' };
     expect(loadEntry().registeredIds).toEqual([]);

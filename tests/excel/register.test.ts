@@ -6,7 +6,7 @@
 import { CATALOG, evaluate, findFunction } from '../../src/catalog';
 import { tableFunction } from '../../src/catalog/types';
 import { isFailure, type CellOutput } from '../../src/catalog/values';
-import { makeExcelFunction, registerCatalog, toExcelError, type CustomFunctionsRuntime } from '../../src/excel/register';
+import { makeExcelFunction, registerCatalog, toExcelError, type CustomFunctionsErrors } from '../../src/excel/register';
 
 class FakeError {
   constructor(
@@ -15,12 +15,9 @@ class FakeError {
   ) {}
 }
 
-function fakeRuntime(withEnum = true): CustomFunctionsRuntime & { bound: Map<string, (...a: unknown[]) => unknown> } {
-  const bound = new Map<string, (...a: unknown[]) => unknown>();
+function fakeErrors(withEnum = true): CustomFunctionsErrors {
   return {
-    bound,
-    associate: (id, fn) => void bound.set(id, fn),
-    Error: FakeError as unknown as CustomFunctionsRuntime['Error'],
+    Error: FakeError as unknown as CustomFunctionsErrors['Error'],
     ErrorCode: withEnum
       ? { invalidValue: '#VALUE!', notAvailable: '#N/A', divisionByZero: '#DIV/0!', invalidNumber: '#NUM!', nullReference: '#NULL!', invalidName: '#NAME?', invalidReference: '#REF!' }
       : undefined,
@@ -42,7 +39,8 @@ function expectedFrom(grid: CellOutput[][]): unknown[][] {
 }
 
 describe('makeExcelFunction', () => {
-  const runtime = fakeRuntime();
+  const errors = fakeErrors();
+  const runtime = () => errors;
 
   it('returns a 1×1 matrix for single values, equal to evaluate()', () => {
     const fn = makeExcelFunction(runtime, spec('RESISTIVITY'));
@@ -101,16 +99,31 @@ describe('makeExcelFunction', () => {
   });
 
   it('uses the cell texts as codes where the runtime has no ErrorCode enum', () => {
-    expect(toExcelError(fakeRuntime(false), { kind: 'failure', code: '#NUM!', message: 'm' })).toEqual(new FakeError('#NUM!'));
+    expect(toExcelError(fakeErrors(false), { kind: 'failure', code: '#NUM!', message: 'm' })).toEqual(new FakeError('#NUM!'));
   });
 });
 
 describe('registerCatalog', () => {
-  it('associates every catalog function under its name', () => {
-    const runtime = fakeRuntime();
-    const ids = registerCatalog(runtime, CATALOG);
+  it('associates every catalog function under its name, needing only associate', () => {
+    const bound = new Map<string, (...a: unknown[]) => unknown>();
+    const ids = registerCatalog({ associate: (id, fn) => void bound.set(id, fn) }, CATALOG, () => undefined);
     expect(ids).toEqual(CATALOG.map((s) => s.name));
-    expect([...runtime.bound.keys()]).toEqual(ids);
-    for (const fn of runtime.bound.values()) expect(typeof fn).toBe('function');
+    expect([...bound.keys()]).toEqual(ids);
+    for (const fn of bound.values()) expect(typeof fn).toBe('function');
+  });
+
+  it('looks the Error constructor up when a function runs, not when it is bound', () => {
+    let errors: CustomFunctionsErrors | undefined;
+    const bound = new Map<string, (...a: unknown[]) => unknown>();
+    registerCatalog({ associate: (id, fn) => void bound.set(id, fn) }, CATALOG, () => errors);
+    errors = fakeErrors();
+    const [[cell]] = (bound.get('MOBILITY') as (...a: unknown[]) => unknown[][])([[-5]], [['P']], null, null, null, null, null, {});
+    expect(cell).toBeInstanceOf(FakeError);
+  });
+
+  it('throws (Excel shows #VALUE!) when a result holds an error and no Error constructor exists', () => {
+    const fn = makeExcelFunction(() => undefined, spec('MOBILITY'));
+    expect(fn([[1e16]], [['P']], null, null, null, null, null, {})[0][0]).toEqual(expect.any(Number));
+    expect(() => fn([[-5]], [['P']], null, null, null, null, null, {})).toThrow(/CustomFunctions\.Error is not available/);
   });
 });

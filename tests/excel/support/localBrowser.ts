@@ -4,7 +4,7 @@
  * lets through only the test's own localhost server and records (and blocks)
  * everything else. Never downloads a browser.
  */
-import { existsSync, mkdtempSync, rmSync } from 'fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'fs';
 import os from 'os';
 import path from 'path';
 import { chromium, type BrowserContext } from 'playwright-core';
@@ -19,22 +19,54 @@ export interface LocalBrowser {
   readonly requested: string[];
   /** URLs refused because they were not for the server. */
   readonly blocked: string[];
+  /** Outside URLs answered from a local copy (see LocalCopy); never sent. */
+  readonly servedLocally: string[];
   /** Empties both lists. */
   clear(): void;
   close(): Promise<void>;
 }
 
-/** Launches Chromium allowing requests to `serverUrl` only. */
-export async function launchLocalBrowser(serverUrl: string): Promise<LocalBrowser> {
+/**
+ * Outside files the test answers from a folder on this machine instead of the
+ * network: a request whose URL starts with `urlPrefix` gets the file of the
+ * same relative path under `folder` (Office.js from its npm package, for
+ * example). A path that is not in the folder is blocked like any other.
+ */
+export interface LocalCopy {
+  readonly urlPrefix: string;
+  readonly folder: string;
+}
+
+const CONTENT_TYPES: Readonly<Record<string, string>> = { '.js': 'text/javascript; charset=utf-8', '.json': 'application/json; charset=utf-8', '.html': 'text/html; charset=utf-8' };
+
+function localFile(url: string, copies: readonly LocalCopy[]): string | undefined {
+  for (const copy of copies) {
+    if (!url.startsWith(copy.urlPrefix)) continue;
+    const relative = decodeURIComponent(new URL(url).pathname.slice(new URL(copy.urlPrefix).pathname.length));
+    const file = path.resolve(copy.folder, relative);
+    if (!file.startsWith(path.resolve(copy.folder) + path.sep)) return undefined;
+    return existsSync(file) && statSync(file).isFile() ? file : undefined;
+  }
+  return undefined;
+}
+
+/** Launches Chromium allowing requests to `serverUrl` only (and answering `localCopies` from disk). */
+export async function launchLocalBrowser(serverUrl: string, localCopies: readonly LocalCopy[] = []): Promise<LocalBrowser> {
   if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium (sudo apt-get install chromium); this test never downloads a browser`);
   const profile = mkdtempSync(path.join(os.tmpdir(), 'driftcell-chromium-'));
   const context = await chromium.launchPersistentContext(profile, { executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS });
   const requested: string[] = [];
   const blocked: string[] = [];
+  const servedLocally: string[] = [];
   context.on('request', (request) => requested.push(request.url()));
   await context.route('**/*', (route) => {
     const url = route.request().url();
     if (url.startsWith(`${serverUrl}/`)) return route.continue();
+    const file = localFile(url, localCopies);
+    if (file !== undefined) {
+      servedLocally.push(url);
+      return route.fulfill({ status: 200, contentType: CONTENT_TYPES[path.extname(file)] ?? 'application/octet-stream', body: readFileSync(file) });
+    }
     blocked.push(url);
     return route.abort();
   });
@@ -42,9 +74,11 @@ export async function launchLocalBrowser(serverUrl: string): Promise<LocalBrowse
     context,
     requested,
     blocked,
+    servedLocally,
     clear() {
       requested.length = 0;
       blocked.length = 0;
+      servedLocally.length = 0;
     },
     async close() {
       await context.close();
