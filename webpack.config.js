@@ -2,8 +2,10 @@
  * Builds the Excel add-in into dist/addin:
  * - functions.js (src/excel/functions.ts) and taskpane.js (src/taskpane/index.ts);
  * - taskpane.html, the shared-runtime page that loads Office.js, then both bundles;
- * - functions.json and help/*.html, generated from the catalog as compiled by
- *   tsc into dist/node (package.json "build" runs tsc before webpack);
+ * - functions.json, help/*.html and manifest.xml, generated from the catalog
+ *   and manifest/manifest.xml as compiled by tsc into dist/node (package.json
+ *   "build" runs tsc before webpack), for the base URL the add-in is served
+ *   from (src/excel/deployment.ts: DRIFTCELL_ADDIN_URL or --env addinUrl=…);
  * - the icons and the task pane stylesheets (taskpane.css, tools.css).
  *
  * The pane's test harness (engine-backed, HyperFormula inside) has its own
@@ -26,6 +28,7 @@ const COMPILED_MODULES = {
   metadata: path.join(COMPILED, 'excel', 'metadata.js'),
   helpPage: path.join(COMPILED, 'catalog', 'docs', 'helpPage.js'),
   origin: path.join(COMPILED, 'excel', 'origin.js'),
+  deployment: path.join(COMPILED, 'excel', 'deployment.js'),
 };
 
 function requireCompiled() {
@@ -43,16 +46,23 @@ function requireCompiled() {
     metadata: require(COMPILED_MODULES.metadata),
     helpPage: require(COMPILED_MODULES.helpPage),
     origin: require(COMPILED_MODULES.origin),
+    deployment: require(COMPILED_MODULES.deployment),
   };
 }
 
-/** Emits functions.json and the help pages from the compiled catalog. */
+/** Emits functions.json, the help pages and manifest.xml for the add-in's base URL. */
 class CatalogFilesPlugin {
+  constructor(baseUrl) {
+    this.baseUrl = baseUrl;
+  }
+
   apply(compiler) {
     compiler.hooks.thisCompilation.tap('CatalogFilesPlugin', (compilation) => {
       compilation.hooks.processAssets.tap({ name: 'CatalogFilesPlugin', stage: Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL }, () => {
-        const { catalog, metadata, helpPage, origin } = requireCompiled();
-        const functionsJson = metadata.buildFunctionsMetadata(catalog.CATALOG, origin.ADDIN_ORIGIN);
+        const { catalog, metadata, helpPage, deployment } = requireCompiled();
+        const functionsJson = metadata.buildFunctionsMetadata(catalog.CATALOG, this.baseUrl);
+        const manifest = deployment.deployedManifest(fs.readFileSync(path.join(ROOT, 'manifest', 'manifest.xml'), 'utf8'), this.baseUrl);
+        compilation.emitAsset('manifest.xml', new sources.RawSource(manifest));
         compilation.emitAsset('functions.json', new sources.RawSource(`${JSON.stringify(functionsJson, null, 2)}\n`));
         for (const [file, html] of helpPage.renderHelpSite(catalog.CATALOG)) {
           compilation.emitAsset(`help/${file}`, new sources.RawSource(html));
@@ -65,13 +75,17 @@ class CatalogFilesPlugin {
 module.exports = (env, argv) => {
   const production = argv.mode !== 'development';
   // Fail at once, with the message above, rather than after bundling.
-  requireCompiled();
+  const { deployment } = requireCompiled();
+  // Where dist/addin will be served: --env addinUrl=… or DRIFTCELL_ADDIN_URL, else https://localhost:3000.
+  const baseUrl = deployment.addinBaseUrl((env && env[deployment.ADDIN_URL_ENV_KEY]) || process.env[deployment.ADDIN_URL_VARIABLE]);
   return {
     mode: production ? 'production' : 'development',
     context: ROOT,
     entry: {
+      // functions.js stays complete on its own (the manifest's Script); the pane reuses its modules
+      // (catalog, physics) instead of carrying a second copy with second caches into the shared runtime.
       functions: './src/excel/functions.ts',
-      taskpane: './src/taskpane/index.ts',
+      taskpane: { import: './src/taskpane/index.ts', dependOn: 'functions' },
     },
     output: {
       path: OUTPUT,
@@ -82,7 +96,9 @@ module.exports = (env, argv) => {
       compareBeforeEmit: false,
     },
     target: ['web', 'es2017'],
-    devtool: 'source-map',
+    // No source maps in the production add-in: it is what users' Excel loads, and maps would publish
+    // the whole source tree next to it. Development builds keep them for debugging.
+    devtool: production ? false : 'source-map',
     resolve: { extensions: ['.ts', '.js'] },
     module: {
       rules: [
@@ -95,7 +111,7 @@ module.exports = (env, argv) => {
             // tsc type-checks the whole project before webpack runs.
             transpileOnly: true,
             // ES2017 for older Office web views; ES modules so webpack can drop unused code.
-            compilerOptions: { target: 'ES2017', module: 'ES2020', sourceMap: true },
+            compilerOptions: { target: 'ES2017', module: 'ES2020', sourceMap: !production },
           },
         },
       ],
@@ -122,7 +138,7 @@ module.exports = (env, argv) => {
           { from: 'src/taskpane/tools.css', to: 'tools.css' },
         ],
       }),
-      new CatalogFilesPlugin(),
+      new CatalogFilesPlugin(baseUrl),
     ],
   };
 };

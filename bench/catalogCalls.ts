@@ -47,15 +47,15 @@ const CASES: readonly CallCase[] = [
     closedForm: (t, out) => { for (let i = 0; i < t.length; i++) out[i] = gapAtZero - (alpha * t[i] * t[i]) / (t[i] + beta); },
   },
   {
-    name: 'NC', varying: 0, value: temperatures, fixed: [null],
+    name: 'CONDUCTIONDOS', varying: 0, value: temperatures, fixed: [null],
     closedForm: (t, out) => { for (let i = 0; i < t.length; i++) out[i] = conduction.valueAtReference * Math.pow(t[i] / conduction.referenceTemperature, conduction.exponent); },
   },
   {
-    name: 'NV', varying: 0, value: temperatures, fixed: [null],
+    name: 'VALENCEDOS', varying: 0, value: temperatures, fixed: [null],
     closedForm: (t, out) => { for (let i = 0; i < t.length; i++) out[i] = valence.valueAtReference * Math.pow(t[i] / valence.referenceTemperature, valence.exponent); },
   },
   {
-    name: 'NI', varying: 0, value: temperatures, fixed: [null],
+    name: 'INTRINSIC', varying: 0, value: temperatures, fixed: [null],
     closedForm: (t, out) => {
       for (let i = 0; i < t.length; i++) out[i] = niFit.prefactor * Math.pow(t[i] / niFit.referenceTemperature, niFit.exponent) * Math.exp(-niFit.activationTemperature / t[i]);
     },

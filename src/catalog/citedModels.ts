@@ -43,10 +43,10 @@ function unique(codes: readonly string[]): string[] {
 /** Band gap of every material (DRIFT.BANDGAP). */
 export const BANDGAP_MODELS = MATERIALS.map((host) => host.bandgap.code);
 
-/** Effective densities of states of every material (DRIFT.NC, DRIFT.NV). */
+/** Effective densities of states of every material (DRIFT.CONDUCTIONDOS, DRIFT.VALENCEDOS). */
 export const DENSITY_OF_STATES_MODELS = MATERIALS.map((host) => host.densityOfStates.code);
 
-/** ni models (silicon's choices first), then what the other materials' ni is built from (DRIFT.NI). */
+/** ni models (silicon's choices first), then what the other materials' ni is built from (DRIFT.INTRINSIC). */
 export const INTRINSIC_MODELS = unique([
   ...allCodes(intrinsicModelCodes),
   ...MATERIALS.filter((host) => host !== SILICON).flatMap((host) => [host.bandgap.code, host.densityOfStates.code]),
@@ -69,7 +69,7 @@ export const DEFAULT_MOBILITY_MODELS = unique(MATERIALS.map((host) => mobilityMo
 
 /** Sources of the tabulated saturation velocities (DRIFT.VSAT). */
 export const SATURATION_VELOCITY_MODELS = unique(
-  HIGH_FIELD_TABLES.flatMap((table) => [table.electron, table.hole]).flatMap((entry) => ('modelCode' in entry ? [entry.modelCode] : [])),
+  HIGH_FIELD_TABLES.flatMap((table) => [table.electron, table.hole]).flatMap((entry) => ('modelCode' in entry ? [entry.modelCode, ...(entry.fieldExponentModelCode ? [entry.fieldExponentModelCode] : [])] : [])),
 );
 
 /** The velocity–field law with its tables and the low-field mobility it starts from (DRIFT.VELOCITY, DRIFT.CURRENTDENSITY). */

@@ -18,10 +18,10 @@ import { MAJORITY } from './functions/majority';
 import { MINORITY } from './functions/minority';
 import { MOBILITY } from './functions/mobility';
 import { MODELS } from './functions/models';
-import { NC } from './functions/nc';
-import { NI } from './functions/ni';
+import { CONDUCTIONDOS } from './functions/conductiondos';
+import { INTRINSIC } from './functions/intrinsic';
 import { NIEFF } from './functions/nieff';
-import { NV } from './functions/nv';
+import { VALENCEDOS } from './functions/valencedos';
 import { RESISTIVITY } from './functions/resistivity';
 import { RESISTOR } from './functions/resistor';
 import { SHEETRES } from './functions/sheetres';
@@ -34,16 +34,16 @@ import { VANDERPAUW } from './functions/vanderpauw';
 import { HALLDENSITY } from './functions/halldensity';
 import { HALLMOBILITY } from './functions/hallmobility';
 import { RESISTORLENGTH } from './functions/resistorlength';
-import { RESISTORATTEMP } from './functions/resistorattemp';
+import { RESISTORTEMP } from './functions/resistortemp';
 import { DOPINGRANGE } from './functions/dopingrange';
 import { RADIALVARIATION } from './functions/radialvariation';
 import type { FunctionSpec } from './types';
 
 export const CATALOG: readonly FunctionSpec[] = [
   BANDGAP,
-  NC,
-  NV,
-  NI,
+  CONDUCTIONDOS,
+  VALENCEDOS,
+  INTRINSIC,
   NIEFF,
   ELECTRONS,
   HOLES,
@@ -71,7 +71,7 @@ export const CATALOG: readonly FunctionSpec[] = [
   HALLDENSITY,
   HALLMOBILITY,
   RESISTORLENGTH,
-  RESISTORATTEMP,
+  RESISTORTEMP,
   DOPINGRANGE,
   RADIALVARIATION,
   MODELS,

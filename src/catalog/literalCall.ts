@@ -1,6 +1,6 @@
 /**
  * Reads a formula that is one function call, such as the catalog examples
- * `=DRIFT.NI(300,,"sproul-green")` or `=DRIFT.MINORITY(1e15,"B",{300,400,500})`,
+ * `=DRIFT.INTRINSIC(300,,"sproul-green")` or `=DRIFT.MINORITY(1e15,"B",{300,400,500})`,
  * into its arguments: literals (number, text, TRUE/FALSE), array constants,
  * arguments left out, and anything else (a reference, a nested call) kept as
  * its text. No worksheet is needed; the task pane's function reference and
@@ -120,7 +120,7 @@ export function readCall(formula: string): CallParts | null {
 
 /** A DRIFT call whose arguments are all literals. */
 export interface LiteralCall {
-  /** The catalog name, without the namespace: 'NI' for `=DRIFT.NI(…)`. */
+  /** The catalog name, without the namespace: 'INTRINSIC' for `=DRIFT.INTRINSIC(…)`. */
   readonly name: string;
   /** Arguments in catalog form: a value, a grid, or undefined when left out. */
   readonly args: ArgumentInput[];
@@ -130,7 +130,7 @@ export interface LiteralCall {
  * Reads a literal-only DRIFT call. Formulas with cell references or nested
  * calls give null: they need a worksheet.
  *
- * @param formula - e.g. '=DRIFT.NI(300,,"sproul-green")'
+ * @param formula - e.g. '=DRIFT.INTRINSIC(300,,"sproul-green")'
  * @returns name and arguments in catalog form, or null
  * @example parseLiteralCall('=DRIFT.MINORITY(1e15,"B",{300,400})') // { name: 'MINORITY', args: [1e15, 'B', [[300, 400]]] }
  */

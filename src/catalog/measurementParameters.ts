@@ -3,7 +3,7 @@
  * van der Pauw, Hall, wafer certificates): optional lengths whose blank means
  * "not given" rather than a default, and a reducing list of numbers.
  */
-import { requiredNumber, type NumberRule } from './parameters';
+import { excludesZero, requiredNumber, type NumberRule } from './parameters';
 import type { ParameterSpec } from './types';
 import { InputError, type CellInput } from './values';
 
@@ -22,6 +22,7 @@ export function optionalLength(name: string, description: string): ParameterSpec
     unit: 'µm',
     description,
     optional: true,
+    zeroIsBlank: true,
     parse: (value) => (isBlank(value) ? undefined : present.parse(value)),
   };
 }
@@ -44,7 +45,7 @@ export function numberList(options: ListOptions): ParameterSpec<readonly number[
     if (values.length === 0) throw new InputError(`${name} holds no values: give one or more numbers (blank cells are skipped)`);
     return values;
   };
-  return { name, type: 'number', unit, description, optional: false, parse: (value) => reduce([value]), reduce };
+  return { name, type: 'number', unit, description, optional: false, zeroIsBlank: excludesZero(options), parse: (value) => reduce([value]), reduce };
 }
 
 /** Probe voltage and current, shared by DRIFT.FOURPOINT and DRIFT.FOURPOINTRS. */

@@ -72,6 +72,11 @@ function rangeText(rule: NumberRule): string {
   return parts.join(' and ');
 }
 
+/** Whether a rule excludes 0, so that a 0 from Excel can only have been an empty cell. */
+export function excludesZero(rule: NumberRule): boolean {
+  return rule.min !== undefined && (rule.min > 0 || (rule.min === 0 && rule.minExclusive === true));
+}
+
 function checkRange(name: string, value: number, rule: NumberRule): number {
   const belowMin =
     rule.min !== undefined && (rule.minExclusive ? value <= rule.min : value < rule.min);
@@ -97,6 +102,7 @@ export function requiredNumber(options: NumberOptions): ParameterSpec<number> {
     unit,
     description,
     optional: false,
+    zeroIsBlank: excludesZero(options),
     parse(value) {
       const n = readNumber(name, value);
       if (n === null) throw new InputError(`${name} is required (${description.replace(/\.$/, '')})`);
@@ -115,6 +121,7 @@ export function optionalNumber(options: NumberOptions & { readonly defaultValue:
     description,
     optional: true,
     defaultText: String(defaultValue),
+    zeroIsBlank: excludesZero(options),
     parse(value) {
       const n = readNumber(name, value);
       return n === null ? defaultValue : checkRange(name, n, options);
@@ -145,6 +152,7 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
     optional,
     defaultText: defaultCode,
     choices,
+    zeroIsBlank: true,
     parse(value) {
       if (value === null || (typeof value === 'string' && value.trim() === '')) {
         if (optional) return resolve(defaultCode);
@@ -177,6 +185,7 @@ export function requiredCode(options: { readonly name: string; readonly descript
     description,
     optional: false,
     choices,
+    zeroIsBlank: true,
     parse(value) {
       if (value === null || (typeof value === 'string' && value.trim() === '')) {
         throw new InputError(`${name} is required; allowed: ${choices().join(', ')}`);

@@ -35,6 +35,12 @@ export interface ParameterSpec<T = unknown> {
    * `parse` still reads a value given on its own, as `reduce([value])` does.
    */
   readonly reduce?: (elements: readonly Exclude<CellInput, { kind: 'failure' }>[]) => T;
+  /**
+   * True where 0 can never be a valid value (temperatures, codes, readings
+   * that must be > 0). Some Excel builds pass an empty cell as 0 rather than
+   * as blank, so the Excel front end reads a 0 in such an argument as blank.
+   */
+  readonly zeroIsBlank?: boolean;
 }
 
 export type ParsedArguments<P extends readonly ParameterSpec[]> = {

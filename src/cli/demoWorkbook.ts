@@ -48,13 +48,19 @@ const WAFERS: readonly WaferRecord[] = [
   { lot: 'RB-0932', wafer: 'W09', dopant: 'B', rhoMin: 10, rhoMax: 20, rhoMeasured: 17.9 },
 ];
 
-/** Invented resistor design: a boron-diffused bar treated as uniform at an effective doping. */
+/**
+ * Invented resistor design: a shallow p+ boron diffusion (about 42 Ω/sq at
+ * 20 °C) treated as a uniform bar at an effective doping. At 1e20 cm⁻³ the
+ * resistance rises steadily with temperature, as measured for heavily doped
+ * Si (positive TCR below the intrinsic temperature); near 1e18 cm⁻³ the sign
+ * at room temperature is marginal, so that doping is not used here.
+ */
 const RESISTOR_DESIGN = {
   dopant: 'B',
-  effectiveDoping: 2e18,
+  effectiveDoping: 1e20,
   lengthUm: 450,
   widthUm: 15,
-  thicknessUm: 2.5,
+  thicknessUm: 0.3,
 } as const;
 
 /** The sweep: −40 to 150 °C in 10 °C steps (the sensor's invented rating). */

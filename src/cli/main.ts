@@ -32,7 +32,7 @@ Exit status:
 
 const CALC_HELP = `
 The leading "=" is optional. Quote the formula for your shell. A formula that
-begins with "-" needs "--" before it (driftcell calc -- '-1*DRIFT.NI(300)').
+begins with "-" needs "--" before it (driftcell calc -- '-1*DRIFT.INTRINSIC(300)').
 
 Examples:
   driftcell calc 'DRIFT.RESISTIVITY(1e15,"B")'
@@ -93,7 +93,7 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
   program
     .command('calc')
     .description('evaluate one formula and print its result')
-    .argument('<formula>', 'a formula such as DRIFT.NI(300) or =SUM(DRIFT.SHEETRES({1,2},10))')
+    .argument('<formula>', 'a formula such as DRIFT.INTRINSIC(300) or =SUM(DRIFT.SHEETRES({1,2},10))')
     .addHelpText('after', CALC_HELP)
     .action((formula: string) => setStatus(runCalc(formula, output)));
 

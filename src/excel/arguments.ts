@@ -13,8 +13,13 @@
  *   data-types ErrorCellValue (`type: "Error"`, `basicValue: "#DIV/0!"`);
  * - every call also gets an invocation object as its last argument, which is
  *   not a formula argument and is dropped here.
- * How blank cells inside a range arrive is not documented either; empty text
- * and null are both read as blank.
+ * How blank cells arrive is not documented either, and Office.js issue
+ * reports show both behaviours: null or empty text, and on some Excel desktop
+ * builds the number 0. Null and empty text are read as blank everywhere; 0 is
+ * read as blank only in arguments where 0 can never be valid (the catalog
+ * marks them `zeroIsBlank`: temperatures, text codes, readings that must be
+ * > 0), so that a referenced empty cell takes the default there. Where 0 means
+ * something (counter_doping), it stays 0.
  */
 import type { FunctionSpec } from '../catalog/types';
 import { failure, type ArgumentInput, type CellFailure, type CellInput, type Grid } from '../catalog/values';
@@ -50,8 +55,9 @@ function inputFailure(errorText: string, parameterName: string): CellFailure {
  * @param parameterName - the catalog argument name, for messages
  * @returns a number, text or boolean as it is; null for a blank; a CellFailure for an error or an unreadable value
  */
-export function toCellInput(raw: unknown, parameterName: string): CellInput {
+export function toCellInput(raw: unknown, parameterName: string, zeroIsBlank = false): CellInput {
   if (raw === null || raw === undefined) return null;
+  if (raw === 0 && zeroIsBlank) return null;
   if (typeof raw === 'string') return raw === '' ? null : raw;
   if (typeof raw === 'number' || typeof raw === 'boolean') return raw;
   const errorText = excelErrorText(raw);
@@ -60,7 +66,7 @@ export function toCellInput(raw: unknown, parameterName: string): CellInput {
   if (typeof raw === 'object' && !Array.isArray(raw) && 'basicValue' in raw) {
     const basic = (raw as Record<string, unknown>).basicValue;
     if (basic === null || basic === undefined) return null;
-    if (isPlain(basic)) return toCellInput(basic, parameterName);
+    if (isPlain(basic)) return toCellInput(basic, parameterName, zeroIsBlank);
   }
   return failure('#VALUE!', `${parameterName} holds a value Driftcell cannot read (${describeKind(raw)}); give a number or text`);
 }
@@ -80,17 +86,18 @@ function describeKind(raw: unknown): string {
  *
  * @param raw - the argument as Excel passed it
  * @param parameterName - the catalog argument name, for messages
+ * @param zeroIsBlank - read 0 as a blank cell (the parameter's `zeroIsBlank`)
  * @returns undefined when omitted, otherwise a single CellInput or a grid of them
  * @example toArgumentInput([[1e16], [""]], 'doping') // [[1e16], [null]]
  */
-export function toArgumentInput(raw: unknown, parameterName: string): ArgumentInput {
+export function toArgumentInput(raw: unknown, parameterName: string, zeroIsBlank = false): ArgumentInput {
   if (raw === null || raw === undefined) return undefined;
-  if (!Array.isArray(raw)) return toCellInput(raw, parameterName);
+  if (!Array.isArray(raw)) return toCellInput(raw, parameterName, zeroIsBlank);
   if (raw.length === 0) return undefined;
   // A one-dimensional array (not produced by Excel for matrix parameters) is read as one row.
   const rows: unknown[][] = raw.every(Array.isArray) ? (raw as unknown[][]) : [raw];
   if (rows[0].length === 0) return undefined;
-  const grid: Grid<CellInput> = rows.map((row) => row.map((element) => toCellInput(element, parameterName)));
+  const grid: Grid<CellInput> = rows.map((row) => row.map((element) => toCellInput(element, parameterName, zeroIsBlank)));
   return grid;
 }
 
@@ -102,5 +109,5 @@ export function toArgumentInput(raw: unknown, parameterName: string): ArgumentIn
  * @returns one ArgumentInput per declared parameter
  */
 export function toArgumentInputs(spec: FunctionSpec, rawArgs: readonly unknown[]): ArgumentInput[] {
-  return spec.parameters.map((parameter, index) => toArgumentInput(rawArgs[index], parameter.name));
+  return spec.parameters.map((parameter, index) => toArgumentInput(rawArgs[index], parameter.name, parameter.zeroIsBlank === true));
 }

@@ -19,11 +19,13 @@
  *   data types (entities, formatted numbers) as inputs and returns none.
  * - No `options`: the functions are synchronous, not streaming, not volatile,
  *   and need neither the caller's address nor the arguments' addresses.
- * - `id` equals `name` (the catalog name, upper case): ids may hold only
- *   letters, digits and periods and must never change once published.
+ * - `id` equals `name` (the catalog name, upper case) and must never change
+ *   once published; functionNames.ts holds Office's naming rules and a name
+ *   that breaks one stops the build.
  */
 import type { FunctionSpec, ParameterSpec } from '../catalog/types';
 import { helpFileName } from '../catalog/docs/helpPage';
+import { whyInvalidFunctionId } from './functionNames';
 
 export interface ParameterMetadata {
   readonly name: string;
@@ -47,9 +49,6 @@ export interface CustomFunctionsMetadata {
   readonly functions: readonly FunctionMetadata[];
 }
 
-/** Ids Excel accepts: letters, digits and periods. */
-const ID_PATTERN = /^[A-Za-z0-9.]+$/;
-
 /**
  * The argument tooltip text: the catalog's description plus its unit and default.
  *
@@ -69,8 +68,9 @@ export function helpUrl(helpBaseUrl: string, name: string): string {
 }
 
 function functionMetadata(spec: FunctionSpec, helpBaseUrl: string): FunctionMetadata {
-  if (!ID_PATTERN.test(spec.name)) {
-    throw new Error(`catalog name "${spec.name}" cannot be an Excel custom function id: only letters, digits and periods are allowed`);
+  const problem = whyInvalidFunctionId(spec.name);
+  if (problem !== null) {
+    throw new Error(`catalog name "${spec.name}" cannot be an Excel custom function id: it ${problem} (Office's custom-function naming rules)`);
   }
   return {
     id: spec.name,

@@ -2,7 +2,11 @@
  * `npm start`: build the add-in if needed, then
  * - on Windows and macOS (where Excel desktop exists) sideload
  *   manifest/manifest.xml into Excel through office-addin-debugging, which
- *   runs this same program with --serve-only as its dev server;
+ *   runs this same program with --serve-only as its dev server. That tool is
+ *   not a dependency of the project: it pulls in a native keychain module
+ *   that needs a compiler and libsecret to install, which install, demo,
+ *   calc, recalc and the tests never need. npx fetches the pinned version
+ *   below on the first `npm start` on such a machine;
  * - elsewhere (Linux) serve dist/addin on https://localhost:3000 and print how
  *   to sideload the manifest into Excel on the web.
  */
@@ -99,9 +103,17 @@ export async function serve(paths: ProjectPaths, forDesktop: boolean): Promise<R
   return server;
 }
 
+/** The sideloading tool, pinned to the exact version this project was tried with. */
+export const SIDELOAD_TOOL = 'office-addin-debugging@7.0.0';
+
+/** The npx arguments that run the pinned sideloading tool (fetched once, then cached by npm). */
+export function sideloadToolArgs(...toolArgs: string[]): string[] {
+  return ['--yes', SIDELOAD_TOOL, ...toolArgs];
+}
+
 function sideloadIntoDesktop(paths: ProjectPaths): Promise<number> {
   const serveCommand = `node "${path.join(paths.root, 'dist', 'node', 'cli', 'start.js')}" --serve-only`;
-  const args = ['office-addin-debugging', 'start', paths.manifest, 'desktop', '--app', 'excel', '--dev-server', serveCommand, '--dev-server-port', String(ADDIN_PORT)];
+  const args = sideloadToolArgs('start', paths.manifest, 'desktop', '--app', 'excel', '--dev-server', serveCommand, '--dev-server-port', String(ADDIN_PORT));
   console.log(`Sideloading ${path.relative(paths.root, paths.manifest)} into Excel desktop …`);
   return new Promise((resolve) => {
     const child = spawn(process.platform === 'win32' ? 'npx.cmd' : 'npx', args, { cwd: paths.root, stdio: 'inherit', shell: process.platform === 'win32' });

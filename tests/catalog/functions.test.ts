@@ -61,7 +61,7 @@ describe('identities between catalog functions (definitions: common practice, no
     for (const t of [250, 300, 450]) {
       const n = value('ELECTRONS', 2e16, 5e15, t);
       const p = value('HOLES', 2e16, 5e15, t);
-      const ni = value('NI', t);
+      const ni = value('INTRINSIC', t);
       expect((n * p) / (ni * ni)).toBeLessThanOrEqual(1);
       expect((n * p) / (ni * ni)).toBeGreaterThan(0.999);
       expect(value('FERMILEVEL', 2e16, 5e15, t)).toBeCloseTo(thermalVoltage(t) * Math.log(n / ni), 4);
@@ -87,7 +87,7 @@ describe('arguments', () => {
   it('takes 300 K, Si, majority and the default models for blank optional arguments', () => {
     expect(value('RESISTIVITY', 1e16, 'B', null, null, null, null)).toBe(value('RESISTIVITY', 1e16, 'B', 300, 'masetti', 'Si', 0));
     expect(value('MOBILITY', 1e16, 'B')).toBe(value('MOBILITY', 1e16, 'B', 300, 'majority', 'masetti', 'Si', 0));
-    expect(value('NI', 300)).toBe(value('NI', 300, 'si', 'MISIAKOS'));
+    expect(value('INTRINSIC', 300)).toBe(value('INTRINSIC', 300, 'si', 'MISIAKOS'));
   });
 
   it('reads P as phosphorus and p as a generic acceptor', () => {
@@ -110,8 +110,8 @@ describe('messages for bad input name the argument, the value and what is allowe
     [['RESISTIVITY', 1e16, 'Xe'], "#VALUE! unknown dopant 'Xe' for silicon"],
     [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: masetti, arora, caughey-thomas, klaassen, astm-f723'],
     [['RESISTIVITY', 1e16, 'B', 300, null, 'GaN'], '#VALUE! material "GaN" is not known; allowed: Si'],
-    [['NI', 5], '#VALUE! temperature_K must be ≥ 20 K and ≤ 1000 K; got 5'],
-    [['NI', null], '#VALUE! temperature_K is required'],
+    [['INTRINSIC', 5], '#VALUE! temperature_K must be ≥ 20 K and ≤ 1000 K; got 5'],
+    [['INTRINSIC', null], '#VALUE! temperature_K is required'],
     [['MOBILITY', 1e16, 'B', 300, 'sideways'], '#VALUE! carrier "sideways" is not known; allowed: majority, minority, electron, hole'],
     [['MOBILITY', 1e16, 'B', 300, null, 'astm-f723'], '#VALUE! model "astm-f723" is not known; allowed: masetti, arora, caughey-thomas'],
     [['RESISTIVITY', 1e16, 'Al', 300, 'astm-f723'], '#VALUE! '],

@@ -6,6 +6,7 @@
  * jacoboni-1977); identities here are definitions (common practice, no source).
  */
 import { ELEMENTARY_CHARGE } from '../../src/physics';
+import { findFunction } from '../../src/catalog';
 import { message, value } from './support/call';
 
 describe('DRIFT.VELOCITY', () => {
@@ -16,6 +17,11 @@ describe('DRIFT.VELOCITY', () => {
     }
     expect(value('VELOCITY', 1e8, 1e16, 'P') / value('VSAT')).toBeCloseTo(1, 2);
     expect(value('VELOCITY', -1e8, 1e16, 'B') / -value('VSAT', 300, 'hole')).toBeCloseTo(1, 2);
+  });
+
+  it('falls short of μE at 100 V/cm for electrons in 1e16 cm⁻³ Si by the percentage its help quotes (documentation check)', () => {
+    const shortfall = 1 - value('VELOCITY', 100, 1e16, 'P') / (100 * value('MOBILITY', 1e16, 'P', 300, 'electron'));
+    expect(findFunction('VELOCITY')!.help).toContain(`${(100 * shortfall).toFixed(1)} % at 100 V/cm`);
   });
 
   it('defaults to the majority carrier at 300 K in Si', () => {
@@ -49,6 +55,14 @@ describe('DRIFT.VSAT', () => {
     expect(message('VSAT', 300, 'ion')).toMatch(/allowed: electron, hole/);
   });
 
+  it('gives Si electrons 1.2–1.4e7 cm/s at 77 K and refuses Si holes below 102 K, saying why (issue 12)', () => {
+    expect(value('VSAT', 77, 'electron')).toBeGreaterThan(1.2e7);
+    expect(value('VSAT', 77, 'electron')).toBeLessThan(1.4e7);
+    expect(message('VSAT', 77, 'hole')).toMatch(/102–1000 K.*exceeds the electron law/);
+    expect(value('VSAT', 102, 'electron')).toBeGreaterThanOrEqual(value('VSAT', 102, 'hole'));
+    expect(value('VSAT', 1000, 'electron')).toBeGreaterThan(value('VSAT', 1000, 'hole'));
+  });
+
   it('refuses 4H-SiC holes with the stated message', () => {
     expect(message('VSAT', 300, 'hole', '4H-SiC')).toMatch(/no published hole saturation velocity for 4H-SiC in this release/);
   });
@@ -74,9 +88,21 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
     expect(shortfall).toBeLessThan(6e-5);
   });
 
+  it('is about half of σE at 1e4 V/cm in 1e16 cm⁻³ n-type Si, as its help says (documentation check)', () => {
+    const ratio = value('CURRENTDENSITY', 1e4, 1e16, 'P') / (1e4 * value('CONDUCTIVITY', 1e16, 'P'));
+    expect(ratio).toBeGreaterThan(0.4);
+    expect(ratio).toBeLessThan(0.6);
+  });
+
   it('keeps its argument positions; field_dependence "ohmic" gives σE and other codes are refused', () => {
     expect(value('CURRENTDENSITY', 1e4, 1e16, 'P', 350, 'Si', 1e15, 'OHMIC')).toBeCloseTo(1e4 * value('CONDUCTIVITY', 1e16, 'P', 350, null, null, 1e15), 8);
     expect(message('CURRENTDENSITY', 1e4, 1e16, 'P', 300, null, null, 'linear')).toMatch(/allowed: saturating, ohmic/);
+  });
+
+  it('works at 77 K in n-type Si, where the refused hole term cannot matter, and refuses p-type Si there', () => {
+    const n77 = value('CURRENTDENSITY', 3e4, 1e16, 'P', 77);
+    expect(n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'P', 77) * value('VELOCITY', 3e4, 1e16, 'P', 77))).toBeCloseTo(1, 12);
+    expect(message('CURRENTDENSITY', 3e4, 1e16, 'B', 77)).toMatch(/102–1000 K.*ohmic/);
   });
 
   it('points to the ohmic form where the saturating form has no data', () => {

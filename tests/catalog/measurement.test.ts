@@ -25,15 +25,15 @@ describe('DRIFT.DOPINGRANGE', () => {
   });
 });
 
-describe('DRIFT.RESISTORLENGTH and DRIFT.RESISTORATTEMP', () => {
+describe('DRIFT.RESISTORLENGTH and DRIFT.RESISTORTEMP', () => {
   it('round-trip at the reference temperature (common practice, no source)', () => {
     const lengthUm = value('RESISTORLENGTH', 22000, 250, 3, 1.3);
-    expect(value('RESISTORATTEMP', 250, lengthUm, 3, 300, 1200, null, null, 1.3) / 22000).toBeCloseTo(1, 12);
-    expect(value('RESISTORATTEMP', 250, lengthUm, 3, 350, 1200, 350, 4, 1.3) / 22000).toBeCloseTo(1, 12);
+    expect(value('RESISTORTEMP', 250, lengthUm, 3, 300, 1200, null, null, 1.3) / 22000).toBeCloseTo(1, 12);
+    expect(value('RESISTORTEMP', 250, lengthUm, 3, 350, 1200, 350, 4, 1.3) / 22000).toBeCloseTo(1, 12);
   });
 
   it('agree with DRIFT.RESISTOR when there are no end squares and no TCR', () => {
-    expect(value('RESISTORATTEMP', 1000, 100, 10, 300, 0)).toBeCloseTo(value('RESISTOR', 1, 100, 10, 10), 9);
+    expect(value('RESISTORTEMP', 1000, 100, 10, 300, 0)).toBeCloseTo(value('RESISTOR', 1, 100, 10, 10), 9);
   });
 
   it('refuse a target below the end squares', () => {

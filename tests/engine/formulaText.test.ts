@@ -11,7 +11,7 @@ describe('storedFormula', () => {
     expect(storedFormula('SUM(A1:A3)')).toBe('SUM(A1:A3)');
   });
   it('is undone by engineFormula', () => {
-    const text = '=IF(DRIFT.DOPING(D4:E4,C4)>0,DRIFT.MODELS(),"DRIFT.NI(")';
+    const text = '=IF(DRIFT.DOPING(D4:E4,C4)>0,DRIFT.MODELS(),"DRIFT.INTRINSIC(")';
     expect(engineFormula(storedFormula(text))).toBe(text);
   });
 });

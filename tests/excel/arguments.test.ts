@@ -1,5 +1,6 @@
 /** Excel argument shapes to the catalog's ArgumentInput. */
-import { findFunction } from '../../src/catalog';
+import { CATALOG, evaluate, findFunction } from '../../src/catalog';
+import type { FunctionSpec } from '../../src/catalog/types';
 import { isFailure } from '../../src/catalog/values';
 import { excelErrorText, toArgumentInput, toArgumentInputs, toCellInput } from '../../src/excel/arguments';
 
@@ -70,5 +71,31 @@ describe('toArgumentInputs', () => {
 
   it('fills arguments Excel did not pass at all as absent', () => {
     expect(toArgumentInputs(mobility, [[[1e16]], [['P']]])).toEqual([[[1e16]], [['P']], undefined, undefined, undefined, undefined, undefined]);
+  });
+});
+
+describe('an empty cell that Excel passes as 0', () => {
+  const spec = (name: string) => CATALOG.find((s) => s.name === name) as FunctionSpec;
+
+  it('is blank where 0 can never be valid: temperature, codes, readings > 0', () => {
+    const resistivity = spec('RESISTIVITY');
+    const byName = new Map(resistivity.parameters.map((p) => [p.name, p.zeroIsBlank === true]));
+    expect(byName.get('temperature_K')).toBe(true);
+    expect(byName.get('dopant')).toBe(true);
+    expect(byName.get('model')).toBe(true);
+    expect(byName.get('material')).toBe(true);
+    expect(byName.get('counter_doping')).toBe(false);
+    // RESISTIVITY(1e15,"B",0) with the 0 from an empty temperature cell means 300 K.
+    const inputs = toArgumentInputs(resistivity, [[[1e15]], [['B']], [[0]], [[0]], [[0]], null, {}]);
+    expect(evaluate(resistivity, inputs)).toEqual(evaluate(resistivity, [1e15, 'B']));
+    expect(spec('FOURPOINT').parameters.filter((p) => p.zeroIsBlank).map((p) => p.name)).toEqual(expect.arrayContaining(['spacing_um']));
+  });
+
+  it('stays 0 where 0 means something (counter_doping)', () => {
+    const resistivity = spec('RESISTIVITY');
+    const index = resistivity.parameters.findIndex((p) => p.name === 'counter_doping');
+    const raw: unknown[] = resistivity.parameters.map(() => null);
+    raw[index] = [[0]];
+    expect(toArgumentInputs(resistivity, raw)[index]).toEqual([[0]]);
   });
 });

@@ -66,6 +66,9 @@ describe('manifest.xml', () => {
   it('asks for the shared runtime, long-lived, on the task pane page', () => {
     const sets = findAll(child(root, 'Requirements'), 'Set').map((s) => s.attributes.Name);
     expect(sets).toContain('SharedRuntime');
+    // CustomFunctions.Error/ErrorCode, which the functions return, are CustomFunctionsRuntime 1.2 (Office API reference).
+    const customFunctions = findAll(child(root, 'Requirements'), 'Set').find((s) => s.attributes.Name === 'CustomFunctionsRuntime');
+    expect(customFunctions?.attributes.MinVersion).toBe('1.2');
     const runtimes = findAll(overrides, 'Runtime');
     expect(runtimes).toHaveLength(1);
     expect(runtimes[0].attributes.lifetime).toBe('long');
@@ -85,6 +88,8 @@ describe('manifest.xml', () => {
     const action = findAll(overrides, 'Action').find((a) => a.attributes['xsi:type'] === 'ShowTaskpane');
     if (action === undefined) throw new Error('no ShowTaskpane action');
     expect(urlOf(child(action, 'SourceLocation'))).toBe(`${ADDIN_ORIGIN}/taskpane.html`);
+    // Under a long-lived shared runtime the pane is the runtime's page: no TaskpaneId of its own.
+    expect(action.children.map((c) => c.name)).not.toContain('TaskpaneId');
     const desktop = child(child(child(overrides, 'Hosts'), 'Host'), 'DesktopFormFactor');
     expect(urlOf(child(desktop, 'FunctionFile'))).toBe(`${ADDIN_ORIGIN}/taskpane.html`);
   });

@@ -70,7 +70,7 @@ describe('buildFunctionsMetadata', () => {
     expect(() => buildFunctionsMetadata(CATALOG, 'localhost:3000/x')).toThrow(/absolute URL|https/);
     expect(() => buildFunctionsMetadata(CATALOG, 'not a url')).toThrow(/absolute URL/);
     expect(() => buildFunctionsMetadata([CATALOG[0], CATALOG[0]], ADDIN_ORIGIN)).toThrow(/twice/);
-    expect(helpUrl('https://example.test/addin/', 'NI')).toBe('https://example.test/addin/help/ni.html');
+    expect(helpUrl('https://example.test/addin/', 'INTRINSIC')).toBe('https://example.test/addin/help/intrinsic.html');
   });
 });
 

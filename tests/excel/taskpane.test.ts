@@ -35,7 +35,7 @@ describe('startPane', () => {
   });
 
   it('reports Excel and the functions the functions bundle bound', async () => {
-    publishStatus(['BANDGAP', 'NI']);
+    publishStatus(['BANDGAP', 'INTRINSIC']);
     const { doc, status, classes } = fakeDocument();
     let ready: Promise<void> = Promise.resolve();
     globals.Office = {

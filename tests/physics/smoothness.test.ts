@@ -82,7 +82,7 @@ describe('resistivity over 1e12–1e21 cm⁻³ and 50–700 K, every material an
 
   it.each(CASES)('$material:$dopant with $model: ρ falls as doping rises at 300, 500 and 700 K wherever N ≥ 10·ni', ({ material, dopant, model }) => {
     for (const temperature of [300, 500, 700]) {
-      const extrinsic = Math.log10(10 * value('NI', temperature, material));
+      const extrinsic = Math.log10(10 * value('INTRINSIC', temperature, material));
       let previous = Infinity;
       for (const logN of logGrid(LOG_DENSITY.from, LOG_DENSITY.to, 36).filter((x) => x >= extrinsic)) {
         const rho = value('RESISTIVITY', 10 ** logN, dopant, temperature, model, material);
@@ -99,7 +99,7 @@ describe('carrier densities over the same space', () => {
   it.each(materials)('%s: ni rises strictly with temperature from 50 to 700 K', (material) => {
     let previous = 0;
     for (let temperature = 50; temperature <= 700; temperature += 10) {
-      const ni = value('NI', temperature, material);
+      const ni = value('INTRINSIC', temperature, material);
       expect(ni).toBeGreaterThan(previous);
       previous = ni;
     }

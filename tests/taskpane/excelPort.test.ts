@@ -113,9 +113,9 @@ describe('createExcelPort', () => {
 
   it('write() sets the formulas of exactly the block, empty cells as ""', async () => {
     const { excel, log } = mockExcel();
-    await createExcelPort(excel).write(block(1, 1, 1, 3), [['=DRIFT.NI(300)', null, 7]]);
+    await createExcelPort(excel).write(block(1, 1, 1, 3), [['=DRIFT.INTRINSIC(300)', null, 7]]);
     expect(log.getRange).toEqual(['B2:D2']);
-    expect(excel.context.workbook.worksheets.sheet.range.formulas).toEqual([['=DRIFT.NI(300)', '', 7]]);
+    expect(excel.context.workbook.worksheets.sheet.range.formulas).toEqual([['=DRIFT.INTRINSIC(300)', '', 7]]);
   });
 
   it('write() of a spilled formula touches only its anchor cell', async () => {

@@ -131,7 +131,14 @@ function parameterTable(spec: FunctionSpec, linked: ReadonlySet<string>): string
 <tbody>
 ${(spec.parameters as readonly ParameterSpec[]).map((p) => parameterRow(p, linked)).join('\n')}
 </tbody>
-</table>`;
+</table>${blankCellNote(spec)}`;
+}
+
+/** Names the arguments where Excel's 0 for an empty cell is read as blank. */
+function blankCellNote(spec: FunctionSpec): string {
+  const names = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.zeroIsBlank).map((p) => p.name);
+  if (names.length === 0) return '';
+  return `\n<p>Blank cells: some Excel versions pass an empty cell as 0. In ${escapeHtml(names.join(', '))}, where 0 is never a valid value, a 0 is read as a blank cell, so an optional argument takes its default and a required one reports that it is missing. Elsewhere 0 is a value.</p>`;
 }
 
 function resultBlock(spec: FunctionSpec): string {

@@ -3,6 +3,10 @@ import { counterDoping, dopant, doping, field, material, sampleOf, temperature }
 import { codeParameter } from '../parameters';
 import { elementwise } from '../types';
 import { HIGH_FIELD_MODELS } from '../citedModels';
+import { carrierHighFieldTable } from '../../physics/highField';
+
+/** Lowest temperature with a Si hole saturation velocity, K (for the help text). */
+const SILICON_HOLE_MIN_K = carrierHighFieldTable('Si', 'hole').evaluationRange.min;
 
 const fieldDependence = codeParameter<FieldDependence>({
   name: 'field_dependence',
@@ -19,7 +23,7 @@ export const CURRENTDENSITY = elementwise({
 
 With field_dependence "ohmic" it returns J = σ·E = q(n·μn + p·μp)·E (Ohm's law, no saturation); that form is valid only while drift velocities stay well below saturation.
 
-The saturating form has the validity of DRIFT.VELOCITY (temperature ranges per material and the GaAs transferred-electron peak it does not model are described there and in the models below). 4H-SiC has no tabulated hole saturation velocity: holes are left out only where even their ohmic current is below double-precision resolution of the electron current (practically any n-type sample); otherwise the result is an error. Outside these ranges use "ohmic".`,
+The saturating form has the validity of DRIFT.VELOCITY (temperature ranges per material and the GaAs transferred-electron peak it does not model are described there and in the models below). 4H-SiC has no tabulated hole saturation velocity, and Si holes have none below ${SILICON_HOLE_MIN_K} K: such holes are left out only where even their ohmic current is below double-precision resolution of the electron current (practically any n-type sample, e.g. n-type Si at 77 K); otherwise the result is an error. Outside these ranges use "ohmic".`,
   result: { unit: 'A/cm²', description: 'Current density J' },
   parameters: [field, doping, dopant, temperature, material, counterDoping, fieldDependence] as const,
   examples: [

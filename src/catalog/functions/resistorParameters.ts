@@ -1,6 +1,6 @@
 import { optionalNumber, requiredNumber } from '../parameters';
 
-/** Parameters shared by DRIFT.RESISTORLENGTH and DRIFT.RESISTORATTEMP. */
+/** Parameters shared by DRIFT.RESISTORLENGTH and DRIFT.RESISTORTEMP. */
 export const sheetRes = requiredNumber({
   name: 'sheet_res',
   unit: 'Ω/sq',

@@ -19,17 +19,17 @@ import { missingSaturationVelocity } from './tables';
 /**
  * Saturated-drift current density J = q(n·v_n + p·v_p).
  *
- * A carrier without any published saturation velocity (4H-SiC holes) is left
- * out only where even its ohmic current p·μp·|E|, an upper bound of its
- * saturated current, is below double-precision resolution of the other
- * carrier's: then leaving it out cannot change J. Otherwise the missing data
- * is reported.
+ * A carrier without a saturation velocity in this material (4H-SiC holes) or
+ * at this temperature (Si holes below about 101 K) is left out only where
+ * even its ohmic current p·μp·|E|, an upper bound of its saturated current,
+ * is below double-precision resolution of the other carrier's: then leaving
+ * it out cannot change J. Otherwise the missing data is reported.
  *
  * @param field - E, V/cm (sign gives the direction)
  * @param sample - the sample
  * @param model - mobility model code for μ0; '' or undefined is the material's default
  * @returns J in A/cm²
- * @throws PhysicsDomainError where a saturation velocity needed for the result is not tabulated
+ * @throws PhysicsDomainError where a saturation velocity needed for the result is not tabulated (material or temperature)
  * @example saturatedCurrentDensity(1e4, phosphorus1e16At300K) // ≈ 9.6e3 A/cm² (σE would be ≈ 1.9e4)
  */
 export function saturatedCurrentDensity(field: number, sample: Sample, model = ''): number {
@@ -39,29 +39,32 @@ export function saturatedCurrentDensity(field: number, sample: Sample, model = '
   const density: Record<Carrier, number> = { electron: equilibrium.electrons, hole: equilibrium.holes };
   const code = sample.material.code;
 
-  const flux = (carrier: Carrier): number => {
+  /** n·v or p·v, or the reason the carrier has no saturation velocity here (no table, or not at this temperature). */
+  const flux = (carrier: Carrier): number | { readonly unavailable: string } => {
+    const missing = missingSaturationVelocity(code, carrier);
+    if (missing !== undefined) return { unavailable: missing };
     try {
       return density[carrier] * velocityAtMobility(field, carrier, sample, mobilities[carrier]);
     } catch (error) {
       if (!(error instanceof PhysicsDomainError)) throw error;
-      throw new PhysicsDomainError(`${error.message}; use the ohmic form J = σE instead`);
+      return { unavailable: error.message };
     }
   };
 
-  const fluxes: Partial<Record<Carrier, number>> = {};
-  const fluxOf = (carrier: Carrier): number => (fluxes[carrier] ??= flux(carrier));
+  const fluxes = { electron: flux('electron'), hole: flux('hole') };
   let total = 0;
   for (const carrier of ['electron', 'hole'] as const) {
-    const missing = missingSaturationVelocity(code, carrier);
-    if (missing === undefined) {
-      total += fluxOf(carrier);
+    const own = fluxes[carrier];
+    if (typeof own === 'number') {
+      total += own;
       continue;
     }
+    const other = fluxes[carrier === 'electron' ? 'hole' : 'electron'];
     const ohmicBound = density[carrier] * mobilities[carrier] * Math.abs(field);
-    const other = fluxOf(carrier === 'electron' ? 'hole' : 'electron');
+    if (typeof other !== 'number') throw new PhysicsDomainError(`${own.unavailable}; use the ohmic form J = σE instead`);
     if (!(ohmicBound <= Number.EPSILON * Math.abs(other))) {
       throw new PhysicsDomainError(
-        `${missing}; the ${carrier}s of this ${code} sample (${density[carrier]} cm⁻³) carry too large a share of the ` +
+        `${own.unavailable}; the ${carrier}s of this ${code} sample (${density[carrier]} cm⁻³) carry too large a share of the ` +
           `current to be left out; use the ohmic form J = σE instead`,
       );
     }

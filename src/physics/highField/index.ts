@@ -13,8 +13,16 @@ export type {
   VelocitySource,
 } from './types';
 export { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE, caugheyThomasVelocity } from './caugheyThomasField';
-export { CANALI_MODEL_CODE, CANALI_SILICON, CANALI_SOURCE } from './canali';
-export { QUAY_MODEL_CODE, QUAY_GERMANIUM, QUAY_GALLIUM_ARSENIDE, QUAY_SOURCE } from './quay';
+export { CANALI_MODEL_CODE, CANALI_SOURCE, CANALI_FIELD_EXPONENT_LAWS, canaliExponentAt300K } from './canali';
+export {
+  QUAY_MODEL_CODE,
+  QUAY_PARAMETERS,
+  QUAY_SILICON,
+  QUAY_GERMANIUM,
+  QUAY_GALLIUM_ARSENIDE,
+  QUAY_SOURCE,
+  SILICON_HOLE_LAW_CROSSING_K,
+} from './quay';
 export { KHAN_COOPER_MODEL_CODE, KHAN_COOPER_SILICON_CARBIDE, KHAN_COOPER_SOURCE } from './siliconCarbide';
 export {
   HIGH_FIELD_TABLES,

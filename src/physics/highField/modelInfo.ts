@@ -5,14 +5,22 @@
  */
 import type { ModelInfo } from '../modelInfo';
 import { CAUGHEY_THOMAS_FIELD_SOURCE } from './caugheyThomasField';
-import { CANALI_MODEL_CODE, CANALI_SOURCE } from './canali';
-import { QUAY_GALLIUM_ARSENIDE, QUAY_MODEL_CODE, QUAY_SOURCE } from './quay';
+import { CANALI_MODEL_CODE, CANALI_SOURCE, canaliExponentAt300K } from './canali';
+import { QUAY_GALLIUM_ARSENIDE, QUAY_MODEL_CODE, QUAY_PARAMETERS, QUAY_SOURCE, SILICON_HOLE_LAW_CROSSING_K } from './quay';
 import { KHAN_COOPER_MODEL_CODE, KHAN_COOPER_SILICON_CARBIDE, KHAN_COOPER_SOURCE } from './siliconCarbide';
 
 /** Registry code of the Caughey–Thomas velocity–field relation. */
 export const CAUGHEY_THOMAS_FIELD_CODE = 'caughey-thomas-field';
 
 const VELOCITY = 'drift velocity vs field';
+
+/** "Si: v_sat,300 = 1.00e7 (e), 7.04e6 (h) cm/s, A = 0.26, 0.63; …" from the table itself. */
+function quayParameterText(): string {
+  return Object.entries(QUAY_PARAMETERS)
+    .map(([material, { electron, hole }]) =>
+      `${material}: v_sat,300 = ${electron[0].toExponential(2)} (e), ${hole[0].toExponential(2)} (h) cm/s, A = ${electron[1]}, ${hole[1]}`)
+    .join('; ');
+}
 const SATURATION = 'saturation velocity';
 
 export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
@@ -28,20 +36,25 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
   },
   {
     code: CANALI_MODEL_CODE,
-    quantity: `${SATURATION} and field exponent, Si`,
-    name: 'Canali et al. (1975) v_m(T) = 1.53e9·T^−0.87 (e), 1.62e8·T^−0.52 (h) cm/s; β = 2.57e-2·T^0.66 (e), 0.46·T^0.17 (h)',
+    quantity: 'field exponent of the velocity–field relation, Si',
+    name: `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ${canaliExponentAt300K('hole').toFixed(3)} (h), held constant`,
     citation: CANALI_SOURCE.citation,
     validity: CANALI_SOURCE.validity,
+    notes:
+      'Canali’s fit β = 2.57e-2·T^0.66 (e), 0.46·T^0.17 (h) belongs with its v_m = 1.53e9·T^−0.87, 1.62e8·T^−0.52 cm/s; ' +
+      'that v_m is a fit parameter, not the saturation velocity (3.5e7 cm/s at 77 K against about 1.2–1.4e7 measured), ' +
+      'so Si uses Quay’s v_sat(T) with Canali’s 300 K β.',
   },
   {
     code: QUAY_MODEL_CODE,
-    quantity: `${SATURATION}, Ge and GaAs`,
+    quantity: `${SATURATION}, Si, Ge and GaAs`,
     name: 'Quay et al. (2000) v_sat(T) = v_sat,300/((1 − A) + A·T/300 K)',
     citation: QUAY_SOURCE.citation,
     validity: QUAY_SOURCE.validity,
     notes:
-      'Ge: v_sat,300 = 0.70e7 (e), 0.63e7 (h) cm/s, A = 0.45, 0.39; GaAs: 0.72e7 (e), 0.90e7 (h) cm/s, A = 0.44, 0.59 ' +
-      '(from memory). Field exponent β = 2 (e), 1 (h) from Caughey–Thomas, not fitted to these materials. ' +
+      `${quayParameterText()} (read in Palankovski 2000, Table 3.31). Si electrons 77–1000 K, Si holes from ` +
+      `${Math.ceil(SILICON_HOLE_LAW_CROSSING_K)} K (below, Quay’s hole law would exceed the electron one); Ge, GaAs 20–1000 K. ` +
+      'Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs β = 2 (e), 1 (h) from Caughey–Thomas, not fitted to these materials. ' +
       (QUAY_GALLIUM_ARSENIDE.limitations ?? ''),
   },
   {

@@ -24,8 +24,6 @@ function checkedTemperature(table: CarrierHighFieldTable, materialCode: string, 
 /** v_sat from its law at T (already inside the range), cm/s. */
 function saturationFromLaw(law: SaturationVelocityLaw, temperature: number): number {
   switch (law.form) {
-    case 'power-law':
-      return law.prefactor * Math.pow(temperature, law.exponent);
     case 'quay': {
       const A = law.temperatureCoefficient;
       return law.valueAtReference / (1 - A + A * (temperature / law.referenceTemperature));
@@ -35,14 +33,9 @@ function saturationFromLaw(law: SaturationVelocityLaw, temperature: number): num
   }
 }
 
-/** β from its law at T (already inside the range). */
-function exponentFromLaw(law: FieldExponentLaw, temperature: number): number {
-  switch (law.form) {
-    case 'power-law':
-      return law.prefactor * Math.pow(temperature, law.exponent);
-    case 'constant':
-      return law.value;
-  }
+/** β from its law (already checked to be inside the temperature range). */
+function exponentFromLaw(law: FieldExponentLaw): number {
+  return law.value;
 }
 
 /**
@@ -50,10 +43,10 @@ function exponentFromLaw(law: FieldExponentLaw, temperature: number): number {
  *
  * @param materialCode - 'Si', 'Ge', 'GaAs' or '4H-SiC' (case-insensitive)
  * @param carrier - 'electron' or 'hole'
- * @param temperature - T, K, inside the table's evaluation range (Si 77–1000 K, Ge/GaAs 20–1000 K, 4H-SiC 300 K)
+ * @param temperature - T, K, inside the table's evaluation range (Si electrons 77–1000 K, holes 102–1000 K; Ge/GaAs 20–1000 K; 4H-SiC 300 K)
  * @returns v_sat in cm/s
  * @throws PhysicsDomainError for an unknown material, a carrier without data, or a temperature outside the range
- * @example saturationVelocity('Si', 'electron', 300) // ≈ 1.07e7 cm/s (Canali et al. 1975)
+ * @example saturationVelocity('Si', 'electron', 300) // 1.0e7 cm/s (Quay et al. 2000)
  */
 export function saturationVelocity(materialCode: string, carrier: Carrier, temperature: number): number {
   const table = carrierHighFieldTable(materialCode, carrier);
@@ -67,11 +60,12 @@ export function saturationVelocity(materialCode: string, carrier: Carrier, tempe
  * @param carrier - 'electron' or 'hole'
  * @param temperature - T, K, inside the table's evaluation range
  * @returns β, dimensionless
- * @example fieldExponent('Si', 'hole', 300) // ≈ 1.213 (Canali et al. 1975)
+ * @example fieldExponent('Si', 'hole', 300) // ≈ 1.213 (Canali et al. 1975, 300 K value)
  */
 export function fieldExponent(materialCode: string, carrier: Carrier, temperature: number): number {
   const table = carrierHighFieldTable(materialCode, carrier);
-  return exponentFromLaw(table.fieldExponent, checkedTemperature(table, materialCode, carrier, temperature));
+  checkedTemperature(table, materialCode, carrier, temperature);
+  return exponentFromLaw(table.fieldExponent);
 }
 
 /** v_sat and β of one carrier at one temperature: what the Caughey–Thomas field law needs. */
@@ -90,10 +84,10 @@ export interface HighFieldParameters {
  * @param temperature - T, K, inside the table's evaluation range
  * @returns v_sat (cm/s) and β
  * @throws PhysicsDomainError as saturationVelocity
- * @example highFieldParameters('Si', 'electron', 300).saturationVelocity // ≈ 1.07e7 cm/s
+ * @example highFieldParameters('Si', 'electron', 300).saturationVelocity // 1.0e7 cm/s
  */
 export function highFieldParameters(materialCode: string, carrier: Carrier, temperature: number): HighFieldParameters {
   const table = carrierHighFieldTable(materialCode, carrier);
   const t = checkedTemperature(table, materialCode, carrier, temperature);
-  return { saturationVelocity: saturationFromLaw(table.saturationVelocity, t), fieldExponent: exponentFromLaw(table.fieldExponent, t) };
+  return { saturationVelocity: saturationFromLaw(table.saturationVelocity, t), fieldExponent: exponentFromLaw(table.fieldExponent) };
 }

@@ -4,14 +4,13 @@
  */
 import { PhysicsDomainError } from '../errors';
 import type { Carrier } from '../sample';
-import { CANALI_SILICON } from './canali';
-import { QUAY_GALLIUM_ARSENIDE, QUAY_GERMANIUM } from './quay';
+import { QUAY_GALLIUM_ARSENIDE, QUAY_GERMANIUM, QUAY_SILICON } from './quay';
 import { KHAN_COOPER_SILICON_CARBIDE } from './siliconCarbide';
 import type { CarrierHighFieldTable, MaterialHighFieldTables, MissingHighFieldTable } from './types';
 
 /** One entry per material code, in the order messages list them. */
 export const HIGH_FIELD_TABLES: readonly MaterialHighFieldTables[] = [
-  CANALI_SILICON,
+  QUAY_SILICON,
   QUAY_GERMANIUM,
   QUAY_GALLIUM_ARSENIDE,
   KHAN_COOPER_SILICON_CARBIDE,
@@ -50,7 +49,7 @@ export function materialHighFieldTables(materialCode: string): MaterialHighField
  * @param carrier - 'electron' or 'hole'
  * @returns the carrier's table
  * @throws PhysicsDomainError for an unknown material or a carrier without published data (4H-SiC holes)
- * @example carrierHighFieldTable('Si', 'hole').modelCode // 'canali-1975'
+ * @example carrierHighFieldTable('Si', 'hole').modelCode // 'quay-2000'
  */
 export function carrierHighFieldTable(materialCode: string, carrier: Carrier): CarrierHighFieldTable {
   const entry = materialHighFieldTables(materialCode)[carrier];

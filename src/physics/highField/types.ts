@@ -23,12 +23,10 @@ export interface EvaluationRange {
 
 /**
  * Saturation velocity v_sat(T), cm/s, in one of the published forms:
- * - 'power-law' (Canali et al. 1975): v_sat = A·T^a, T in kelvin;
  * - 'quay' (Quay et al. 2000): v_sat = v300 / ((1 − A) + A·(T/T_ref));
  * - 'single-temperature': one measured value, only at that temperature.
  */
 export type SaturationVelocityLaw =
-  | { readonly form: 'power-law'; readonly prefactor: number; readonly exponent: number }
   | {
       readonly form: 'quay';
       /** v_sat at T_ref, cm/s. */
@@ -40,14 +38,8 @@ export type SaturationVelocityLaw =
     }
   | { readonly form: 'single-temperature'; readonly value: number; readonly temperature: number };
 
-/**
- * Caughey–Thomas field exponent β(T):
- * - 'power-law' (Canali et al. 1975): β = B·T^b, T in kelvin;
- * - 'constant': β independent of temperature.
- */
-export type FieldExponentLaw =
-  | { readonly form: 'power-law'; readonly prefactor: number; readonly exponent: number }
-  | { readonly form: 'constant'; readonly value: number };
+/** Caughey–Thomas field exponent β, held independent of temperature (see each table's source). */
+export type FieldExponentLaw = { readonly form: 'constant'; readonly value: number };
 
 /** High-field parameters of one carrier type in one material. */
 export interface CarrierHighFieldTable {
@@ -57,6 +49,8 @@ export interface CarrierHighFieldTable {
   readonly saturationSource: VelocitySource;
   readonly fieldExponent: FieldExponentLaw;
   readonly fieldExponentSource: VelocitySource;
+  /** Registry code of the field-exponent source where it has its own entry (Si: Canali et al.). */
+  readonly fieldExponentModelCode?: string;
   readonly evaluationRange: EvaluationRange;
 }
 

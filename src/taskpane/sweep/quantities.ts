@@ -33,7 +33,7 @@ export const QUANTITY_ENTRIES: readonly QuantityEntry[] = [
   { name: 'MOBILITY', logValues: false },
   { name: 'MAJORITY', logValues: true },
   { name: 'MINORITY', logValues: true },
-  { name: 'NI', logValues: true },
+  { name: 'INTRINSIC', logValues: true },
   { name: 'NIEFF', logValues: true },
   { name: 'DIFFUSIVITY', logValues: false },
   { name: 'VSAT', logValues: false },

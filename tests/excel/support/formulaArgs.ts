@@ -1,5 +1,5 @@
 /**
- * Reads a catalog example formula such as `=DRIFT.NI(300,,"sproul-green")` or
+ * Reads a catalog example formula such as `=DRIFT.INTRINSIC(300,,"sproul-green")` or
  * `=DRIFT.MINORITY(1e15,"B",{300,400,500})` into its arguments, when every
  * argument is a literal (number, text, TRUE/FALSE, array constant or left
  * out). Formulas with cell references or nested calls give null: they need a

@@ -11,6 +11,7 @@ import {
   materialHighFieldTables,
   missingSaturationVelocity,
   saturationVelocity,
+  SILICON_HOLE_LAW_CROSSING_K,
 } from '../../../src/physics/highField';
 import { MATERIAL_CODES } from '../../../src/physics/materials';
 import { PhysicsDomainError } from '../../../src/physics/errors';
@@ -53,7 +54,8 @@ describe('saturationVelocity and fieldExponent', () => {
     for (const [material, from] of [['Si', 77], ['Ge', 20], ['GaAs', 20]] as const) {
       for (const carrier of ['electron', 'hole'] as const) {
         let previous = Infinity;
-        for (let t = from; t <= 1000; t += 10) {
+        const start = Math.max(from, carrierHighFieldTable(material, carrier).evaluationRange.min);
+        for (let t = start; t <= 1000; t += 10) {
           const v = saturationVelocity(material, carrier, t);
           expect(v).toBeLessThan(previous);
           expect(v).toBeGreaterThan(1e6);
@@ -63,10 +65,19 @@ describe('saturationVelocity and fieldExponent', () => {
     }
   });
 
-  it('refuse Si below 77 K and above 1000 K, naming the range and why', () => {
-    expect(() => saturationVelocity('Si', 'electron', 76)).toThrow(/77–1000 K.*grows without bound/);
+  it('refuse Si electrons below 77 K, Si holes below 102 K and both above 1000 K, naming the range and why', () => {
+    expect(() => saturationVelocity('Si', 'electron', 76)).toThrow(/77–1000 K.*not tabulated/);
     expect(() => fieldExponent('Si', 'hole', 1001)).toThrow(PhysicsDomainError);
-    expect(() => saturationVelocity('Si', 'hole', Number.NaN)).toThrow(/77–1000 K/);
+    expect(() => saturationVelocity('Si', 'hole', 101)).toThrow(/102–1000 K.*hole law exceeds the electron law/);
+    expect(() => saturationVelocity('Si', 'hole', Number.NaN)).toThrow(/102–1000 K/);
+  });
+
+  it('keep the Si electron saturation velocity at or above the hole one at every temperature both accept (issue 12)', () => {
+    expect(SILICON_HOLE_LAW_CROSSING_K).toBeGreaterThan(100);
+    expect(SILICON_HOLE_LAW_CROSSING_K).toBeLessThan(102);
+    for (let t = 102; t <= 1000; t += 1) {
+      expect(saturationVelocity('Si', 'electron', t)).toBeGreaterThanOrEqual(saturationVelocity('Si', 'hole', t));
+    }
   });
 
   it('give 4H-SiC electrons at 300 K only and refuse 4H-SiC holes', () => {

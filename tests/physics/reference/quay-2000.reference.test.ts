@@ -2,38 +2,39 @@
  * R. Quay, C. Moglestue, V. Palankovski, S. Selberherr, "A temperature
  * dependent model for the saturation velocity in semiconductor materials",
  * Mater. Sci. Semicond. Process. 3, 149 (2000):
- * v_sat(T) = v_sat,300/((1 − A) + A·T/300 K). Parameters (from memory):
- * Si 1.02e7/0.74 (e), 0.72e7/0.37 (h); Ge 0.70e7/0.45, 0.63e7/0.39;
- * GaAs 0.72e7/0.44, 0.90e7/0.59.
+ * v_sat(T) = v_sat,300/((1 − A) + A·T/300 K) (form from memory).
+ * Parameters read in V. Palankovski, dissertation, TU Wien (2000), Table 3.31
+ * "Parameter values for velocity saturation model", from the Quay et al.
+ * paper (iue.tuwien.ac.at/phd/palankovski/node48.html), in m/s there:
+ * Si 1.0e5 / 0.26 (e), 0.704e5 / 0.63 (h); Ge 0.7e5 / 0.55, 0.63e5 / 0.61;
+ * GaAs 0.72e5 / 0.56, 0.9e5 / 0.41.
  */
 import { saturationVelocity } from '../../../src/physics/highField';
 
-const QUAY: Record<string, Record<'electron' | 'hole', [number, number]>> = {
-  Si: { electron: [1.02e7, 0.74], hole: [0.72e7, 0.37] },
-  Ge: { electron: [0.7e7, 0.45], hole: [0.63e7, 0.39] },
-  GaAs: { electron: [0.72e7, 0.44], hole: [0.9e7, 0.59] },
+/** [v_sat,300 in cm/s, A], as read (m/s × 100). */
+const READ: Record<string, Record<'electron' | 'hole', [number, number]>> = {
+  Si: { electron: [1.0e7, 0.26], hole: [0.704e7, 0.63] },
+  Ge: { electron: [0.7e7, 0.55], hole: [0.63e7, 0.61] },
+  GaAs: { electron: [0.72e7, 0.56], hole: [0.9e7, 0.41] },
 };
 
 function quay(material: string, carrier: 'electron' | 'hole', t: number): number {
-  const [v300, a] = QUAY[material][carrier];
+  const [v300, a] = READ[material][carrier];
   return v300 / (1 - a + (a * t) / 300);
 }
 
-describe('Quay et al. (2000) saturation velocities', () => {
-  it.each(['Ge', 'GaAs'])('%s: v_sat(T) follows the Quay form with the published parameters, 77–1000 K (from memory)', (material) => {
+describe('Quay et al. (2000) saturation velocities (parameters read in Palankovski 2000, Table 3.31)', () => {
+  it.each(['Si', 'Ge', 'GaAs'])('%s: v_sat(T) is the Quay form with the read parameters, 120–1000 K (exact up to rounding)', (material) => {
     for (const carrier of ['electron', 'hole'] as const) {
-      for (const t of [77, 300, 500, 1000]) {
+      for (const t of [120, 300, 500, 1000]) {
         expect(saturationVelocity(material, carrier, t) / quay(material, carrier, t)).toBeCloseTo(1, 12);
       }
     }
   });
 
-  it('Si: Canali et al. (1975), which we use, agrees with Quay’s Si parameters within 5 % (e) and 20 % (h) at 300–600 K', () => {
-    // Two independent fits (both from memory); the hole values of the two
-    // sources differ by about 15 % at 300 K.
-    for (const t of [300, 450, 600]) {
-      expect(Math.abs(saturationVelocity('Si', 'electron', t) / quay('Si', 'electron', t) - 1)).toBeLessThan(0.05);
-      expect(Math.abs(saturationVelocity('Si', 'hole', t) / quay('Si', 'hole', t) - 1)).toBeLessThan(0.2);
-    }
+  it('Si electrons at 77 K: 1.24e7 cm/s, inside the measured 1.2–1.4e7 cm/s (Jacoboni et al. 1977; Canali et al. 1975; from memory)', () => {
+    const v77 = saturationVelocity('Si', 'electron', 77);
+    expect(v77).toBeGreaterThan(1.2e7);
+    expect(v77).toBeLessThan(1.4e7);
   });
 });

@@ -33,7 +33,7 @@ describe('example arguments', () => {
   });
 
   it('refuses formulas that are not one plain call of the entry', () => {
-    expect(exampleArguments('=DRIFT.NI(300)', doping)).toBeNull();
+    expect(exampleArguments('=DRIFT.INTRINSIC(300)', doping)).toBeNull();
     expect(exampleArguments('=DRIFT.DOPING(1)+DRIFT.DOPING(2)', doping)).toBeNull();
     expect(exampleArguments('=DRIFT.DOPING(10,"B")*2', doping)).toBeNull();
   });

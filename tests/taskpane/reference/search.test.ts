@@ -21,7 +21,7 @@ describe('catalog search', () => {
 
   it('ignores case and the DRIFT. prefix', () => {
     expect(names('DRIFT.SheetRes')[0]).toBe('SHEETRES');
-    expect(names('drift.ni')[0]).toBe('NI');
+    expect(names('drift.intrinsic')[0]).toBe('INTRINSIC');
   });
 
   it('finds functions by what their summary says', () => {
@@ -46,7 +46,7 @@ describe('catalog search', () => {
     // The phrase bonus puts functions with an Ω·cm unit ahead of functions that only mention ohm and cm apart.
     const withUnit = CATALOG.filter((spec) => [spec.result.unit, ...spec.parameters.map((p) => p.unit)].includes('Ω·cm')).map((spec) => spec.name);
     expect(ohmCm.slice(0, withUnit.length).sort()).toEqual([...withUnit].sort());
-    expect(names('cm-3')).toContain('NI');
+    expect(names('cm-3')).toContain('INTRINSIC');
   });
 
   it('finds functions by a model code', () => {

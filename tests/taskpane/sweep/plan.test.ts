@@ -47,7 +47,7 @@ describe('availableQuantities', () => {
     const rho = quantities.find((q) => q.id === 'RESISTIVITY')!;
     expect(rho.label).toBe(findFunction('RESISTIVITY')!.result.description);
     expect(rho.unit).toBe('Ω·cm');
-    expect(quantities.find((q) => q.id === 'NI')).toMatchObject({ hasDoping: false, hasTemperature: true });
+    expect(quantities.find((q) => q.id === 'INTRINSIC')).toMatchObject({ hasDoping: false, hasTemperature: true });
   });
 
   it('leaves out a listed function the catalog lacks', () => {
@@ -121,9 +121,9 @@ describe('planSweep', () => {
     expect(plan.chart.series.map((s) => s.name)).toEqual(['273.15 K', '323.15 K', '373.15 K']);
   });
 
-  it('temperature only: NI against K on a linear x axis, log y', () => {
-    const plan = planSweep(resolved({ quantityId: 'NI', dopingSwept: false, temperatureSwept: true, values: {} }), at(0, 0));
-    expect(plan.formula).toBe('=DRIFT.NI(A3:A5)');
+  it('temperature only: INTRINSIC against K on a linear x axis, log y', () => {
+    const plan = planSweep(resolved({ quantityId: 'INTRINSIC', dopingSwept: false, temperatureSwept: true, values: {} }), at(0, 0));
+    expect(plan.formula).toBe('=DRIFT.INTRINSIC(A3:A5)');
     expect(plan.chart).toMatchObject({ xLogarithmic: false, yLogarithmic: true, xTitle: 'Temperature (K)' });
   });
 
@@ -150,7 +150,7 @@ describe('insertSweep on the engine workbook', () => {
     ['RESISTIVITY over doping × °C', { temperatureSwept: true, temperatureUnit: '°C' as const, temperatureFrom: '0', temperatureTo: '100', temperatureStep: '50' }],
     ['MOBILITY of minority electrons', { quantityId: 'MOBILITY', values: { 'inner:dopant': 'B', 'inner:carrier': 'electron' } }],
     ['SHEETRES of a 2 µm layer', { quantityId: 'SHEETRES', values: { 'inner:dopant': 'P', 'outer:thickness_um': '2' } }],
-    ['NI over temperature', { quantityId: 'NI', dopingSwept: false, temperatureSwept: true, values: {} }],
+    ['INTRINSIC over temperature', { quantityId: 'INTRINSIC', dopingSwept: false, temperatureSwept: true, values: {} }],
   ])('%s: the spilled formula evaluates to the catalog’s numbers', async (_name, form) => {
     const input = resolved(form);
     const port = createEnginePort();

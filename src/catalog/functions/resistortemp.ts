@@ -4,8 +4,8 @@ import { optionalNumber, requiredNumber } from '../parameters';
 import { elementwise } from '../types';
 import { endSquares, sheetRes } from './resistorParameters';
 
-export const RESISTORATTEMP = elementwise({
-  name: 'RESISTORATTEMP',
+export const RESISTORTEMP = elementwise({
+  name: 'RESISTORTEMP',
   summary: 'Value of a layer resistor at a temperature from its sheet resistance and TCR, in Ω.',
   help: `Returns R(T) = Rs·(L/W + Ne)·(1 + α·(T − T0) + β·(T − T0)²): the resistor's value at the reference temperature T0 from the layer's sheet resistance, the number of squares of its body and the end squares Ne, scaled by the quadratic temperature-coefficient form in common use for resistor specifications (common practice, no source). α is the linear TCR in ppm/K, β the quadratic one in ppm/K²; T0 is the temperature the sheet resistance and coefficients refer to, blank meaning 300 K.
 
@@ -31,8 +31,8 @@ Cautions: TCR values are process data, valid over the temperature range they wer
     endSquares,
   ] as const,
   examples: [
-    { formula: '=DRIFT.RESISTORATTEMP(100,500,5,400,1000)', note: '100 squares of 100 Ω/sq at 400 K with +1000 ppm/K: 11 kΩ' },
-    { formula: '=DRIFT.RESISTORATTEMP(100,500,5,{233;300;398},1500,300,2,1.3)', note: 'a resistor with contact heads over the automotive range' },
+    { formula: '=DRIFT.RESISTORTEMP(100,500,5,400,1000)', note: '100 squares of 100 Ω/sq at 400 K with +1000 ppm/K: 11 kΩ' },
+    { formula: '=DRIFT.RESISTORTEMP(100,500,5,{233;300;398},1500,300,2,1.3)', note: 'a resistor with contact heads over the automotive range' },
   ],
   models: [],
   compute: (rs, lengthUm, widthUm, temperatureK, alpha, referenceK, beta, ends) =>

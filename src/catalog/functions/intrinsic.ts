@@ -3,16 +3,16 @@ import { intrinsicModel, material, requiredTemperature } from '../common';
 import { elementwise } from '../types';
 import { INTRINSIC_MODELS } from '../citedModels';
 
-export const NI = elementwise({
-  name: 'NI',
+export const INTRINSIC = elementwise({
+  name: 'INTRINSIC',
   summary: 'Intrinsic carrier density ni, in cm⁻³.',
   help: `Returns the intrinsic carrier density ni at the given temperature from the selected published model. The default gives 9.65e9 cm⁻³ for silicon at 300 K. Ge, GaAs and 4H-SiC have no published ni fit here: their only model, dos, combines the material's band gap and densities of states (about 2.1e13, 2.3e6 and 1.6e-8 cm⁻³ at 300 K); silicon's fits are refused for them. Every carrier-density function uses the same ni, so n·p = ni² holds throughout the catalog.`,
   result: { unit: 'cm⁻³', description: 'Intrinsic carrier density ni' },
   parameters: [requiredTemperature, material, intrinsicModel] as const,
   examples: [
-    { formula: '=DRIFT.NI(300)', note: 'silicon at 300 K, 9.65e9 cm⁻³' },
-    { formula: '=DRIFT.NI(300,,"sproul-green")', note: 'the same with the Sproul–Green fit' },
-    { formula: '=DRIFT.NI(300,"Ge")', note: 'germanium at 300 K, about 2.1e13 cm⁻³ (dos model)' },
+    { formula: '=DRIFT.INTRINSIC(300)', note: 'silicon at 300 K, 9.65e9 cm⁻³' },
+    { formula: '=DRIFT.INTRINSIC(300,,"sproul-green")', note: 'the same with the Sproul–Green fit' },
+    { formula: '=DRIFT.INTRINSIC(300,"Ge")', note: 'germanium at 300 K, about 2.1e13 cm⁻³ (dos model)' },
   ],
   models: INTRINSIC_MODELS,
   compute: (temperatureK, materialValue, model) => intrinsicDensity(materialValue, temperatureK, model),
