@@ -3,6 +3,7 @@
  * units, defaults and allowed ranges cannot drift apart between functions.
  */
 import {
+  SILICON,
   MATERIAL_CODES,
   dopantCodes,
   intrinsicModelCodes,
@@ -78,8 +79,9 @@ function namedDopantCodes(host: Material): readonly string[] {
 
 export const dopant = requiredCode({
   name: 'dopant',
-  description:
-    `Dopant element symbol for the material (${perMaterial(namedDopantCodes)}) or n / p for a generic donor / acceptor. ` +
+  description: 'Dopant element symbol, e.g. B, P, As for Si (P is phosphorus, p a generic acceptor); list on the help page.',
+  details:
+    `Symbols by material: ${perMaterial(namedDopantCodes)}; n / p for a generic donor / acceptor. ` +
     'Case-insensitive, except that P is phosphorus and p a generic acceptor, N nitrogen and n a generic donor.',
   choices: allDopantCodes,
 });
@@ -136,12 +138,13 @@ function materialModelParameter(what: string, codesOf: (host: Material) => reado
   return {
     ...codeParameter<string>({
       name: 'model',
-      description: `${what} by material (${perMaterial(codesOf)}); blank means the material’s default, listed first.`,
+      description: `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s default. Codes by material on the help page.`,
       choices: () => codes,
       defaultCode: '',
       resolve: (code) => code,
     }),
     defaultText: MATERIAL_DEFAULT_TEXT,
+    details: `Codes by material, default first: ${perMaterial(codesOf)}.`,
   };
 }
 

@@ -176,13 +176,14 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
  * known only per material), so the implementation resolves it. This parser
  * only insists on non-blank text and hands it on trimmed.
  */
-export function requiredCode(options: { readonly name: string; readonly description: string; readonly choices: () => readonly string[] }): ParameterSpec<string> {
-  const { name, description, choices } = options;
+export function requiredCode(options: { readonly name: string; readonly description: string; readonly details?: string; readonly choices: () => readonly string[] }): ParameterSpec<string> {
+  const { name, description, details, choices } = options;
   return {
     name,
     type: 'text',
     unit: null,
     description,
+    details,
     optional: false,
     choices,
     zeroIsBlank: true,

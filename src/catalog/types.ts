@@ -13,8 +13,10 @@ export interface ParameterSpec<T = unknown> {
   readonly type: ParameterType;
   /** Unit in display form (cm⁻³, Ω·cm, K), or null for codes and fractions. */
   readonly unit: string | null;
-  /** One sentence, shown in Excel's argument tooltip and the help page. */
+  /** One sentence, at most 120 characters (Excel's tooltip cuts longer ones), shown in the tooltip and the help page. */
   readonly description: string;
+  /** More about the argument, for the help page only (full code lists, rules). */
+  readonly details?: string;
   readonly optional: boolean;
   /** Display form of the default, for help and metadata (e.g. `300`, `Si`). */
   readonly defaultText?: string;

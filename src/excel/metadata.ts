@@ -53,11 +53,12 @@ export interface CustomFunctionsMetadata {
  * The argument tooltip text: the catalog's description plus its unit and default.
  *
  * @param param - a catalog parameter
- * @returns e.g. `Lattice temperature in kelvin, 20–1000 K; blank means 300 K. Unit: K. Default: 300.`
+ * @returns e.g. `Lattice temperature in kelvin, 20–1000 K; blank means 300 K. Default: 300.`
  */
 export function parameterDescription(param: ParameterSpec): string {
   const parts = [param.description.trim()];
-  if (param.unit !== null) parts.push(`Unit: ${param.unit}.`);
+  // The unit only where the sentence does not already name it ("in cm⁻³ … Unit: cm⁻³" says it twice).
+  if (param.unit !== null && !parts[0].includes(param.unit)) parts.push(`Unit: ${param.unit}.`);
   if (param.optional && param.defaultText !== undefined) parts.push(`Default: ${param.defaultText}.`);
   return parts.join(' ');
 }

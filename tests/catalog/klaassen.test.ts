@@ -26,7 +26,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
   it('is accepted case-insensitively and listed in the model argument', () => {
     expect(value('MOBILITY', 1e17, 'P', 300, 'majority', 'Klaassen')).toBe(value('MOBILITY', 1e17, 'P', 300, 'majority', 'klaassen'));
     const model = findFunction('MOBILITY')!.parameters.find((p) => p.name === 'model')!;
-    expect(model.description).toContain('klaassen');
+    expect(model.details).toContain('klaassen');
     expect(findFunction('MOBILITY')!.models).toContain('klaassen');
   });
 

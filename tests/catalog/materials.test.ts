@@ -19,7 +19,7 @@ describe('material argument', () => {
     const codes = allDopantCodes();
     for (const code of ['B', 'Al', 'Ga', 'In', 'P', 'As', 'Sb', 'n', 'p', 'Zn', 'Be', 'C', 'Mg', 'Si', 'Te', 'Se', 'Sn', 'N']) expect(codes).toContain(code);
     expect(new Set(codes).size).toBe(codes.length);
-    const description = findFunction('RESISTIVITY')!.parameters.find((p) => p.name === 'dopant')!.description;
+    const description = findFunction('RESISTIVITY')!.parameters.find((p) => p.name === 'dopant')!.details;
     expect(description).toContain('GaAs: Zn, Be, C, Mg, Si, Te, Se, Sn');
     expect(description).toContain('4H-SiC: Al, B, N, P');
   });
@@ -27,7 +27,7 @@ describe('material argument', () => {
   it('shows blank model arguments as the material’s default', () => {
     const model = findFunction('MOBILITY')!.parameters.find((p) => p.name === 'model')!;
     expect(model.defaultText).toBe(MATERIAL_DEFAULT_TEXT);
-    expect(model.description).toContain('GaAs: sotoodeh');
+    expect(model.details).toContain('GaAs: sotoodeh');
   });
 });
 

@@ -60,10 +60,16 @@ describe('buildFunctionsMetadata', () => {
       for (const p of spec.parameters as readonly ParameterSpec[]) {
         const text = parameterDescription(p);
         expect(text.startsWith(p.description.trim())).toBe(true);
-        if (p.unit !== null) expect(text).toContain(`Unit: ${p.unit}.`);
+        // The unit once: in the sentence, or appended when the sentence does not name it.
+        if (p.unit !== null) expect(text.split(p.unit).length - 1).toBeGreaterThanOrEqual(1);
+        if (p.unit !== null && p.description.includes(p.unit)) expect(text).not.toContain(`Unit: ${p.unit}.`);
         if (p.optional && p.defaultText !== undefined) expect(text).toContain(`Default: ${p.defaultText}.`);
       }
     }
+  });
+
+  it('keeps the essential of every argument tooltip within 120 characters (Excel cuts longer ones)', () => {
+    for (const spec of CATALOG) for (const p of spec.parameters as readonly ParameterSpec[]) expect({ fn: spec.name, p: p.name, length: p.description.length <= 120 || p.description.length }).toEqual({ fn: spec.name, p: p.name, length: true });
   });
 
   it('rejects a base URL that is not absolute, and duplicate names', () => {

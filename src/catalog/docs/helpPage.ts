@@ -120,7 +120,7 @@ function cautionBlock(): string {
 
 function parameterRow(param: ParameterSpec, linked: ReadonlySet<string>): string {
   const defaultCell = param.optional ? (param.defaultText !== undefined ? `<code>${escapeHtml(param.defaultText)}</code>` : 'blank') : 'required';
-  return `<tr><th scope="row"><code>${escapeHtml(param.name)}</code></th><td>${param.unit === null ? '—' : escapeHtml(param.unit)}</td><td>${inline(escapeHtml(param.description), linked)}</td><td>${defaultCell}</td></tr>`;
+  return `<tr><th scope="row"><code>${escapeHtml(param.name)}</code></th><td>${param.unit === null ? '—' : escapeHtml(param.unit)}</td><td>${inline(escapeHtml(param.details === undefined ? param.description : `${param.description} ${param.details}`), linked)}</td><td>${defaultCell}</td></tr>`;
 }
 
 function parameterTable(spec: FunctionSpec, linked: ReadonlySet<string>): string {

@@ -10,7 +10,7 @@ const SILICON_HOLE_MIN_K = carrierHighFieldTable('Si', 'hole').evaluationRange.m
 
 const fieldDependence = codeParameter<FieldDependence>({
   name: 'field_dependence',
-  description: 'How J depends on the field: saturating (velocity saturation, J = q(n·vn + p·vp)) or ohmic (J = σE); blank means saturating.',
+  description: 'How J depends on the field: saturating (J = q(n·vn + p·vp)) or ohmic (J = σE); blank means saturating.',
   choices: () => FIELD_DEPENDENCE_CODES,
   defaultCode: FIELD_DEPENDENCE_CODES[0],
   resolve: (code) => code as FieldDependence,

@@ -15,7 +15,7 @@ Cautions: the layer must be uniform and much thinner than the spacing (for thick
     probeVoltage,
     probeCurrent,
     optionalLength('spacing_um', 'Probe spacing s in µm, > 0; needed only with diameter_um.'),
-    optionalLength('diameter_um', 'Diameter d of a circular slice probed at its centre, in µm, ≥ 3 spacings; blank means an unbounded layer.'),
+    optionalLength('diameter_um', 'Diameter d of a circular slice probed at its centre, ≥ 3 spacings; blank means an unbounded layer.'),
   ] as const,
   examples: [
     { formula: '=DRIFT.FOURPOINTRS(0.0221,0.001)', note: 'an implanted layer: about 100 Ω/sq' },
