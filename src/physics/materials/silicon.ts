@@ -23,8 +23,8 @@ export const THURMOND_1975_BANDGAP: VarshniBandgap = {
     'C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); Eg0 = 1.170 eV, α = 4.73e-4 eV/K, β = 636 K ' +
     '(values from memory)',
   validity:
-    'fitted to Si gap data from near 0 K to well above room temperature (from memory); evaluated here ' +
-    'over the whole temperature domain 1–1687 K, where it stays between 1.17 and 0.59 eV',
+    'fitted to Si gap data from near 0 K to well above room temperature (from memory); the physics core ' +
+    'evaluates it over 1–1687 K (between 1.17 and 0.59 eV there), the spreadsheet functions at 20–1000 K',
 };
 
 /**
@@ -63,16 +63,20 @@ export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
  * with the 'dos' model (Thurmond gap + Green DOS) to within 10% from 78 K to
  * 1000 K. Splicing another model in at 340 K would create a kink for no gain.
  */
+const MISIAKOS_CONSTANTS = { prefactor: 5.29e19, referenceTemperature: 300, exponent: 2.54, activationTemperature: 6726 } as const;
+
+/** ni of a fit at its reference temperature, A·exp(−Θ/Tref), in the form help texts print (e.g. 9.70e9). */
+function atReference(fit: { readonly prefactor: number; readonly referenceTemperature: number; readonly activationTemperature: number }): string {
+  return (fit.prefactor * Math.exp(-fit.activationTemperature / fit.referenceTemperature)).toExponential(2).replace('e+', 'e');
+}
+
 export const MISIAKOS_TSAMAKIS_1993_FIT: IntrinsicDensityFit = {
   code: 'misiakos',
   name: 'Misiakos & Tsamakis (1993) ni fit',
-  prefactor: 5.29e19,
-  referenceTemperature: 300,
-  exponent: 2.54,
-  activationTemperature: 6726,
+  ...MISIAKOS_CONSTANTS,
   citation:
-    'K. Misiakos, D. Tsamakis, J. Appl. Phys. 74, 3293 (1993): ni = 5.29e19·(T/300)^2.54·exp(−6726/T) cm⁻³, ' +
-    '9.65e9 cm⁻³ at 300 K (fit constants from memory)',
+    'K. Misiakos, D. Tsamakis, J. Appl. Phys. 74, 3293 (1993): ni = 5.29e19·(T/300)^2.54·exp(−6726/T) cm⁻³; ' +
+    `these constants give ${atReference(MISIAKOS_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 9.65e9 (fit constants and quote from memory)`,
   validity: 'measured 78–340 K; smooth, strictly increasing extrapolation outside (see notes)',
   notes:
     'Default. Outside 78–340 K the same analytic fit is extrapolated: it stays within 10% of the ' +
@@ -81,20 +85,20 @@ export const MISIAKOS_TSAMAKIS_1993_FIT: IntrinsicDensityFit = {
 };
 
 /**
- * Sproul & Green: ni from 275 to 375 K, 1.00e10 cm⁻³ at 300 K. Altermatt et
+ * Sproul & Green: ni from 275 to 375 K; the paper quotes 1.00e10 cm⁻³ at 300 K,
+ * its constants give 1.015e10 (checked by a test). Altermatt et
  * al. (2003) showed this value is a few percent high because band-gap
  * narrowing in the doped test devices was not accounted for (from memory).
  */
+const SPROUL_GREEN_CONSTANTS = { prefactor: 9.38e19, referenceTemperature: 300, exponent: 2, activationTemperature: 6884 } as const;
+
 export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
   code: 'sproul-green',
   name: 'Sproul & Green (1991) ni fit',
-  prefactor: 9.38e19,
-  referenceTemperature: 300,
-  exponent: 2,
-  activationTemperature: 6884,
+  ...SPROUL_GREEN_CONSTANTS,
   citation:
-    'A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ni = 9.38e19·(T/300)^2·exp(−6884/T) cm⁻³, ' +
-    '1.00e10 cm⁻³ at 300 K (fit constants from memory)',
+    'A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ni = 9.38e19·(T/300)^2·exp(−6884/T) cm⁻³; ' +
+    `these constants give ${atReference(SPROUL_GREEN_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 1.00e10 (fit constants and quote from memory)`,
   validity: 'measured 275–375 K; extrapolated outside',
   notes:
     'About 5% above the default at 300 K; Altermatt et al., J. Appl. Phys. 93, 1598 (2003) attribute the ' +
