@@ -6,6 +6,8 @@
 export const EXIT_OK = 0;
 /** `calc`: the formula's whole result is an error. */
 export const EXIT_RESULT_ERROR = 1;
+/** `recalc`: the copy was written, but some formula cells were kept unrecalculated (listed on stderr). */
+export const EXIT_CELLS_KEPT = 1;
 /** The command could not do its job: bad usage, unreadable input, refused overwrite. */
 export const EXIT_CANNOT_RUN = 2;
 

@@ -4,7 +4,7 @@
  */
 import { existsSync, statSync } from 'node:fs';
 import { WorkbookReadError, readWorkbookFile, recalculateWorkbook, workbookBytes, type RecalcSummary } from '../engine/xlsx';
-import { CliFailure, EXIT_OK, type Output } from './failure';
+import { CliFailure, EXIT_CELLS_KEPT, EXIT_OK, type Output } from './failure';
 import { checkOutputAgainstInput, writeFileAtomically } from './files';
 import { formatError } from './format';
 import { phaseProgress } from './progress';
@@ -21,6 +21,10 @@ function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
 
+function quotedSheet(sheet: string): string {
+  return /^[A-Za-z0-9_]+$/.test(sheet) ? sheet : `'${sheet.replace(/'/g, "''")}'`;
+}
+
 /** The lines `recalc` prints about what it did. */
 export function describeSummary(summary: RecalcSummary, written: string): { lines: string[]; notes: string[] } {
   const spills = summary.arrays.filter((a) => a.rows * a.columns > 1).length;
@@ -28,11 +32,15 @@ export function describeSummary(summary: RecalcSummary, written: string): { line
     `wrote ${written}: ${plural(summary.sheets.length, 'sheet')}, ${plural(summary.formulas, 'formula')}, ${plural(spills, 'spilled result')}`,
   ];
   const notes: string[] = [];
+  if (summary.kept.length > 0) {
+    notes.push(`${plural(summary.kept.length, 'formula cell')} kept as the file had ${summary.kept.length === 1 ? 'it' : 'them'} (formula and cached value, not recalculated):`);
+    for (const kept of summary.kept.slice(0, LISTED_PROBLEMS)) notes.push(`  ${quotedSheet(kept.sheet)}!${kept.address}: ${kept.reason}`);
+    if (summary.kept.length > LISTED_PROBLEMS) notes.push(`  … and ${summary.kept.length - LISTED_PROBLEMS} more`);
+  }
   if (summary.problems.length > 0) {
     notes.push(`${plural(summary.problems.length, 'cell')} ${summary.problems.length === 1 ? 'shows' : 'show'} errors:`);
     for (const problem of summary.problems.slice(0, LISTED_PROBLEMS)) {
-      const quoted = /^[A-Za-z0-9_]+$/.test(problem.sheet) ? problem.sheet : `'${problem.sheet.replace(/'/g, "''")}'`;
-      notes.push(`  ${quoted}!${problem.address}: ${formatError({ kind: 'error', code: problem.code, message: problem.message })}`);
+      notes.push(`  ${quotedSheet(problem.sheet)}!${problem.address}: ${formatError({ kind: 'error', code: problem.code, message: problem.message })}`);
     }
     if (summary.problems.length > LISTED_PROBLEMS) notes.push(`  … and ${summary.problems.length - LISTED_PROBLEMS} more`);
   }
@@ -42,7 +50,8 @@ export function describeSummary(summary: RecalcSummary, written: string): { line
 /**
  * Recalculates `input` and writes the result to `options.output`.
  *
- * @returns the exit status (0); failures are thrown as CliFailure
+ * @returns the exit status: 0 when every formula was recalculated, 1 when the copy was written but
+ *   some formula cells were kept as the file had them (listed on stderr); failures are thrown as CliFailure
  */
 export async function runRecalc(input: string, options: RecalcOptions, output: Output): Promise<number> {
   if (!existsSync(input)) throw new CliFailure(`${input}: no such file`);
@@ -56,7 +65,12 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   try {
     const workbook = await readWorkbookFile(input);
     progress.start(1);
-    summary = recalculateWorkbook(workbook);
+    try {
+      summary = recalculateWorkbook(workbook);
+    } catch (e) {
+      if (e instanceof WorkbookReadError) throw new WorkbookReadError(`${input}: ${e.message}`);
+      throw e;
+    }
     progress.start(2);
     bytes = await workbookBytes(workbook, summary);
   } catch (e) {
@@ -71,5 +85,5 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   const { lines, notes } = describeSummary(summary, options.output);
   lines.forEach(output.out);
   notes.forEach(output.err);
-  return EXIT_OK;
+  return summary.kept.length > 0 ? EXIT_CELLS_KEPT : EXIT_OK;
 }

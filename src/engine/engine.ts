@@ -4,7 +4,9 @@
  * helper that evaluates one formula on its own (for `driftcell calc`).
  */
 import { DetailedCellError, HyperFormula } from 'hyperformula';
-import type { CellValue, ConfigParams, SerializedNamedExpression, Sheets } from 'hyperformula';
+import type { CellValue, ConfigParams, SerializedNamedExpression, Sheets, SimpleCellAddress } from 'hyperformula';
+import type { ArraySizePredictor as ArraySizePredictorClass } from 'hyperformula/typings/ArraySize';
+import { cellName } from './a1';
 import { engineFormula } from './formulaText';
 import { registerDriftFunctions } from './plugin';
 
@@ -35,6 +37,72 @@ export const ENGINE_CONFIG: Readonly<Partial<ConfigParams>> = {
 };
 
 /**
+ * Most cells one formula's result may fill. HyperFormula fixes a result's
+ * size when it reads the formula and then reserves every cell of it, so
+ * SEQUENCE(1048576,4) or a whole column times a whole row (17 billion cells)
+ * would exhaust memory before any value is computed.
+ */
+export const MAX_RESULT_CELLS = 1_000_000;
+
+/** A formula whose result would fill more than {@link MAX_RESULT_CELLS} cells; thrown while the engine reads it. */
+export class ResultTooLarge extends Error {
+  constructor(
+    readonly address: SimpleCellAddress,
+    readonly rows: number,
+    readonly columns: number,
+  ) {
+    super(
+      `the formula in ${cellName(address.row, address.col)} gives ${extent(rows)}×${extent(columns)} values, ` +
+        `more than the ${MAX_RESULT_CELLS.toLocaleString('en-US')} cells one result may fill`,
+    );
+    this.name = 'ResultTooLarge';
+  }
+}
+
+function extent(n: number): string {
+  return Number.isFinite(n) ? n.toLocaleString('en-US') : 'unbounded';
+}
+
+let resultSizeLimited = false;
+
+/**
+ * Wraps HyperFormula's result-size prediction (the one place every formula's
+ * size is fixed, on reading a sheet and in calculateFormula) so that an
+ * oversized result stops the read with ResultTooLarge instead of reserving it.
+ */
+function limitResultSizes(): void {
+  if (resultSizeLimited) return;
+  resultSizeLimited = true;
+  // The class is not in HyperFormula's public index; its prototype is reached through an instance
+  // (shared by every engine built afterwards). Typed, but internal: this is the one place relying on it.
+  const probe = HyperFormula.buildEmpty({ licenseKey: ENGINE_CONFIG.licenseKey });
+  const internals = probe as unknown as { _crudOperations: { operations: { arraySizePredictor: ArraySizePredictorClass } } };
+  const ArraySizePredictor = internals._crudOperations.operations.arraySizePredictor.constructor as typeof ArraySizePredictorClass;
+  probe.destroy();
+  const predict = ArraySizePredictor.prototype.checkArraySize;
+  ArraySizePredictor.prototype.checkArraySize = function checkedArraySize(this: ArraySizePredictorClass, ...args: Parameters<typeof predict>) {
+    const size = predict.apply(this, args);
+    if (!size.isRef && size.width * size.height > MAX_RESULT_CELLS) throw new ResultTooLarge(args[1], size.height, size.width);
+    return size;
+  };
+}
+
+/**
+ * calculateFormula does not predict a result's size before computing it, so
+ * `calc` asks the (wrapped) predictor first: ResultTooLarge instead of
+ * exhausting memory on SEQUENCE(1048576,1)*SEQUENCE(1,16384).
+ */
+function checkFormulaResultSize(engine: HyperFormula, text: string): void {
+  // Internal like limitResultSizes: extractTemporaryFormula is how calculateFormula itself parses.
+  const internals = engine as unknown as {
+    extractTemporaryFormula(formula: string, sheetId: number): { ast?: Parameters<ArraySizePredictorClass['checkArraySize']>[0]; address: SimpleCellAddress };
+    _crudOperations: { operations: { arraySizePredictor: ArraySizePredictorClass } };
+  };
+  const { ast, address } = internals.extractTemporaryFormula(text, 0);
+  if (ast !== undefined) internals._crudOperations.operations.arraySizePredictor.checkArraySize(ast, address);
+}
+
+/**
  * Excel reads TRUE and FALSE in formulas as boolean literals; HyperFormula only
  * knows the functions TRUE() and FALSE(). Two workbook names bridge the gap.
  */
@@ -53,6 +121,7 @@ const BOOLEAN_LITERALS: readonly SerializedNamedExpression[] = [
  */
 export function createEngine(sheets?: Sheets, namedExpressions?: SerializedNamedExpression[]): HyperFormula {
   registerDriftFunctions();
+  limitResultSizes();
   return HyperFormula.buildFromSheets(sheets ?? { Sheet1: [] }, { ...ENGINE_CONFIG }, [...BOOLEAN_LITERALS, ...(namedExpressions ?? [])]);
 }
 
@@ -98,10 +167,18 @@ export function evaluateFormula(formula: string): FormulaResult {
   const text = engineFormula(formula.trim());
   const engine = createEngine();
   try {
-    if (text === '=' || !engine.validateFormula(text)) {
-      return { kind: 'error', code: '#ERROR!', message: `not a valid formula: ${text}` };
+    let value: ReturnType<HyperFormula['calculateFormula']>;
+    try {
+      if (text === '=' || !engine.validateFormula(text)) {
+        return { kind: 'error', code: '#ERROR!', message: `not a valid formula: ${text}` };
+      }
+      checkFormulaResultSize(engine, text);
+      value = engine.calculateFormula(text, 0);
+    } catch (e) {
+      if (e instanceof ResultTooLarge) return { kind: 'error', code: '#VALUE!', message: e.message.replace(/^the formula in \S+ gives/, 'the formula gives') };
+      if (e instanceof RangeError) return { kind: 'error', code: '#VALUE!', message: 'the formula is too long or too deeply nested for the headless engine' };
+      throw e;
     }
-    const value = engine.calculateFormula(text, 0);
     return Array.isArray(value) ? value.map((row) => row.map(toResultElement)) : toResultElement(value);
   } finally {
     engine.destroy();

@@ -10,6 +10,7 @@
  * packages beyond the limits below.
  */
 import { inflateRawSync } from 'node:zlib';
+import { SheetBoundExceeded, checkSheetBounds } from './sheetBounds';
 
 /**
  * Largest .xlsx file read, bytes. The file is read whole into memory; a
@@ -68,9 +69,22 @@ function megabytes(bytes: number): string {
   return `${Math.round(bytes / (1024 * 1024))} MB`;
 }
 
-/** The worksheet parts, whose cells count against MAX_CELLS. */
-function isWorksheetPart(name: string): boolean {
-  return /^xl\/worksheets\/[^/]+\.xml$/i.test(name);
+/**
+ * exceljs 4.4's own rule for a worksheet part (lib/xlsx/xlsx.js, loadFromFiles):
+ * the entry name, one leading "/" removed, matched anywhere by this unanchored
+ * pattern, so "/xl/worksheets/sheet1.xml", "xl/worksheets/sheet1.xmlX" and
+ * "a/xl/worksheets/sheet2.xml" are all parsed as sheets.
+ */
+const EXCELJS_WORKSHEET_PART = /xl\/worksheets\/sheet(\d+)[.]xml/;
+
+/**
+ * The worksheet parts, whose cells count against MAX_CELLS and whose extents
+ * are bounded (sheetBounds.ts): every part exceljs will parse as a sheet, and
+ * any other XML part under xl/worksheets/.
+ */
+export function isWorksheetPart(name: string): boolean {
+  const entry = name.startsWith('/') ? name.slice(1) : name;
+  return EXCELJS_WORKSHEET_PART.test(entry) || /^\/?xl\/worksheets\/[^/]+\.xml$/i.test(name);
 }
 
 /** Counts `<c …>` / `<x:c …>` start tags (not `<col>`, `<cfRule>` …) in sheet XML. */
@@ -183,6 +197,12 @@ export function checkPackage(bytes: Buffer): number {
       throw new PackageRejected(`its parts expand to more than ${megabytes(MAX_EXPANDED_BYTES)}, the most Driftcell reads`, 'limit');
     }
     if (isWorksheetPart(part.name)) {
+      try {
+        checkSheetBounds(content, part.name);
+      } catch (e) {
+        if (e instanceof SheetBoundExceeded) throw new PackageRejected(e.message, 'limit');
+        throw e;
+      }
       cells += countCells(content);
       if (cells > MAX_CELLS) {
         throw new PackageRejected(`it has more than ${MAX_CELLS.toLocaleString('en-US')} cells, the most Driftcell recalculates (each takes about 1.3 kB of memory)`, 'limit');

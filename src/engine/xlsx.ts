@@ -16,7 +16,7 @@ import ExcelJS from 'exceljs';
 import { CellError, CellType, DetailedCellError, ErrorType } from 'hyperformula';
 import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, SimpleCellRange } from 'hyperformula';
 import { areaName, cellName, columnName } from './a1';
-import { createEngine } from './engine';
+import { ResultTooLarge, createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
 import { fileErrorText } from './errorTypes';
 import { MAX_PACKAGE_BYTES, PackageRejected, checkPackage } from './packageCheck';
@@ -51,10 +51,20 @@ export interface ArrayFormulaPlacement {
   readonly columns: number;
 }
 
+/** A formula cell left exactly as the file had it (formula and cached value), and why. */
+export interface KeptCell {
+  readonly sheet: string;
+  /** A1-style address. */
+  readonly address: string;
+  readonly reason: string;
+}
+
 /** What a recalculation did. */
 export interface RecalcSummary {
   readonly sheets: readonly string[];
   readonly formulas: number;
+  /** Formula cells not recalculated: they keep the formula and cached value the file had. */
+  readonly kept: readonly KeptCell[];
   readonly arrays: readonly ArrayFormulaPlacement[];
   readonly problems: readonly CellProblem[];
 }
@@ -253,7 +263,8 @@ function mergedCellsSpillError(): DetailedCellError {
  */
 export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
   const inputs = workbook.worksheets.map(readSheet);
-  const engine = createEngine(Object.fromEntries(inputs.map((input) => [input.name, input.content])));
+  const { engine, kept } = buildWorkbookEngine(inputs);
+  const keptCells = new Set([...kept.values()].map((k) => k.formula.cell));
   try {
     const names = workbookNames(workbook);
     if (names.length > 0) addNames(engine, names);
@@ -272,6 +283,7 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
       const sheetId = engine.getSheetId(input.name);
       if (sheetId === undefined) throw new Error(`sheet "${input.name}" did not reach the engine`);
       for (const formula of input.formulas) {
+        if (keptCells.has(formula.cell)) continue;
         const address = { sheet: sheetId, row: formula.row - 1, col: formula.column - 1 };
         const isArray = engine.getCellType(address) === CellType.ARRAYFORMULA;
         if (!isArray && !formula.wasArray) {
@@ -309,11 +321,68 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
     return {
       sheets: inputs.map((input) => input.name),
       formulas: inputs.reduce((n, input) => n + input.formulas.length, 0),
+      kept: [...kept.values()].map(({ sheet, formula, reason }) => ({ sheet, address: cellAddress(formula.row, formula.column), reason })),
       arrays,
       problems,
     };
   } finally {
     engine.destroy();
+  }
+}
+
+/** The cached value a formula cell had in the file, as engine content (its dependents calculate from it). */
+function cachedContent(cell: ExcelJS.Cell): RawCellContent {
+  const result = (cell.value as ExcelJS.CellFormulaValue).result;
+  if (result === undefined || result === null) return null;
+  if (typeof result === 'number' || typeof result === 'boolean') return result;
+  if (typeof result === 'string') return `'${result}`;
+  if (result instanceof Date) return null;
+  if (typeof result === 'object' && 'error' in result) return result.error;
+  return null;
+}
+
+/**
+ * Builds the engine over every sheet. A formula the engine's parser cannot
+ * take without exhausting the call stack (a sum of thousands of terms, deep
+ * nesting; still within Excel's own limits) is not evaluated: the engine gets
+ * its cached value instead, and the cell is kept as the file had it, so the
+ * rest of the workbook still recalculates. A result beyond MAX_RESULT_CELLS
+ * refuses the workbook, naming the cell.
+ */
+function buildWorkbookEngine(inputs: readonly SheetInput[]): { engine: HyperFormula; kept: Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }> } {
+  const kept = new Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }>();
+  const sheets = () => Object.fromEntries(inputs.map((input) => [input.name, input.content]));
+  for (let attempt = 0; ; attempt++) {
+    try {
+      return { engine: createEngine(sheets()), kept };
+    } catch (e) {
+      if (e instanceof ResultTooLarge) {
+        const sheet = inputs[e.address.sheet]?.name ?? '?';
+        throw new WorkbookReadError(`too large to recalculate (sheet "${sheet}": ${e.message})`);
+      }
+      if (!(e instanceof RangeError) || attempt > 0) throw e;
+      // Find the formulas that overflow on their own (parsing or evaluating them over empty sheets
+      // of the same names) and give the engine their cached values instead.
+      const probe = createEngine(Object.fromEntries(inputs.map((input) => [input.name, []])));
+      try {
+        for (const [index, input] of inputs.entries()) {
+          for (const formula of input.formulas) {
+            const text = input.content[formula.row - 1]?.[formula.column - 1];
+            if (typeof text !== 'string' || !text.startsWith('=')) continue;
+            try {
+              probe.calculateFormula(text, index);
+            } catch (inner) {
+              if (!(inner instanceof RangeError)) continue;
+              input.content[formula.row - 1][formula.column - 1] = cachedContent(formula.cell);
+              kept.set(formula, { sheet: input.name, formula, reason: 'the formula is too long or too deeply nested for the headless engine' });
+            }
+          }
+        }
+      } finally {
+        probe.destroy();
+      }
+      if (kept.size === 0) throw e;
+    }
   }
 }
 

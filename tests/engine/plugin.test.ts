@@ -166,6 +166,24 @@ describe('errors', () => {
   });
 });
 
+describe('one formula the engine cannot take (issue 14 §3)', () => {
+  // Excel accepts formulas up to 8,192 characters and 64 levels of nesting (Microsoft's
+  // "Excel specifications and limits", from memory); the parser's recursion gives out earlier.
+  it('a 2,000-term sum and 150 nested parentheses fail alone, with a message', () => {
+    const expected = { kind: 'error', code: '#VALUE!', message: 'the formula is too long or too deeply nested for the headless engine' };
+    expect(evaluateFormula(`=${Array(2000).fill('1').join('+')}`)).toEqual(expected);
+    // How deep the parser gets depends on the stack left to it (less in the CLI than under jest):
+    // 150 levels either evaluate or fail alone; 5,000 fail everywhere.
+    expect([1, expected]).toContainEqual(evaluateFormula(`=${'('.repeat(150)}1${')'.repeat(150)}`));
+    expect(evaluateFormula(`=${'('.repeat(5000)}1${')'.repeat(5000)}`)).toEqual(expected);
+  });
+
+  it('refuses a result of more than a million cells before reserving it', () => {
+    expect(evaluateFormula('=SEQUENCE(1048576,1)*SEQUENCE(1,16384)')).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringMatching(/^the formula gives 1,048,576×16,384 values/) });
+    expect(evaluateFormula('=SEQUENCE(1048576,4)')).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringMatching(/^the formula gives 1,048,576×4 values/) });
+  });
+});
+
 describe('blank and omitted optional arguments', () => {
   it('uses the default for an empty argument, a blank cell and an omitted argument alike', () => {
     build({
