@@ -1,10 +1,27 @@
 /**
  * Safe output files: never the input, never an existing file unless asked,
- * and never half-written (a temporary file in the same folder is renamed
- * into place only once complete).
+ * never anything but a regular file (a device, FIFO, socket or symbolic link
+ * is refused even with --force), never half-written (a temporary file in the
+ * same folder is renamed into place only once complete), and never with wider
+ * permissions than the file it replaces or, for a new file, the input.
  */
-import { randomBytes } from 'node:crypto';
-import { closeSync, existsSync, fsyncSync, linkSync, openSync, realpathSync, renameSync, rmSync, statSync, writeSync } from 'node:fs';
+import { createHash, randomBytes } from 'node:crypto';
+import {
+  closeSync,
+  existsSync,
+  fchmodSync,
+  fsyncSync,
+  linkSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  realpathSync,
+  renameSync,
+  rmSync,
+  statSync,
+  writeSync,
+  type Stats,
+} from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { CliFailure } from './failure';
 
@@ -23,10 +40,29 @@ export function resolveOutputPath(output: string): string {
     throw new CliFailure(`cannot write ${output}: folder ${folder} does not exist`);
   }
   const target = join(realpathSync(folder), basename(absolute));
-  if (existsSync(target) && statSync(target).isDirectory()) {
-    throw new CliFailure(`cannot write ${output}: it is a folder; give a file name`);
+  const existing = lstatOrUndefined(target);
+  if (existing?.isDirectory()) throw new CliFailure(`cannot write ${output}: it is a folder; give a file name`);
+  if (existing !== undefined && !existing.isFile()) {
+    throw new CliFailure(`cannot write ${output}: it is ${kindOf(existing)}, not a regular file; choose another -o file`);
   }
   return target;
+}
+
+function lstatOrUndefined(path: string): Stats | undefined {
+  try {
+    return lstatSync(path);
+  } catch {
+    return undefined;
+  }
+}
+
+/** What a non-regular directory entry is, for messages. */
+function kindOf(stats: Stats): string {
+  if (stats.isSymbolicLink()) return 'a symbolic link';
+  if (stats.isCharacterDevice() || stats.isBlockDevice()) return 'a device';
+  if (stats.isFIFO()) return 'a named pipe';
+  if (stats.isSocket()) return 'a socket';
+  return 'not a regular file';
 }
 
 /**
@@ -40,8 +76,14 @@ export function resolveOutputPath(output: string): string {
  * @returns the resolved output path
  */
 export function checkOutputAgainstInput(input: string, output: string, force: boolean): string {
-  const target = resolveOutputPath(output);
+  const absolute = resolve(output);
   const inputReal = realpathSync(input);
+  const linked = lstatOrUndefined(absolute);
+  // A link to the input is named as such (before the general refusal of links).
+  if (linked?.isSymbolicLink() && existsSync(absolute) && realpathSync(absolute) === inputReal) {
+    throw new CliFailure(`refusing to write over the input ${input}; choose another -o file`);
+  }
+  const target = resolveOutputPath(output);
   if (target === inputReal) throw new CliFailure(`refusing to write over the input ${input}; choose another -o file`);
   if (existsSync(target)) {
     const a = statSync(inputReal);
@@ -54,22 +96,85 @@ export function checkOutputAgainstInput(input: string, output: string, force: bo
   return target;
 }
 
+/** Leading part of every temporary name for an output: fixed length, so long output names still fit. */
+function temporaryPrefix(target: string): string {
+  const hash = createHash('sha256').update(basename(target)).digest('hex').slice(0, 16);
+  return `.driftcell-${hash}.`;
+}
+
+const TEMPORARY_NAME = /^\.driftcell-[0-9a-f]{16}\.(\d+)\.[0-9a-f]{8}\.tmp$/;
+
+/** Whether a process with this id is running (a temporary of a running write is not stale). */
+function processRuns(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (e) {
+    return (e as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/**
+ * Removes temporary files a killed earlier write for the same output left
+ * beside it (ours by name: the output's hash and a process id that no longer runs).
+ *
+ * @param target - resolved output path
+ * @returns how many were removed
+ */
+export function removeStaleTemporaries(target: string): number {
+  const prefix = temporaryPrefix(target);
+  let removed = 0;
+  for (const name of readdirSync(dirname(target))) {
+    const match = name.startsWith(prefix) ? TEMPORARY_NAME.exec(name) : null;
+    if (match === null || Number(match[1]) === process.pid || processRuns(Number(match[1]))) continue;
+    const path = join(dirname(target), name);
+    if (lstatOrUndefined(path)?.isFile()) {
+      rmSync(path, { force: true });
+      removed++;
+    }
+  }
+  return removed;
+}
+
+/**
+ * The permissions a written file gets: those of the regular file it replaces,
+ * else those of `modeFrom` (the input) without execute bits, else the usual
+ * 0666; never wider than the process umask allows for a new file.
+ */
+function outputMode(target: string, replace: boolean, modeFrom?: string): number {
+  const existing = replace ? lstatOrUndefined(target) : undefined;
+  if (existing?.isFile()) return existing.mode & 0o7777;
+  const umask = process.umask();
+  const base = modeFrom !== undefined ? statSync(modeFrom).mode & 0o666 : 0o666;
+  return base & ~umask;
+}
+
 /**
  * Writes bytes to a file atomically: readers see the old file or the whole
- * new one, never a part.
+ * new one, never a part. The temporary file is created readable by the owner
+ * only and given its final permissions (see outputMode) before it is renamed
+ * into place; stale temporaries of earlier killed writes are removed first.
  *
  * @param target - resolved output path
  * @param bytes - the file's content
- * @param replace - whether an existing file may be replaced; if false and one appears, the write fails
- * @throws CliFailure when `replace` is false and the file exists
+ * @param replace - whether an existing regular file may be replaced; if false and one appears, the write fails
+ * @param modeFrom - for a new file, the file whose permissions it takes (the input); default 0666 less umask
+ * @throws CliFailure when `replace` is false and the file exists, or when the target is not a regular file
  */
-export function writeFileAtomically(target: string, bytes: Uint8Array, replace: boolean): void {
-  const temporary = join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+export function writeFileAtomically(target: string, bytes: Uint8Array, replace: boolean, modeFrom?: string): void {
+  const existing = lstatOrUndefined(target);
+  if (existing !== undefined && !existing.isFile()) {
+    throw new CliFailure(`cannot write ${target}: it is ${kindOf(existing)}, not a regular file; choose another -o file`);
+  }
+  removeStaleTemporaries(target);
+  const mode = outputMode(target, replace, modeFrom);
+  const temporary = join(dirname(target), `${temporaryPrefix(target)}${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
   try {
-    const fd = openSync(temporary, 'wx');
+    const fd = openSync(temporary, 'wx', 0o600);
     try {
       // writeSync may write less than asked (a full disk, a signal): loop until every byte is down.
       for (let written = 0; written < bytes.length; ) written += writeSync(fd, bytes, written, bytes.length - written);
+      fchmodSync(fd, mode);
       fsyncSync(fd);
     } finally {
       closeSync(fd);
@@ -82,6 +187,11 @@ export function writeFileAtomically(target: string, bytes: Uint8Array, replace: 
   }
   try {
     if (replace) {
+      // Checked again just before the rename: only a regular file is ever replaced.
+      const now = lstatOrUndefined(target);
+      if (now !== undefined && !now.isFile()) {
+        throw new CliFailure(`cannot write ${target}: it is ${kindOf(now)}, not a regular file; choose another -o file`);
+      }
       renameSync(temporary, target);
       return;
     }

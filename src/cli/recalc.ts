@@ -81,7 +81,7 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   }
   // Checked again just before writing: the output may have appeared meanwhile.
   checkOutputAgainstInput(input, options.output, options.force);
-  writeFileAtomically(target, bytes, options.force);
+  writeFileAtomically(target, bytes, options.force, input);
   const { lines, notes } = describeSummary(summary, options.output);
   lines.forEach(output.out);
   notes.forEach(output.err);
