@@ -18,6 +18,7 @@ import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, Simple
 import { areaName, cellName, columnName } from './a1';
 import { ResultTooLarge, createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
+import { unevaluableReason } from './unevaluable';
 import { fileErrorText } from './errorTypes';
 import { MAX_PACKAGE_BYTES, PackageRejected, checkPackage } from './packageCheck';
 import { engineContent, fileValue, type FileValue, type StoredFormula } from './workbookCells';
@@ -180,12 +181,14 @@ interface SheetInput {
   readonly formulas: FormulaCell[];
   /** Cells that held an earlier spill's results. */
   readonly oldSpillCells: ExcelJS.Cell[];
+  /** The cells of each legacy array formula's range other than its anchor (a subset of oldSpillCells). */
+  readonly spillCellsOf: ReadonlyMap<FormulaCell, readonly ExcelJS.Cell[]>;
 }
 
 function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
   const content: RawCellContent[][] = [];
   const formulas: FormulaCell[] = [];
-  const oldSpills: { anchorRow: number; anchorColumn: number; box: Box }[] = [];
+  const oldSpills: { formula: FormulaCell; anchorRow: number; anchorColumn: number; box: Box }[] = [];
   worksheet.eachRow({ includeEmpty: false }, (row) => {
     row.eachCell({ includeEmpty: false }, (cell) => {
       const r = Number(cell.row);
@@ -196,14 +199,18 @@ function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
       if (cell.type === ExcelJS.ValueType.Formula) {
         const stored = cell.value as StoredFormula;
         const wasArray = stored.shareType === 'array';
-        formulas.push({ row: r, column: c, cell, stored: cell.formula, wasArray });
+        const formula: FormulaCell = { row: r, column: c, cell, stored: cell.formula, wasArray };
+        formulas.push(formula);
         const box = wasArray && stored.ref ? parseRange(stored.ref) : undefined;
-        if (box) oldSpills.push({ anchorRow: r, anchorColumn: c, box });
+        if (box) oldSpills.push({ formula, anchorRow: r, anchorColumn: c, box });
       }
     });
   });
   const oldSpillCells: ExcelJS.Cell[] = [];
-  for (const { anchorRow, anchorColumn, box } of oldSpills) {
+  const spillCellsOf = new Map<FormulaCell, ExcelJS.Cell[]>();
+  for (const { formula, anchorRow, anchorColumn, box } of oldSpills) {
+    const own: ExcelJS.Cell[] = [];
+    spillCellsOf.set(formula, own);
     for (let r = box.top; r <= box.bottom; r++) {
       for (let c = box.left; c <= box.right; c++) {
         if (r === anchorRow && c === anchorColumn) continue;
@@ -212,12 +219,13 @@ function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
         if (cell === undefined || cell.type === ExcelJS.ValueType.Formula || cell.type === ExcelJS.ValueType.Merge) continue;
         if (content[r - 1]) content[r - 1][c - 1] = null;
         oldSpillCells.push(cell);
+        own.push(cell);
       }
     }
   }
   // The engine wants every row present, even an empty one.
   for (let r = 0; r < content.length; r++) content[r] ??= [];
-  return { name: worksheet.name, worksheet, content, formulas, oldSpillCells };
+  return { name: worksheet.name, worksheet, content, formulas, oldSpillCells, spillCellsOf };
 }
 
 /** Workbook-level defined names that refer to one range, as engine expressions. */
@@ -263,11 +271,11 @@ function mergedCellsSpillError(): DetailedCellError {
  */
 export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
   const inputs = workbook.worksheets.map(readSheet);
-  const { engine, kept } = buildWorkbookEngine(inputs);
+  const { engine, kept } = buildWorkbookEngine(inputs, workbookNames(workbook));
   const keptCells = new Set([...kept.values()].map((k) => k.formula.cell));
+  // A kept legacy array formula keeps the cached values of its whole range.
+  const keptSpillCells = new Set(inputs.flatMap((input) => [...kept.keys()].flatMap((f) => input.spillCellsOf.get(f) ?? [])));
   try {
-    const names = workbookNames(workbook);
-    if (names.length > 0) addNames(engine, names);
 
     const arrays: ArrayFormulaPlacement[] = [];
     const problems: CellProblem[] = [];
@@ -277,7 +285,7 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
       }
     };
 
-    for (const input of inputs) input.oldSpillCells.forEach((cell) => (cell.value = null));
+    for (const input of inputs) input.oldSpillCells.forEach((cell) => keptSpillCells.has(cell) || (cell.value = null));
 
     for (const input of inputs) {
       const sheetId = engine.getSheetId(input.name);
@@ -342,47 +350,90 @@ function cachedContent(cell: ExcelJS.Cell): RawCellContent {
 }
 
 /**
- * Builds the engine over every sheet. A formula the engine's parser cannot
- * take without exhausting the call stack (a sum of thousands of terms, deep
- * nesting; still within Excel's own limits) is not evaluated: the engine gets
- * its cached value instead, and the cell is kept as the file had it, so the
- * rest of the workbook still recalculates. A result beyond MAX_RESULT_CELLS
- * refuses the workbook, naming the cell.
+ * Builds the engine over every sheet, with the workbook's names. Two kinds of
+ * formula are not evaluated: one the engine cannot take without exhausting
+ * the call stack (a sum of thousands of terms, deep nesting; still within
+ * Excel's own limits), and one whose engine value is the engine's own
+ * shortcoming (unevaluable.ts: INDIRECT, LET, table references …). The engine
+ * gets the cached value instead and the cell is kept as the file had it, so
+ * its dependents and the rest of the workbook still recalculate. A result
+ * beyond MAX_RESULT_CELLS refuses the workbook, naming the cell.
  */
-function buildWorkbookEngine(inputs: readonly SheetInput[]): { engine: HyperFormula; kept: Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }> } {
+function buildWorkbookEngine(inputs: readonly SheetInput[], names: { name: string; expression: string }[]): { engine: HyperFormula; kept: Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }> } {
   const kept = new Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }>();
   const sheets = () => Object.fromEntries(inputs.map((input) => [input.name, input.content]));
-  for (let attempt = 0; ; attempt++) {
+  const keep = (input: SheetInput, formula: FormulaCell, reason: string) => {
+    input.content[formula.row - 1][formula.column - 1] = cachedContent(formula.cell);
+    for (const cell of input.spillCellsOf.get(formula) ?? []) {
+      (input.content[Number(cell.row) - 1] ??= [])[Number(cell.col) - 1] = engineContent(cell);
+    }
+    kept.set(formula, { sheet: input.name, formula, reason });
+  };
+  let overflowHandled = false;
+  // Each round keeps the cells that arise as the engine's shortcomings; their dependents then
+  // calculate from the cached values. A kept cell fed by another kept cell shows up a round later.
+  for (let round = 0; ; round++) {
+    let engine: HyperFormula;
     try {
-      return { engine: createEngine(sheets()), kept };
+      engine = createEngine(sheets());
+      if (names.length > 0) addNames(engine, names);
     } catch (e) {
       if (e instanceof ResultTooLarge) {
         const sheet = inputs[e.address.sheet]?.name ?? '?';
         throw new WorkbookReadError(`too large to recalculate (sheet "${sheet}": ${e.message})`);
       }
-      if (!(e instanceof RangeError) || attempt > 0) throw e;
-      // Find the formulas that overflow on their own (parsing or evaluating them over empty sheets
-      // of the same names) and give the engine their cached values instead.
-      const probe = createEngine(Object.fromEntries(inputs.map((input) => [input.name, []])));
-      try {
-        for (const [index, input] of inputs.entries()) {
-          for (const formula of input.formulas) {
-            const text = input.content[formula.row - 1]?.[formula.column - 1];
-            if (typeof text !== 'string' || !text.startsWith('=')) continue;
-            try {
-              probe.calculateFormula(text, index);
-            } catch (inner) {
-              if (!(inner instanceof RangeError)) continue;
-              input.content[formula.row - 1][formula.column - 1] = cachedContent(formula.cell);
-              kept.set(formula, { sheet: input.name, formula, reason: 'the formula is too long or too deeply nested for the headless engine' });
-            }
-          }
-        }
-      } finally {
-        probe.destroy();
-      }
-      if (kept.size === 0) throw e;
+      if (!(e instanceof RangeError) || overflowHandled) throw e;
+      overflowHandled = true;
+      const before = kept.size;
+      keepOverflowingFormulas(inputs, keep);
+      if (kept.size === before) throw e;
+      continue;
     }
+    const before = kept.size;
+    for (const [sheet, input] of inputs.entries()) {
+      for (const formula of input.formulas) {
+        if (kept.has(formula)) continue;
+        const text = input.content[formula.row - 1]?.[formula.column - 1];
+        if (typeof text !== 'string' || !text.startsWith('=')) continue;
+        const value = engine.getCellValue({ sheet, row: formula.row - 1, col: formula.column - 1 });
+        const reason = unevaluableReason(engine, value, text);
+        if (reason !== undefined && !cachedIsSameError(formula.cell, value)) keep(input, formula, reason);
+      }
+    }
+    if (kept.size === before || round >= MAX_KEEP_ROUNDS) return { engine, kept };
+    engine.destroy();
+  }
+}
+
+/** Rounds of keeping before the engine is taken as it is (kept cells fed by kept cells, nested this deep). */
+const MAX_KEEP_ROUNDS = 8;
+
+/** Whether the file's cached value is already the error the engine gives (then recalculating changes nothing). */
+function cachedIsSameError(cell: ExcelJS.Cell, value: CellValue): boolean {
+  const result = (cell.value as ExcelJS.CellFormulaValue).result;
+  return value instanceof DetailedCellError && typeof result === 'object' && result !== null && 'error' in result && result.error === value.value;
+}
+
+/**
+ * Finds the formulas that overflow the engine's stack on their own (parsing
+ * or evaluating them over empty sheets of the same names) and keeps them.
+ */
+function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: SheetInput, formula: FormulaCell, reason: string) => void): void {
+  const probe = createEngine(Object.fromEntries(inputs.map((input) => [input.name, []])));
+  try {
+    for (const [index, input] of inputs.entries()) {
+      for (const formula of input.formulas) {
+        const text = input.content[formula.row - 1]?.[formula.column - 1];
+        if (typeof text !== 'string' || !text.startsWith('=')) continue;
+        try {
+          probe.calculateFormula(text, index);
+        } catch (inner) {
+          if (inner instanceof RangeError) keep(input, formula, 'the formula is too long or too deeply nested for the headless engine');
+        }
+      }
+    }
+  } finally {
+    probe.destroy();
   }
 }
 
