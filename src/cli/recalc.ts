@@ -31,7 +31,7 @@ export function describeSummary(summary: RecalcSummary, written: string): { line
   const lines = [
     `wrote ${written}: ${plural(summary.sheets.length, 'sheet')}, ${plural(summary.formulas, 'formula')}, ${plural(spills, 'spilled result')}`,
   ];
-  const notes: string[] = [];
+  const notes: string[] = [...summary.notices];
   if (summary.kept.length > 0) {
     notes.push(`${plural(summary.kept.length, 'formula cell')} kept as the file had ${summary.kept.length === 1 ? 'it' : 'them'} (formula and cached value, not recalculated):`);
     for (const kept of summary.kept.slice(0, LISTED_PROBLEMS)) notes.push(`  ${quotedSheet(kept.sheet)}!${kept.address}: ${kept.reason}`);
@@ -56,6 +56,10 @@ export function describeSummary(summary: RecalcSummary, written: string): { line
 export async function runRecalc(input: string, options: RecalcOptions, output: Output): Promise<number> {
   if (!existsSync(input)) throw new CliFailure(`${input}: no such file`);
   if (!statSync(input).isFile()) throw new CliFailure(`${input} is not a file`);
+  if (!/\.xlsx$/i.test(options.output)) {
+    // An .xlsm name on a package without macros would mislead Excel and the user alike.
+    throw new CliFailure(`recalc writes .xlsx workbooks (macros are not carried); give an -o name ending in .xlsx, not ${options.output}`);
+  }
   const target = checkOutputAgainstInput(input, options.output, options.force);
   let summary: RecalcSummary;
   let bytes: Buffer;

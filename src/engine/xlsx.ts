@@ -18,6 +18,7 @@ import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, Simple
 import { areaName, cellName, columnName } from './a1';
 import { ResultTooLarge, createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
+import { ForeignPackageRefused, preparePackage, type PreparedPackage } from './foreignPackages';
 import { unevaluableReason } from './unevaluable';
 import { fileErrorText } from './errorTypes';
 import { MAX_PACKAGE_BYTES, PackageRejected, checkPackage } from './packageCheck';
@@ -66,6 +67,8 @@ export interface RecalcSummary {
   readonly formulas: number;
   /** Formula cells not recalculated: they keep the formula and cached value the file had. */
   readonly kept: readonly KeptCell[];
+  /** What the written copy lacks that the file had (charts, pivot tables, macros), one line each. */
+  readonly notices: readonly string[];
   readonly arrays: readonly ArrayFormulaPlacement[];
   readonly problems: readonly CellProblem[];
 }
@@ -123,8 +126,18 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
     throw e;
   }
   const workbook = new ExcelJS.Workbook();
+  let prepared: PreparedPackage;
   try {
-    await workbook.xlsx.load(bytes as unknown as ExcelJS.Buffer);
+    prepared = await preparePackage(bytes);
+  } catch (e) {
+    if (e instanceof ForeignPackageRefused) throw new WorkbookReadError(`cannot be recalculated: ${e.message}`);
+    const detail = e instanceof Error ? e.message.split('\n')[0] : String(e);
+    const reason = /central directory|zip/i.test(detail) ? 'it is not a zip package' : detail;
+    throw new WorkbookReadError(`not an .xlsx workbook (${reason})`);
+  }
+  const notices = [...prepared.notices];
+  try {
+    await quietly(() => workbook.xlsx.load(prepared.bytes as unknown as ExcelJS.Buffer), notices);
   } catch (e) {
     const detail = e instanceof Error ? e.message.split('\n')[0] : String(e);
     // The zip reader's own wording ends in a link to its manual; say plainly what it means instead.
@@ -132,7 +145,50 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
     throw new WorkbookReadError(`not an .xlsx workbook (${reason})`);
   }
   if (workbook.worksheets.length === 0) throw new WorkbookReadError('not an .xlsx workbook (it has no worksheets)');
+  giveTablesAStyle(workbook);
+  NOTICES.set(workbook, notices);
   return workbook;
+}
+
+/** What reading a workbook found the copy will lack (charts, pivot tables, macros), one line each. */
+const NOTICES = new WeakMap<ExcelJS.Workbook, string[]>();
+
+/**
+ * The notices for a workbook read by loadWorkbook.
+ *
+ * @example workbookNotices(workbook) // ['sheet "Data": 1 chart not carried into the copy']
+ */
+export function workbookNotices(workbook: ExcelJS.Workbook): readonly string[] {
+  return NOTICES.get(workbook) ?? [];
+}
+
+/** Runs exceljs with its console warnings turned into notices instead of reaching the terminal. */
+async function quietly<T>(run: () => Promise<T>, notices: string[]): Promise<T> {
+  const { warn, log } = console;
+  const capture = (...parts: unknown[]) => notices.push(`reading the workbook: ${parts.map(String).join(' ')}`);
+  console.warn = capture;
+  console.log = capture;
+  try {
+    return await run();
+  } finally {
+    console.warn = warn;
+    console.log = log;
+  }
+}
+
+/**
+ * A table without <tableStyleInfo> (LibreOffice writes them so) reads as
+ * style null, on which exceljs's writer fails; give it the plain style the
+ * missing element means (no stripes, no emphasised columns).
+ */
+function giveTablesAStyle(workbook: ExcelJS.Workbook): void {
+  for (const worksheet of workbook.worksheets) {
+    for (const table of Object.values((worksheet as unknown as { tables: Record<string, { table?: { style?: unknown } }> }).tables ?? {})) {
+      if (table.table !== undefined && (table.table.style === null || table.table.style === undefined)) {
+        table.table.style = { theme: null, showFirstColumn: false, showLastColumn: false, showRowStripes: false, showColumnStripes: false };
+      }
+    }
+  }
 }
 
 /**
@@ -329,6 +385,7 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
     return {
       sheets: inputs.map((input) => input.name),
       formulas: inputs.reduce((n, input) => n + input.formulas.length, 0),
+      notices: workbookNotices(workbook),
       kept: [...kept.values()].map(({ sheet, formula, reason }) => ({ sheet, address: cellAddress(formula.row, formula.column), reason })),
       arrays,
       problems,
