@@ -62,6 +62,8 @@ export {
 export {
   RESISTIVITY_MODEL_CODES,
   ALL_RESISTIVITY_MODEL_CODES,
+  F723_ANCHORED_CODE,
+  anchoredResistivity,
   resistivityModelCodes,
   conductivity,
   resistivity,
