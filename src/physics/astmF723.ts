@@ -53,12 +53,12 @@ interface Interval {
  * 1e12 … 5e20 cm⁻³); the density exponents were read in the Spanish summary
  * (kpt-bj.org) where the English excerpt lost them. Arsenic: F723 §1.1 gives
  * its own conversion for 1e19 … 6e20 cm⁻³ (same summary; the same range in the
- * mirkov transcription); its resistivity range is the image of that range.
+ * mirkov transcription); its resistivity range is that range's image, rounded inwards.
  */
 export const F723_VALIDITY: Readonly<Record<F723Species, { density: Interval; resistivity: Interval }>> = {
   B: { density: { min: 1e12, max: 1e21 }, resistivity: { min: 1e-4, max: 1e4 } },
   P: { density: { min: 1e12, max: 5e20 }, resistivity: { min: 2e-4, max: 4e3 } },
-  As: { density: { min: 1e19, max: 6e20 }, resistivity: { min: 2.6e-4, max: 5.6e-3 } },
+  As: { density: { min: 1e19, max: 6e20 }, resistivity: { min: 2.7e-4, max: 5.5e-3 } },
 };
 
 /**
