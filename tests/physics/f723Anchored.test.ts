@@ -13,7 +13,7 @@
  * equations to rounding, so the test also shows the margin; F723's own
  * self-consistency (3 % B, 4.5 % P, §1.2) is the accuracy it claims.
  */
-import { SILICON, resolveDopant, resistivity, dopingForResistivity, temperatureCoefficient } from '../../src/physics';
+import { SILICON, resolveDopant, resistivity, dopingForResistivity, resistivityTemperatureCoefficient as temperatureCoefficient } from '../../src/physics';
 import type { Sample } from '../../src/physics/sample';
 
 const T23 = 296.15; // 23 °C, F723 §1.1
