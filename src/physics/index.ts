@@ -62,6 +62,8 @@ export {
 export {
   RESISTIVITY_MODEL_CODES,
   ALL_RESISTIVITY_MODEL_CODES,
+  F723_ANCHORED_CODE,
+  anchoredResistivity,
   resistivityModelCodes,
   conductivity,
   resistivity,
@@ -85,6 +87,7 @@ export {
 export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
 export { dopingForResistivity } from './inverse';
 export { f723Resistivity, f723Density, type F723Species } from './astmF723';
+export { F723_ANCHOR_TEMPERATURE } from './f723Anchored';
 
 // Geometry of uniform conductors.
 export { CM_PER_UM, sheetResistance, resistorValue } from './geometry';

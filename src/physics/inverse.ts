@@ -19,12 +19,14 @@
  * density, whose ρ barely depends on N, and not the degenerate density above
  * the Mott transition). At 300 K, ρ(N) is monotone over 1e12–1e22 cm⁻³ and the
  * rule is moot. Targets outside the reachable range are reported with it.
- * For 'astm-f723' the standard's own reverse equation is used.
+ * For 'astm-f723' the standard's own reverse equation is used; for
+ * 'f723-anchored' the forward model searched is the one anchored to that
+ * reverse equation (transport.anchoredResistivity(…, 'reverse')).
  */
 import type { Sample } from './sample';
 import { findRoot } from './solve';
 import { PhysicsDomainError } from './errors';
-import { resistivity, resolveResistivityModel, ASTM_F723_CODE } from './transport';
+import { anchoredResistivity, resistivity, resolveResistivityModel, ASTM_F723_CODE, F723_ANCHORED_CODE } from './transport';
 import { f723Density, f723SpeciesFor } from './astmF723';
 
 /**
@@ -124,7 +126,7 @@ function locateMaximum(g: (u: number) => number, a: number, b: number): { u: num
  *
  * @param target - resistivity, Ω·cm (finite, > 0)
  * @param sample - material, temperature, dopant and counterDensity (density is the unknown)
- * @param model - resistivity model code (default 'masetti'; 'astm-f723' uses the standard's reverse equation)
+ * @param model - resistivity model code (silicon's default 'f723-anchored', anchored to F723's reverse equation; 'astm-f723' uses that equation itself)
  * @returns { density in cm⁻³, iterations }
  * @throws PhysicsDomainError when the target is out of the reachable range (the message gives the range)
  * @example dopingForResistivity(1, { material: SILICON, temperature: 300, dopant: boron, counterDensity: 0 }) // ≈ 1.5e16 cm⁻³
@@ -143,6 +145,9 @@ export function dopingForResistivity(
     return { density: f723Density(species, target), iterations: 0 };
   }
 
+  // 'f723-anchored' inverts the form anchored to F723's reverse equation (f723Anchored.ts).
+  const forward = (probe: Sample): number =>
+    code === F723_ANCHORED_CODE ? anchoredResistivity(probe, 'reverse') : resistivity(probe, code);
   const counter = sample.counterDensity;
   const maxNet = NET_DENSITY_SEARCH.maxTotal - counter;
   if (!(maxNet > NET_DENSITY_SEARCH.min)) {
@@ -154,7 +159,7 @@ export function dopingForResistivity(
   const densityOf = (u: number): number => counter + Math.exp(u);
   const logTarget = Math.log(target);
   // Positive where the sample is more resistive than the target.
-  const excess = (u: number): number => Math.log(resistivity({ ...sample, density: densityOf(u) }, code)) - logTarget;
+  const excess = (u: number): number => Math.log(forward({ ...sample, density: densityOf(u) })) - logTarget;
   const solveBetween = (a: number, b: number): DopingSolution => {
     const { root, iterations } = findRoot(excess, a, b, { xTolerance: LOG_DENSITY_TOLERANCE });
     return { density: densityOf(root), iterations };
@@ -177,7 +182,7 @@ export function dopingForResistivity(
     grid.push(u);
     let logResistivity = scanned[i];
     if (Number.isNaN(logResistivity)) {
-      logResistivity = Math.log(resistivity({ ...sample, density: densityOf(u) }, code));
+      logResistivity = Math.log(forward({ ...sample, density: densityOf(u) }));
       scanned[i] = logResistivity;
     }
     // The same operations as excess(u), so the values are identical.

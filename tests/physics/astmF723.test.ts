@@ -39,8 +39,9 @@ describe('f723Resistivity', () => {
     for (const n of [density.min, density.max]) expect(f723Density(species, f723Resistivity(species, n))).toBeGreaterThan(0);
   });
 
-  it('rejects species other than B and P', () => {
-    expect(() => f723Resistivity('As' as 'B', 1e16)).toThrow(/boron and phosphorus only/);
+  it('rejects species other than B, P and As (F723-99 §1.1 gives arsenic its own conversion, 1e19–6e20 cm⁻³)', () => {
+    expect(() => f723Resistivity('Sb' as 'B', 1e16)).toThrow(/boron, phosphorus and arsenic only/);
+    expect(() => f723Resistivity('As', 1e18)).toThrow(/1\.00e\+19…6\.00e\+20/);
   });
 });
 
@@ -65,8 +66,8 @@ describe('f723SpeciesFor', () => {
     expect(f723SpeciesFor('P', 0, F723_TEMPERATURE_RANGE.min)).toBe('P');
     expect(f723SpeciesFor('P', 0, F723_TEMPERATURE_RANGE.max)).toBe('P');
   });
-  it('rejects other dopants, listing B and P', () => {
-    expect(() => f723SpeciesFor('As', 0, 300)).toThrow(/Allowed: B, P/);
+  it('rejects other dopants, listing B, P and As', () => {
+    expect(() => f723SpeciesFor('Sb', 0, 300)).toThrow(/Allowed: B, P, As/);
     expect(() => f723SpeciesFor('n', 0, 300)).toThrow(PhysicsDomainError);
   });
   it('rejects counter-doping and says what to use instead', () => {

@@ -1,5 +1,6 @@
 import { dopingWindow, resolveDopant, SILICON } from '../../physics';
-import { dopant, temperature } from '../common';
+import { dopant, resistivityModel, temperature } from '../common';
+import { RESISTIVITY_MODELS } from '../citedModels';
 import { requiredNumber } from '../parameters';
 import { tupleFunction } from '../types';
 
@@ -10,7 +11,7 @@ function resistivityBound(name: string, what: string) {
 export const DOPINGRANGE = tupleFunction({
   name: 'DOPINGRANGE',
   summary: 'Doping window [at ρmax, at ρmin] of a wafer certificate’s resistivity window, spilled as one row, in cm⁻³.',
-  help: `Converts a resistivity window, as a wafer certificate states it, into the matching window of dopant density. It spills one row of two values: the density at resistivity_max (the lower density) and the density at resistivity_min (the higher one), so the row reads low to high. Each value is exactly what DRIFT.DOPING gives for that resistivity with the default model, in silicon, without counter-doping.
+  help: `Converts a resistivity window, as a wafer certificate states it, into the matching window of dopant density. It spills one row of two values: the density at resistivity_max (the lower density) and the density at resistivity_min (the higher one), so the row reads low to high. Each value is exactly what DRIFT.DOPING gives for that resistivity with the same model (blank: silicon's default f723-anchored), in silicon, without counter-doping. With the default model and temperature 296.15 K (23 °C, the temperature certificates refer to) the window is ASTM F723's own N-from-ρ conversion for B and P; at other temperatures the physics model carries the temperature dependence. Model astm-f723 gives the standard literally (B, P, As; 290–305 K).
 
 Given columns of windows, it spills one row per window. resistivity_min above resistivity_max is an error.
 
@@ -22,12 +23,15 @@ Cautions: a certificate's resistivity is measured (usually by four-point probe a
     resistivityBound('resistivity_max', 'High end'),
     dopant,
     temperature,
+    resistivityModel,
   ] as const,
   examples: [
     { formula: '=DRIFT.DOPINGRANGE(8,12,"B")', note: 'a 8–12 Ω·cm boron wafer: two densities in a row' },
     { formula: '=DRIFT.DOPINGRANGE({1;0.005},{3;0.02},{"P";"Sb"})', note: 'two certificates, one window per row' },
+    { formula: '=DRIFT.DOPINGRANGE(8,12,"B",296.15)', note: 'at 23 °C: the ASTM F723 window' },
+    { formula: '=DRIFT.DOPINGRANGE(8,12,"B",,"masetti")', note: 'the same window from the Masetti physics alone' },
   ],
-  models: ['masetti'],
-  compute: (rhoMin, rhoMax, dopantCode, temperatureK) =>
-    dopingWindow(rhoMin, rhoMax, { material: SILICON, temperature: temperatureK, dopant: resolveDopant(SILICON, dopantCode), counterDensity: 0 }),
+  models: RESISTIVITY_MODELS,
+  compute: (rhoMin, rhoMax, dopantCode, temperatureK, model) =>
+    dopingWindow(rhoMin, rhoMax, { material: SILICON, temperature: temperatureK, dopant: resolveDopant(SILICON, dopantCode), counterDensity: 0 }, model),
 });

@@ -6,6 +6,7 @@
  * builds elements and reads them back.
  */
 import { findFunction } from '../../catalog';
+import { F723_ANCHOR_TEMPERATURE } from '../../physics';
 import { columnName, sheetAddress, type CellBlock } from '../port';
 import type { ToolContext } from '../tool';
 import { parameterNamed } from '../reference/callText';
@@ -73,7 +74,9 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const neededMax = element(doc, 'input', { type: 'text', id: `${ID}-needed-max`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 2e15' });
   const windowRule = selectOf(doc, `${ID}-window-rule`, WINDOW_RULES, WINDOW_RULES[0][0]);
   const temperature = element(doc, 'input', { type: 'text', id: `${ID}-temperature`, inputmode: 'decimal', autocomplete: 'off' });
-  const defaultTemperature = parameterNamed(findFunction('DOPING')!, 'temperature_K').defaultText ?? '';
+  // Certificates state resistivity at 23 °C (the temperature of ASTM F723 and F84), so the check starts
+  // there rather than at DRIFT.DOPING's blank 300 K; the default model then gives F723's own numbers.
+  const defaultTemperature = String(F723_ANCHOR_TEMPERATURE);
   temperature.value = defaultTemperature;
   const models = dopingChoices('model');
   const modelSelect = selectOf(doc, `${ID}-model`, [['', models.defaultCode], ...models.codes.map((code) => [code, code] as const)], '');

@@ -31,7 +31,7 @@ describe('resistivity model codes per material', () => {
 
   it('defaults to the material’s mobility fit and refuses astm-f723 outside silicon, naming what is supported', () => {
     expect(resolveResistivityModel('', GALLIUM_ARSENIDE)).toBe('sotoodeh');
-    expect(resolveResistivityModel(undefined)).toBe('masetti');
+    expect(resolveResistivityModel(undefined)).toBe('f723-anchored');
     expect(() => resistivity(sample(GALLIUM_ARSENIDE, 'Zn', 1e17), 'astm-f723')).toThrow(
       /resistivity model 'astm-f723' has parameters for silicon only; gallium arsenide supports: sotoodeh/,
     );

@@ -58,7 +58,7 @@ describe('default model (Masetti + incomplete ionization + THE TRAP resolution) 
   // Tolerances are those deviations rounded up: "a few percent" holds below
   // 1e17 (B) / 1e18 (P); near the Mott transition and above, the two
   // published relations differ by about 10 %.
-  const tolerances: Record<F723Species, Array<[number, number, number]>> = {
+  const tolerances: Partial<Record<F723Species, Array<[number, number, number]>>> = {
     B: [
       [13, 16, 0.02],
       [16, 17, 0.035],
