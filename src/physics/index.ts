@@ -55,8 +55,12 @@ export {
   ALL_MOBILITY_MODEL_CODES,
   mobilityModelCodes,
   defaultMobilityModel,
+  defaultMobilityModelFor,
+  defaultMinorityMobilityModel,
+  SILICON_MINORITY_MOBILITY_MODEL,
   fitMobility,
   mobility,
+  freeCarrierMobility,
   diffusivity,
 } from './mobility';
 export {

@@ -5,7 +5,7 @@ import {
   resistivity,
   resolveResistivityModel,
 } from '../../src/physics/transport';
-import { MOBILITY_MODEL_CODES, fitMobility, mobility } from '../../src/physics/mobility';
+import { MOBILITY_MODEL_CODES, fitMobility, freeCarrierMobility } from '../../src/physics/mobility';
 import { solveEquilibrium } from '../../src/physics/equilibrium';
 import { intrinsicDensity } from '../../src/physics/bands';
 import { sampleDopants } from '../../src/physics/sample';
@@ -39,7 +39,7 @@ describe('conductivity', () => {
         const eq = solveEquilibrium(sample.material, sample.temperature, sampleDopants(sample));
         const expected =
           ELEMENTARY_CHARGE *
-          (eq.electrons * mobility(model, 'electron', sample) + eq.holes * mobility(model, 'hole', sample));
+          (eq.electrons * freeCarrierMobility(model, 'electron', sample) + eq.holes * freeCarrierMobility(model, 'hole', sample));
         expect(conductivity(sample, model)).toBe(expected);
         expect(resistivity(sample, model)).toBe(1 / expected);
       }
@@ -87,7 +87,7 @@ describe('temperature behaviour (from the same equations, no special cases)', ()
     for (const dopant of ['B', 'P']) {
       const sample = siliconSample(dopant, 1e16, 77);
       const majority = dopant === 'B' ? 'hole' : 'electron';
-      const fullyIonized = 1 / (ELEMENTARY_CHARGE * 1e16 * mobility('masetti', majority, sample));
+      const fullyIonized = 1 / (ELEMENTARY_CHARGE * 1e16 * fitMobility('masetti', majority, sample));
       expect(resistivity(sample)).toBeGreaterThan(2 * fullyIonized);
     }
     // Deeper into freeze-out the resistivity rises steeply as temperature falls.

@@ -3,9 +3,13 @@
  *
  *   J = q·(n·v_n(E) + p·v_p(E)),
  *
- * with n, p from the equilibrium solve and v_n, v_p the Caughey–Thomas drift
- * velocities of driftVelocity.ts (same μ0 as DRIFT.MOBILITY, computed once for both carriers), so J → σ·E as
- * E → 0. Both carriers drift so that their current follows E.
+ * with n, p from the equilibrium solve and v_n, v_p the Caughey–Thomas law of
+ * driftVelocity.ts evaluated at the free-carrier mobility μ0 of each carrier
+ * (driftMobilities: the same model for both, as conductivity uses), so J → σ·E
+ * as E → 0 and |J| → q(n·v_sat,n + p·v_sat,p) at high field. (DRIFT.VELOCITY
+ * uses the published mobility; for the silicon fits' majority carriers the two
+ * differ by the 300 K ionized-share factor.) Both carriers drift so that their
+ * current follows E.
  */
 import type { Carrier, Sample } from '../sample';
 import { sampleDopants } from '../sample';
