@@ -19,7 +19,7 @@ const fieldDependence = codeParameter<FieldDependence>({
 export const CURRENTDENSITY = elementwise({
   name: 'CURRENTDENSITY',
   summary: 'Drift current density J = q(n·vn + p·vp) with velocity saturation (or σE), in A/cm².',
-  help: `Returns the drift current density in a uniform field. By default (field_dependence "saturating") J = q(n·vn(E) + p·vp(E)), with n and p as DRIFT.ELECTRONS and DRIFT.HOLES give them and vn, vp exactly as DRIFT.VELOCITY returns them (Caughey–Thomas velocity–field relation with the material's saturation velocity). As E → 0 this equals σ·E with σ from DRIFT.CONDUCTIVITY, with the low-field shortfall DRIFT.VELOCITY describes; in 1e16 cm⁻³ n-type Si it is about half at 1e4 V/cm.
+  help: `Returns the drift current density in a uniform field. By default (field_dependence "saturating") J = q(n·vn(E) + p·vp(E)), with n and p as DRIFT.MAJORITY and DRIFT.MINORITY give them and vn, vp from the Caughey–Thomas velocity–field relation of DRIFT.VELOCITY with the material's saturation velocity. Its low-field mobilities are DRIFT.FREEMOBILITY's, with the one model DRIFT.CONDUCTIVITY uses for a blank model, for both carriers, so that J tends to the ohmic form σ·E at low field (with the shortfall DRIFT.VELOCITY describes; in 1e16 cm⁻³ n-type Si it is about half at 1e4 V/cm) and saturates at q(n·vsat,n + p·vsat,p). DRIFT.VELOCITY itself uses the published DRIFT.MOBILITY, so for a Si majority carrier J/(q·n) is up to about 1.3× DRIFT.VELOCITY at low field (near 1e18 cm⁻³).
 
 With field_dependence "ohmic" it returns J = σ·E = q(n·μn + p·μp)·E (Ohm's law, no saturation); that form is valid only while drift velocities stay well below saturation.
 
