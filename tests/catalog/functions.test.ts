@@ -3,7 +3,8 @@
  * that must hold exactly, defaults, and the messages bad input gets.
  */
 import { CATALOG, evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
-import { ELEMENTARY_CHARGE, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
+import { ELEMENTARY_CHARGE, MOBILITY_MODEL_CODES, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
+import { resolveResistivityModel } from '../../src/physics/transport';
 import { message, value } from './support/call';
 
 
@@ -17,14 +18,39 @@ describe('identities between catalog functions (definitions: common practice, no
     [1e14, 'B', 600, 0],
   ];
 
-  it.each(cases)('σ = q(n·μn + p·μp) for %s cm⁻³ %s at %s K (counter %s)', (doping, dopant, t, counter) => {
+  // CONDUCTIVITY = q(MAJORITY·FREEMOBILITY(majority) + MINORITY·FREEMOBILITY(minority)) for the same named
+  // model (FREEMOBILITY's help); a blank CONDUCTIVITY is its default model for both carriers.
+  it.each(cases)('σ = q(n·μn,free + p·μp,free) for %s cm⁻³ %s at %s K (counter %s), every silicon model and the blank default', (doping, dopant, t, counter) => {
     const majority = value('MAJORITY', doping, dopant, t, null, counter);
     const minority = value('MINORITY', doping, dopant, t, null, counter);
-    const muMajority = value('MOBILITY', doping, dopant, t, 'majority', null, null, counter);
-    const muMinority = value('MOBILITY', doping, dopant, t, 'minority', null, null, counter);
-    const sigma = value('CONDUCTIVITY', doping, dopant, t, null, null, counter);
-    expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
-    expect(value('RESISTIVITY', doping, dopant, t, null, null, counter) * sigma).toBeCloseTo(1, 12);
+    for (const model of [...MOBILITY_MODEL_CODES, null]) {
+      const mobilityModel = model ?? resolveResistivityModel('');
+      const muMajority = value('FREEMOBILITY', doping, dopant, t, 'majority', mobilityModel, null, counter);
+      const muMinority = value('FREEMOBILITY', doping, dopant, t, 'minority', mobilityModel, null, counter);
+      const sigma = value('CONDUCTIVITY', doping, dopant, t, model, null, counter);
+      expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
+      expect(value('RESISTIVITY', doping, dopant, t, model, null, counter) * sigma).toBeCloseTo(1, 12);
+    }
+  });
+
+  it.each(cases)('FREEMOBILITY = MOBILITY for the minority carrier (%s cm⁻³ %s at %s K, counter %s), any model', (doping, dopant, t, counter) => {
+    for (const model of [...MOBILITY_MODEL_CODES, null]) {
+      expect(value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter)).toBe(value('MOBILITY', doping, dopant, t, 'minority', model, null, counter));
+    }
+  });
+
+  it('FREEMOBILITY = MOBILITY for both carriers with the Ge, GaAs and 4H-SiC fits', () => {
+    for (const [material, dopant] of [['Ge', 'Sb'], ['Ge', 'Ga'], ['GaAs', 'Si'], ['GaAs', 'Zn'], ['4H-SiC', 'N'], ['4H-SiC', 'Al']] as const) {
+      for (const role of ['majority', 'minority']) {
+        expect(value('FREEMOBILITY', 1e17, dopant, 300, role, null, material)).toBe(value('MOBILITY', 1e17, dopant, 300, role, null, material));
+      }
+    }
+  });
+
+  it('FREEMOBILITY = MOBILITY × N_net/n(300 K) for a silicon majority carrier (1.31 for 1e18 cm⁻³ B, FREEMOBILITY’s help)', () => {
+    const ratio = value('FREEMOBILITY', 1e18, 'B') / value('MOBILITY', 1e18, 'B');
+    expect(ratio).toBeCloseTo(1e18 / value('MAJORITY', 1e18, 'B'), 10);
+    expect(ratio).toBeCloseTo(1.31, 2);
   });
 
   // Generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) (Sze & Ng 2007, ch. 1; from memory): the
