@@ -21,7 +21,7 @@ Use it for hand calculations with Driftcell's carrier densities (σ, drift curre
   parameters: [doping, dopant, temperature, carrier, mobilityModel, material, counterDoping] as const,
   examples: [
     { formula: '=DRIFT.FREEMOBILITY(1e18,"B")', note: 'holes in 1e18 cm⁻³ B-doped Si: about 210, where Masetti’s published value is 160' },
-    { formula: '=DRIFT.FREEMOBILITY(1e16,"P",300,,"masetti")*DRIFT.MAJORITY(1e16,"P")*1.602176634E-19', note: 'the majority term of DRIFT.CONDUCTIVITY(1e16,"P",,"masetti")' },
+    { formula: '=DRIFT.FREEMOBILITY(1e19,"B",300,"minority")', note: 'minority electrons in p+ Si: equal to DRIFT.MOBILITY (klaassen, the blank choice)' },
   ],
   models: [...MOBILITY_MODELS, ...EQUILIBRIUM_MODELS],
   compute: (density, dopantCode, temperatureK, role, model, materialValue, counter) => {
