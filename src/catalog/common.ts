@@ -8,6 +8,8 @@ import {
   dopantCodes,
   intrinsicModelCodes,
   mobilityModelCodes,
+  defaultMobilityModel,
+  SILICON_MINORITY_MOBILITY_MODEL,
   resistivityModelCodes,
   carrierFor,
   genericDopant,
@@ -117,13 +119,20 @@ export const counterDoping = optionalNumber({
   max: MAX_DENSITY,
 });
 
-export const carrier = codeParameter<CarrierRole>({
-  name: 'carrier',
-  description: 'Which carrier: majority (the type the dopant supplies), minority, electron or hole; blank means majority.',
-  choices: () => CARRIER_ROLES,
-  defaultCode: 'majority',
-  resolve: (code) => code as CarrierRole,
-});
+export const carrier: ParameterSpec<CarrierRole> = {
+  ...codeParameter<CarrierRole>({
+    name: 'carrier',
+    description: 'Which carrier: majority (the type the dopant supplies), minority, electron or hole; blank means majority.',
+    choices: () => CARRIER_ROLES,
+    defaultCode: 'majority',
+    resolve: (code) => code as CarrierRole,
+  }),
+  details:
+    'majority and minority name the dopant’s own carrier type and the other one. With a blank model the mobility model ' +
+    'follows the carrier’s role in the sample by net doping (counter_doping included): in Si the minority carrier gets ' +
+    `${SILICON_MINORITY_MOBILITY_MODEL} (minority-carrier physics), the majority carrier ${defaultMobilityModel(SILICON)}; ` +
+    'other materials use their own fit for both.',
+};
 
 /** Display form of the default of a model argument whose blank means the material's own default. */
 export const MATERIAL_DEFAULT_TEXT = 'the material’s default';
@@ -133,22 +142,38 @@ export const MATERIAL_DEFAULT_TEXT = 'the material’s default';
  * on as '' so the core takes the material's default, and the core refuses a
  * code the material has no parameters for, naming what it supports.
  */
-function materialModelParameter(what: string, codesOf: (host: Material) => readonly string[]): ParameterSpec<string> {
+function materialModelParameter(
+  what: string,
+  codesOf: (host: Material) => readonly string[],
+  blank?: { readonly description: string; readonly defaultText: string; readonly details: string },
+): ParameterSpec<string> {
   const codes = allCodes(codesOf);
   return {
     ...codeParameter<string>({
       name: 'model',
-      description: `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s default. Codes by material on the help page.`,
+      description: blank?.description ?? `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s default. Codes by material on the help page.`,
       choices: () => codes,
       defaultCode: '',
       resolve: (code) => code,
     }),
-    defaultText: MATERIAL_DEFAULT_TEXT,
-    details: `Codes by material, default first: ${perMaterial(codesOf)}.`,
+    defaultText: blank?.defaultText ?? MATERIAL_DEFAULT_TEXT,
+    details: `${blank === undefined ? '' : `${blank.details} `}Codes by material, default first: ${perMaterial(codesOf)}.`,
   };
 }
 
-export const mobilityModel = materialModelParameter('Mobility model', mobilityModelCodes);
+/** Display form of the default of a mobility model argument (chosen per carrier, see mobilityModel). */
+export const MOBILITY_DEFAULT_TEXT = `${SILICON_MINORITY_MOBILITY_MODEL} for Si minority carriers, else the material’s default`;
+
+/** A mobility model argument: a blank chooses per carrier (physics defaultMobilityModelFor). */
+export const mobilityModel = materialModelParameter('Mobility model', mobilityModelCodes, {
+  description: `Mobility model, e.g. ${defaultMobilityModel(SILICON)}; blank: ${SILICON_MINORITY_MOBILITY_MODEL} for Si minority carriers, else the material’s default (see help).`,
+  defaultText: MOBILITY_DEFAULT_TEXT,
+  details:
+    `Blank: a carrier that is the sample’s minority carrier by net doping (counter_doping included) gets ` +
+    `${SILICON_MINORITY_MOBILITY_MODEL} in Si, the one silicon model with minority-carrier physics; the majority carrier, ` +
+    `and both carriers of an exactly compensated sample, get the material’s default (${defaultMobilityModel(SILICON)} in Si). ` +
+    'Ge, GaAs and 4H-SiC have one fit each, used for both carriers.',
+});
 
 export const resistivityModel = materialModelParameter('Model', resistivityModelCodes);
 

@@ -17,6 +17,7 @@ import { IONIZED } from './functions/ionized';
 import { MAJORITY } from './functions/majority';
 import { MINORITY } from './functions/minority';
 import { MOBILITY } from './functions/mobility';
+import { FREEMOBILITY } from './functions/freemobility';
 import { MODELS } from './functions/models';
 import { CONDUCTIONDOS } from './functions/conductiondos';
 import { INTRINSIC } from './functions/intrinsic';
@@ -52,6 +53,7 @@ export const CATALOG: readonly FunctionSpec[] = [
   IONIZED,
   FERMILEVEL,
   MOBILITY,
+  FREEMOBILITY,
   DIFFUSIVITY,
   CONDUCTIVITY,
   RESISTIVITY,

@@ -55,8 +55,12 @@ export {
   ALL_MOBILITY_MODEL_CODES,
   mobilityModelCodes,
   defaultMobilityModel,
+  defaultMobilityModelFor,
+  defaultMinorityMobilityModel,
+  SILICON_MINORITY_MOBILITY_MODEL,
   fitMobility,
   mobility,
+  freeCarrierMobility,
   diffusivity,
 } from './mobility';
 export {
@@ -86,7 +90,7 @@ export {
 } from './highField';
 export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
 export { dopingForResistivity } from './inverse';
-export { f723Resistivity, f723Density, type F723Species } from './astmF723';
+export { f723Resistivity, f723Density, F723_VALIDITY, type F723Species } from './astmF723';
 export { F723_ANCHOR_TEMPERATURE } from './f723Anchored';
 
 // Geometry of uniform conductors.

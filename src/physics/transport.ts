@@ -168,9 +168,9 @@ export type FieldDependence = (typeof FIELD_DEPENDENCE_CODES)[number];
  *
  * @param field - electric field E, V/cm (sign gives the direction)
  * @param sample - the sample
- * @param model - resistivity model code; for 'saturating' it must be a mobility model and a
- *   blank one is the material's default mobility model (not 'f723-anchored', which has no
- *   mobilities of its own); for 'ohmic' a blank one is the material's default resistivity model
+ * @param model - resistivity model code (blank: the material's default resistivity model); for
+ *   'saturating' a mobility model or 'f723-anchored' (the physics model's free-carrier
+ *   mobilities divided by its factor k), not 'astm-f723'
  * @param fieldDependence - 'saturating' (default) or 'ohmic'
  * @returns J in A/cm²
  * @example currentDensity(100, phosphorus1e16At300K) // ≈ 188.5 A/cm² (σE ≈ 189.7: saturation lowers it by 0.6 %)
@@ -182,13 +182,12 @@ export function currentDensity(
   fieldDependence: FieldDependence = 'saturating',
 ): number {
   if (fieldDependence === 'ohmic') return conductivity(sample, model) * field;
-  const code =
-    model === undefined || model.trim() === '' ? defaultMobilityModel(sample.material) : resolveResistivityModel(model, sample.material);
+  const code = resolveResistivityModel(model, sample.material);
   if (code === F723_ANCHORED_CODE) {
-    throw new PhysicsDomainError(
-      `'f723-anchored' scales a resistivity to ASTM F723 and has no carrier mobilities of its own, so it cannot give ` +
-        `saturated drift velocities; use a mobility model (e.g. ${defaultMobilityModel(sample.material)}) or the ohmic form J = σE`,
-    );
+    // σ_anchored = σ_phys / k: the free-carrier mobilities of the physics model divided by k,
+    // so J → σ_anchored·E at low field and still saturates at q(n·v_sat,n + p·v_sat,p).
+    const k = anchorFactor(sample, 'forward', physicsResistivity);
+    return saturatedCurrentDensity(field, sample, defaultMobilityModel(sample.material), 1 / k);
   }
   if (code === ASTM_F723_CODE) {
     throw new PhysicsDomainError(

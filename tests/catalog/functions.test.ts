@@ -3,7 +3,7 @@
  * that must hold exactly, defaults, and the messages bad input gets.
  */
 import { CATALOG, evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
-import { ELEMENTARY_CHARGE, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
+import { ELEMENTARY_CHARGE, MOBILITY_MODEL_CODES, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
 import { message, value } from './support/call';
 
 
@@ -17,15 +17,39 @@ describe('identities between catalog functions (definitions: common practice, no
     [1e14, 'B', 600, 0],
   ];
 
-  it.each(cases)('σ = q(n·μn + p·μp) for %s cm⁻³ %s at %s K (counter %s)', (doping, dopant, t, counter) => {
+  // CONDUCTIVITY = q(MAJORITY·FREEMOBILITY(majority) + MINORITY·FREEMOBILITY(minority)) for the same named
+  // model (FREEMOBILITY's help); a blank CONDUCTIVITY is its default model for both carriers.
+  it.each(cases)('σ = q(n·μn,free + p·μp,free) for %s cm⁻³ %s at %s K (counter %s), every silicon mobility model', (doping, dopant, t, counter) => {
     const majority = value('MAJORITY', doping, dopant, t, null, counter);
     const minority = value('MINORITY', doping, dopant, t, null, counter);
-    const muMajority = value('MOBILITY', doping, dopant, t, 'majority', null, null, counter);
-    const muMinority = value('MOBILITY', doping, dopant, t, 'minority', null, null, counter);
-    // The physics identity holds for the mobility model; the default f723-anchored scales it (f723Anchored.test.ts).
-    const sigma = value('CONDUCTIVITY', doping, dopant, t, 'masetti', null, counter);
-    expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
-    expect(value('RESISTIVITY', doping, dopant, t, 'masetti', null, counter) * sigma).toBeCloseTo(1, 12);
+    // Every mobility model; the blank default 'f723-anchored' scales this by its factor k (f723Anchored.test.ts).
+    for (const model of MOBILITY_MODEL_CODES) {
+      const muMajority = value('FREEMOBILITY', doping, dopant, t, 'majority', model, null, counter);
+      const muMinority = value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter);
+      const sigma = value('CONDUCTIVITY', doping, dopant, t, model, null, counter);
+      expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
+      expect(value('RESISTIVITY', doping, dopant, t, model, null, counter) * sigma).toBeCloseTo(1, 12);
+    }
+  });
+
+  it.each(cases)('FREEMOBILITY = MOBILITY for the minority carrier (%s cm⁻³ %s at %s K, counter %s), any model', (doping, dopant, t, counter) => {
+    for (const model of [...MOBILITY_MODEL_CODES, null]) {
+      expect(value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter)).toBe(value('MOBILITY', doping, dopant, t, 'minority', model, null, counter));
+    }
+  });
+
+  it('FREEMOBILITY = MOBILITY for both carriers with the Ge, GaAs and 4H-SiC fits', () => {
+    for (const [material, dopant] of [['Ge', 'Sb'], ['Ge', 'Ga'], ['GaAs', 'Si'], ['GaAs', 'Zn'], ['4H-SiC', 'N'], ['4H-SiC', 'Al']] as const) {
+      for (const role of ['majority', 'minority']) {
+        expect(value('FREEMOBILITY', 1e17, dopant, 300, role, null, material)).toBe(value('MOBILITY', 1e17, dopant, 300, role, null, material));
+      }
+    }
+  });
+
+  it('FREEMOBILITY = MOBILITY × N_net/n(300 K) for a silicon majority carrier (1.31 for 1e18 cm⁻³ B, FREEMOBILITY’s help)', () => {
+    const ratio = value('FREEMOBILITY', 1e18, 'B') / value('MOBILITY', 1e18, 'B');
+    expect(ratio).toBeCloseTo(1e18 / value('MAJORITY', 1e18, 'B'), 10);
+    expect(ratio).toBeCloseTo(1.31, 2);
   });
 
   // Generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) (Sze & Ng 2007, ch. 1; from memory): the
@@ -71,9 +95,19 @@ describe('identities between catalog functions (definitions: common practice, no
 
   it('DOPING inverts RESISTIVITY to 1e-9, with and without counter-doping', () => {
     for (const [doping, dopant, counter] of [[3e14, 'B', 0], [2e17, 'P', 5e16], [4e19, 'As', 0]] as const) {
-      const rho = value('RESISTIVITY', doping, dopant, 300, null, null, counter);
-      expect(value('DOPING', rho, dopant, 300, null, null, counter) / doping).toBeCloseTo(1, 9);
+      const rho = value('RESISTIVITY', doping, dopant, 300, 'masetti', null, counter);
+      expect(value('DOPING', rho, dopant, 300, 'masetti', null, counter) / doping).toBeCloseTo(1, 9);
     }
+    // The default 'f723-anchored' follows F723's forward equation in RESISTIVITY and its reverse one in
+    // DOPING, so its round trip is off by the standard's own inconsistency between the two: F723 states
+    // 3 % (B) and 4.5 % (P) (ASTM F723-99 §1.3, read in the public excerpt at inforstreet.com); a dopant
+    // it does not anchor (As) round-trips exactly.
+    for (const [doping, dopant, bound] of [[3e14, 'B', 0.03], [1e16, 'B', 0.03], [1e15, 'P', 0.045], [1e19, 'P', 0.045]] as const) {
+      const rho = value('RESISTIVITY', doping, dopant, 296.15);
+      expect(Math.abs(value('RESISTIVITY', value('DOPING', rho, dopant, 296.15), dopant, 296.15) / rho - 1)).toBeLessThan(bound);
+    }
+    const rhoAs = value('RESISTIVITY', 4e19, 'As');
+    expect(value('DOPING', rhoAs, 'As') / 4e19).toBeCloseTo(1, 9);
     const rho = value('RESISTIVITY', 1e16, 'P', 300, 'astm-f723');
     expect(value('DOPING', rho, 'P', 300, 'astm-f723') / 1e16).toBeCloseTo(1, 1);
   });
@@ -86,7 +120,7 @@ describe('identities between catalog functions (definitions: common practice, no
 
 describe('arguments', () => {
   it('takes 300 K, Si, majority and the default models for blank optional arguments', () => {
-    expect(value('RESISTIVITY', 1e16, 'B', null, null, null, null)).toBe(value('RESISTIVITY', 1e16, 'B', 300, 'masetti', 'Si', 0));
+    expect(value('RESISTIVITY', 1e16, 'B', null, null, null, null)).toBe(value('RESISTIVITY', 1e16, 'B', 300, 'f723-anchored', 'Si', 0));
     expect(value('MOBILITY', 1e16, 'B')).toBe(value('MOBILITY', 1e16, 'B', 300, 'majority', 'masetti', 'Si', 0));
     expect(value('INTRINSIC', 300)).toBe(value('INTRINSIC', 300, 'si', 'MISIAKOS'));
   });
@@ -109,7 +143,7 @@ describe('messages for bad input name the argument, the value and what is allowe
   it.each([
     [['RESISTIVITY', -5, 'B'], '#VALUE! doping must be > 0 cm⁻³ and ≤ 1e+22 cm⁻³; got -5'],
     [['RESISTIVITY', 1e16, 'Xe'], "#VALUE! unknown dopant 'Xe' for silicon"],
-    [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: masetti, arora, caughey-thomas, klaassen, astm-f723'],
+    [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: f723-anchored, masetti, arora, caughey-thomas, klaassen, astm-f723'],
     [['RESISTIVITY', 1e16, 'B', 300, null, 'GaN'], '#VALUE! material "GaN" is not known; allowed: Si'],
     [['INTRINSIC', 5], '#VALUE! temperature_K must be ≥ 20 K and ≤ 1000 K; got 5'],
     [['INTRINSIC', null], '#VALUE! temperature_K is required'],

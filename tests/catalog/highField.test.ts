@@ -5,7 +5,8 @@
  * in tests/physics/reference (canali-1975, quay-2000, khan-cooper-2000,
  * jacoboni-1977); identities here are definitions (common practice, no source).
  */
-import { ELEMENTARY_CHARGE } from '../../src/physics';
+import { ELEMENTARY_CHARGE, SILICON, resolveDopant, type Carrier } from '../../src/physics';
+import { velocityAtMobility } from '../../src/physics/highField/driftVelocity';
 import { findFunction } from '../../src/catalog';
 import { message, value } from './support/call';
 
@@ -69,18 +70,40 @@ describe('DRIFT.VSAT', () => {
 });
 
 describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
-  it('is q(n·vn + p·vp) with n, p from ELECTRONS/HOLES-consistent MAJORITY/MINORITY and v from VELOCITY', () => {
-    for (const [field, doping, dopant] of [[3e3, 1e16, 'P'], [-2e4, 1e17, 'B'], [5e5, 1e15, 'As']] as const) {
+  // VELOCITY's law v = μ0E/(1 + (μ0|E|/v_sat)^β)^(1/β) evaluated at μ0 = FREEMOBILITY(masetti)/k, k the
+  // default f723-anchored model's factor σ_masetti/σ_default (CURRENTDENSITY's help), so that J → σE at low field.
+  const anchorFactor = (doping: number, dopant: string, temperature = 300): number =>
+    value('CONDUCTIVITY', doping, dopant, temperature, 'masetti') / value('CONDUCTIVITY', doping, dopant, temperature);
+  const freeVelocity = (field: number, doping: number, dopant: string, temperature: number, role: 'majority' | 'minority'): number => {
+    const model = 'masetti';
+    const sample = { material: SILICON, temperature, dopant: resolveDopant(SILICON, dopant), density: doping, counterDensity: 0 };
+    const majority: Carrier = sample.dopant.kind === 'donor' ? 'electron' : 'hole';
+    const carrier: Carrier = role === 'majority' ? majority : majority === 'electron' ? 'hole' : 'electron';
+    return velocityAtMobility(field, carrier, sample, value('FREEMOBILITY', doping, dopant, temperature, role, model) / anchorFactor(doping, dopant, temperature));
+  };
+
+  it('is q(n·vn + p·vp) with n, p from MAJORITY/MINORITY and v from VELOCITY’s law at FREEMOBILITY', () => {
+    for (const [field, doping, dopant] of [[3e3, 1e16, 'P'], [-2e4, 1e17, 'B'], [5e5, 1e15, 'As'], [1e4, 1e18, 'B']] as const) {
       const nMajority = value('MAJORITY', doping, dopant);
       const nMinority = value('MINORITY', doping, dopant);
-      const vMajority = value('VELOCITY', field, doping, dopant, 300, 'majority');
-      const vMinority = value('VELOCITY', field, doping, dopant, 300, 'minority');
-      expect(value('CURRENTDENSITY', field, doping, dopant) / (ELEMENTARY_CHARGE * (nMajority * vMajority + nMinority * vMinority))).toBeCloseTo(1, 12);
+      const expected = ELEMENTARY_CHARGE * (nMajority * freeVelocity(field, doping, dopant, 300, 'majority') + nMinority * freeVelocity(field, doping, dopant, 300, 'minority'));
+      expect(value('CURRENTDENSITY', field, doping, dopant) / expected).toBeCloseTo(1, 12);
     }
   });
 
+  it('saturates at q·n·VSAT while VELOCITY, at the published mobility, differs from J/(q·n) only below saturation', () => {
+    const [doping, dopant] = [1e18, 'B'];
+    const p = value('MAJORITY', doping, dopant);
+    // Far above the knee both tend to v_sat: J/(q·p·VSAT) → 1 within the (μ0E/v_sat)^−β tail (< 1 % at 1e7 V/cm).
+    expect(value('CURRENTDENSITY', 1e7, doping, dopant) / (ELEMENTARY_CHARGE * p * value('VSAT', 300, 'hole'))).toBeCloseTo(1, 2);
+    // At low field J/(q·p·E) is FREEMOBILITY/k (FREEMOBILITY 1.31× Masetti near 1e18, see its help), VELOCITY/E is MOBILITY.
+    const field = 1e-6;
+    expect(value('CURRENTDENSITY', field, doping, dopant) / (ELEMENTARY_CHARGE * p * field) / (value('FREEMOBILITY', doping, dopant, 300, 'majority', 'masetti') / anchorFactor(doping, dopant))).toBeCloseTo(1, 6);
+    expect(value('VELOCITY', field, doping, dopant, 300, 'majority') / field / value('MOBILITY', doping, dopant, 300, 'majority', 'masetti')).toBeCloseTo(1, 6);
+  });
+
   it('gives J/(σE) → 1 as E → 0 and about 1 − 4e-5 at 1 V/cm in 1e16 cm⁻³ n-type Si', () => {
-    const sigma = value('CONDUCTIVITY', 1e16, 'P', 300, 'masetti'); // the saturating default's mobility model
+    const sigma = value('CONDUCTIVITY', 1e16, 'P'); // the default model, as CURRENTDENSITY's
     expect(value('CURRENTDENSITY', 1e-15, 1e16, 'P') / (sigma * 1e-15)).toBeCloseTo(1, 13);
     // Shortfall ≈ (μE/v_sat)^β/β with Canali's β ≈ 1.109 (Canali et al. 1975, from memory): 3.7e-5.
     const shortfall = 1 - value('CURRENTDENSITY', 1, 1e16, 'P') / sigma;
@@ -101,7 +124,7 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
 
   it('works at 77 K in n-type Si, where the refused hole term cannot matter, and refuses p-type Si there', () => {
     const n77 = value('CURRENTDENSITY', 3e4, 1e16, 'P', 77);
-    expect(n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'P', 77) * value('VELOCITY', 3e4, 1e16, 'P', 77))).toBeCloseTo(1, 12);
+    expect(n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'P', 77) * freeVelocity(3e4, 1e16, 'P', 77, 'majority'))).toBeCloseTo(1, 12);
     expect(message('CURRENTDENSITY', 3e4, 1e16, 'B', 77)).toMatch(/102–1000 K.*ohmic/);
   });
 

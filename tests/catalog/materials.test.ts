@@ -4,7 +4,7 @@
  * material has no parameters for.
  */
 import { findFunction } from '../../src/catalog';
-import { allDopantCodes, MATERIAL_DEFAULT_TEXT } from '../../src/catalog/common';
+import { allDopantCodes, MATERIAL_DEFAULT_TEXT, MOBILITY_DEFAULT_TEXT } from '../../src/catalog/common';
 import { message, value } from './support/call';
 
 describe('material argument', () => {
@@ -26,7 +26,8 @@ describe('material argument', () => {
 
   it('shows blank model arguments as the material’s default', () => {
     const model = findFunction('MOBILITY')!.parameters.find((p) => p.name === 'model')!;
-    expect(model.defaultText).toBe(MATERIAL_DEFAULT_TEXT);
+    expect(model.defaultText).toBe(MOBILITY_DEFAULT_TEXT);
+    expect(findFunction('RESISTIVITY')!.parameters.find((p) => p.name === 'model')!.defaultText).toBe(MATERIAL_DEFAULT_TEXT);
     expect(model.details).toContain('GaAs: sotoodeh');
   });
 });

@@ -5,7 +5,7 @@ import {
   resistivity,
   resolveResistivityModel,
 } from '../../src/physics/transport';
-import { MOBILITY_MODEL_CODES, fitMobility, mobility } from '../../src/physics/mobility';
+import { MOBILITY_MODEL_CODES, fitMobility, freeCarrierMobility } from '../../src/physics/mobility';
 import { solveEquilibrium } from '../../src/physics/equilibrium';
 import { intrinsicDensity } from '../../src/physics/bands';
 import { sampleDopants } from '../../src/physics/sample';
@@ -39,7 +39,7 @@ describe('conductivity', () => {
         const eq = solveEquilibrium(sample.material, sample.temperature, sampleDopants(sample));
         const expected =
           ELEMENTARY_CHARGE *
-          (eq.electrons * mobility(model, 'electron', sample) + eq.holes * mobility(model, 'hole', sample));
+          (eq.electrons * freeCarrierMobility(model, 'electron', sample) + eq.holes * freeCarrierMobility(model, 'hole', sample));
         expect(conductivity(sample, model)).toBe(expected);
         expect(resistivity(sample, model)).toBe(1 / expected);
       }
@@ -88,7 +88,7 @@ describe('temperature behaviour (from the same equations, no special cases)', ()
     for (const dopant of ['B', 'P']) {
       const sample = siliconSample(dopant, 1e16, 77);
       const majority = dopant === 'B' ? 'hole' : 'electron';
-      const fullyIonized = 1 / (ELEMENTARY_CHARGE * 1e16 * mobility('masetti', majority, sample));
+      const fullyIonized = 1 / (ELEMENTARY_CHARGE * 1e16 * fitMobility('masetti', majority, sample));
       expect(resistivity(sample)).toBeGreaterThan(2 * fullyIonized);
     }
     // Deeper into freeze-out the resistivity rises steeply as temperature falls.
@@ -117,9 +117,10 @@ describe('currentDensity', () => {
 
   it('saturates by default (tests/physics/highField/currentDensity.test.ts), equal to σ·E as E → 0', () => {
     const sample = siliconSample('P', 1e16);
-    // The saturating default starts from the default mobility model, masetti.
-    expect(currentDensity(1e-15, sample) / (conductivity(sample, 'masetti') * 1e-15)).toBeCloseTo(1, 14);
-    expect(currentDensity(1e4, sample)).toBeLessThan(conductivity(sample, 'masetti') * 1e4 * 0.6);
+    // The saturating default is the default resistivity model's (f723-anchored: masetti's mobilities over k).
+    expect(currentDensity(1e-15, sample) / (conductivity(sample) * 1e-15)).toBeCloseTo(1, 14);
+    expect(currentDensity(1e4, sample)).toBeLessThan(conductivity(sample) * 1e4 * 0.6);
+    expect(currentDensity(1e-15, sample, 'masetti') / (conductivity(sample, 'masetti') * 1e-15)).toBeCloseTo(1, 14);
     expect(currentDensity(0, sample)).toBe(0);
   });
 });

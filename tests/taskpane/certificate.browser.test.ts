@@ -18,6 +18,7 @@ const LEFT = 1;
 const TABLE = cells({ row: TOP, column: LEFT, rowCount: CERTIFICATE_TABLE.length, columnCount: CERTIFICATE_HEADERS.length });
 const FIRST_NEW = LEFT + CERTIFICATE_HEADERS.length;
 const NEEDED = { min: 1e15, max: 2e15 };
+const PANE_TEMPERATURE = 296.15;
 
 /** The dopant code the check derives from a certificate type with the conductivity-type switch on. */
 function codeOf(type: CellInput): string {
@@ -29,8 +30,9 @@ function expectedRow(row: readonly CellInput[], needed = NEEDED, readingColumns 
   const code = codeOf(row[2]);
   const [rhoMin, rhoMax, thickness] = [row[3], row[4], row[9]] as number[];
   const readings = readingColumns.map((index) => row[index] as number);
-  const atMax = value('DOPING', rhoMax, code);
-  const atMin = value('DOPING', rhoMin, code);
+  // The pane starts at 23 °C, the temperature certificates state resistivity at (view.ts).
+  const atMax = value('DOPING', rhoMax, code, PANE_TEMPERATURE);
+  const atMin = value('DOPING', rhoMin, code, PANE_TEMPERATURE);
   const inside = atMax >= needed.min && atMin <= needed.max;
   const readingsInside = Math.min(...readings) >= rhoMin && Math.max(...readings) <= rhoMax;
   const mean = readings.reduce((sum, v) => sum + v, 0) / readings.length;
@@ -159,7 +161,7 @@ describe('the Certificate check in Chromium', () => {
       // Switch off: the type is passed on as written, so P is phosphorus; N is still the generic donor.
       const code = String(row[2]);
       expect(shown[0]).toBe(code);
-      expect(ratio(shown[1], value('DOPING', row[4] as number, code))).toBeCloseTo(1, 12);
+      expect(ratio(shown[1], value('DOPING', row[4] as number, code, PANE_TEMPERATURE))).toBeCloseTo(1, 12);
       // Without edge 3, the radial variation averages edges 1 and 2 only.
       expect(shown[6]).toBeCloseTo(value('RADIALVARIATION', row[5] as number, [[row[6] as number, row[7] as number]]), 10);
     });

@@ -15,6 +15,7 @@ import {
 import { perMaterial } from '../citedModels';
 import type { FunctionSpec } from '../types';
 import { signature } from './signature';
+import { renderF723Agreement } from './f723Agreement';
 
 /** Escapes text for a Markdown table cell. */
 function cell(text: string): string {
@@ -62,6 +63,7 @@ export function readmeSections(catalog: readonly FunctionSpec[]): Record<string,
     functions: renderFunctionTable(catalog),
     codes: renderCodeTable(),
     models: renderModelTable(),
+    f723: renderF723Agreement(),
   };
 }
 

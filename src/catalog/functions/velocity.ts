@@ -2,6 +2,7 @@ import { SILICON, carrierFor, driftVelocity } from '../../physics';
 import { carrier, dopant, doping, field, material, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { HIGH_FIELD_MODELS } from '../citedModels';
+import { SILICON_MINORITY_MOBILITY_MODEL } from '../../physics';
 import { SILICON_FIELD_EXPONENTS_TEXT, SILICON_HIGH_FIELD_RANGE_TEXT, SILICON_HOLE_VSAT_300K_TEXT } from './vsat';
 
 /** 1 − v(E)/(μ0·E) for electrons in 1e16 cm⁻³ P-doped Si at 300 K, for the help text. */
@@ -15,7 +16,7 @@ function shortfall(fieldVPerCm: number): number {
 export const VELOCITY = elementwise({
   name: 'VELOCITY',
   summary: 'Drift velocity of electrons or holes in an electric field, with velocity saturation, in cm/s.',
-  help: `Returns the drift velocity v(E) = μ0·E / (1 + (μ0·|E|/v_sat)^β)^(1/β) (Caughey & Thomas 1967), with μ0 the low-field drift mobility exactly as DRIFT.MOBILITY returns it with the material's default model, and v_sat, β the material's tabulated values (see DRIFT.VSAT). The result has the sign of the field (the carriers' charge is not applied: electrons actually move against E).
+  help: `Returns the drift velocity v(E) = μ0·E / (1 + (μ0·|E|/v_sat)^β)^(1/β) (Caughey & Thomas 1967), with μ0 the low-field mobility exactly as DRIFT.MOBILITY returns it with a blank model (the published value; in Si klaassen for minority carriers, masetti for majority carriers; other materials their own fit), and v_sat, β the material's tabulated values (see DRIFT.VSAT). The result has the sign of the field (the carriers' charge is not applied: electrons actually move against E).
 
 At low field v → μ0·E: the relative shortfall is about (μ0·E/v_sat)^β/β, e.g. ${shortfall(1).toPrecision(1)} at 1 V/cm and ${(100 * shortfall(100)).toFixed(1)} % at 100 V/cm for electrons in 1e16 cm⁻³ n-type Si. At high field v → v_sat.
 
@@ -27,7 +28,7 @@ Si: saturation velocity of Quay et al. (2000) (see DRIFT.VSAT), accepted for ${S
     { formula: '=DRIFT.VELOCITY(A2:A40,1e15,"B",,"hole")', note: 'a velocity–field curve of holes' },
     { formula: '=DRIFT.VELOCITY(5e3,1e16,"Si",300,"electron","GaAs")', note: 'electrons in Si-doped GaAs (no transferred-electron peak)' },
   ],
-  models: HIGH_FIELD_MODELS,
+  models: [...new Set([...HIGH_FIELD_MODELS, SILICON_MINORITY_MOBILITY_MODEL])],
   compute: (fieldValue, density, dopantCode, temperatureK, role, materialValue) => {
     const sample = sampleOf(materialValue, temperatureK, dopantCode, density, 0);
     return driftVelocity(fieldValue, carrierFor(sample.dopant, role), sample);

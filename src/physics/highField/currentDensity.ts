@@ -3,9 +3,13 @@
  *
  *   J = q·(n·v_n(E) + p·v_p(E)),
  *
- * with n, p from the equilibrium solve and v_n, v_p the Caughey–Thomas drift
- * velocities of driftVelocity.ts (same μ0 as DRIFT.MOBILITY, computed once for both carriers), so J → σ·E as
- * E → 0. Both carriers drift so that their current follows E.
+ * with n, p from the equilibrium solve and v_n, v_p the Caughey–Thomas law of
+ * driftVelocity.ts evaluated at the free-carrier mobility μ0 of each carrier
+ * (driftMobilities: the same model for both, as conductivity uses), so J → σ·E
+ * as E → 0 and |J| → q(n·v_sat,n + p·v_sat,p) at high field. (DRIFT.VELOCITY
+ * uses the published mobility; for the silicon fits' majority carriers the two
+ * differ by the 300 K ionized-share factor.) Both carriers drift so that their
+ * current follows E.
  */
 import type { Carrier, Sample } from '../sample';
 import { sampleDopants } from '../sample';
@@ -28,14 +32,16 @@ import { missingSaturationVelocity } from './tables';
  * @param field - E, V/cm (sign gives the direction)
  * @param sample - the sample
  * @param model - mobility model code for μ0; '' or undefined is the material's default
+ * @param mobilityScale - factor on both μ0 (f723-anchored's 1/k; 1 for a mobility model)
  * @returns J in A/cm²
  * @throws PhysicsDomainError where a saturation velocity needed for the result is not tabulated (material or temperature)
  * @example saturatedCurrentDensity(1e4, phosphorus1e16At300K) // ≈ 9.6e3 A/cm² (σE would be ≈ 1.9e4)
  */
-export function saturatedCurrentDensity(field: number, sample: Sample, model = ''): number {
+export function saturatedCurrentDensity(field: number, sample: Sample, model = '', mobilityScale = 1): number {
   if (!Number.isFinite(field)) throw new PhysicsDomainError(`the field must be a finite number in V/cm; got ${field}`);
   const equilibrium = solveEquilibrium(sample.material, sample.temperature, sampleDopants(sample));
-  const mobilities = driftMobilities(model, sample);
+  const free = driftMobilities(model, sample);
+  const mobilities = { electron: free.electron * mobilityScale, hole: free.hole * mobilityScale };
   const density: Record<Carrier, number> = { electron: equilibrium.electrons, hole: equilibrium.holes };
   const code = sample.material.code;
 

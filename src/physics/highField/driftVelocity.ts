@@ -1,12 +1,14 @@
 /**
  * Drift velocity of a carrier type in a uniform field: the Caughey–Thomas
- * form with the sample's own low-field drift mobility μ0 (the one
- * DRIFT.MOBILITY and DRIFT.CONDUCTIVITY use) and the material's tabulated
- * v_sat(T) and β(T). Combining a doping-dependent μ0 with v_sat and β
+ * form with the low-field mobility μ0 the named model publishes (the one
+ * DRIFT.MOBILITY returns, a blank model choosing per carrier as there) and
+ * the material's tabulated v_sat(T) and β(T). The current density
+ * (currentDensity.ts) uses the free-carrier mobility instead, so that it
+ * tends to σ·E. Combining a doping-dependent μ0 with v_sat and β
  * measured in pure material is common practice, no source.
  */
 import type { Carrier, Sample } from '../sample';
-import { driftMobilities } from '../mobility';
+import { mobility } from '../mobility';
 import { caugheyThomasVelocity } from './caugheyThomasField';
 import { highFieldParameters } from './saturationVelocity';
 
@@ -16,13 +18,13 @@ import { highFieldParameters } from './saturationVelocity';
  * @param field - E, V/cm (sign gives the direction)
  * @param carrier - 'electron' or 'hole'
  * @param sample - the sample (material, temperature, dopants)
- * @param model - mobility model code for μ0; '' or undefined is the material's default
+ * @param model - mobility model code for μ0; '' or undefined is the carrier's default (mobility/index.ts defaultMobilityModelFor)
  * @returns v in cm/s, with the sign of E (carriers' charge sign not applied)
  * @throws PhysicsDomainError where the material has no saturation velocity for the carrier or temperature
  * @example driftVelocity(1e4, 'electron', phosphorus1e16At300K) // ≈ 6.0e6 cm/s
  */
 export function driftVelocity(field: number, carrier: Carrier, sample: Sample, model = ''): number {
-  return velocityAtMobility(field, carrier, sample, driftMobilities(model, sample)[carrier]);
+  return velocityAtMobility(field, carrier, sample, mobility(model, carrier, sample));
 }
 
 /**

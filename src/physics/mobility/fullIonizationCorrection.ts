@@ -6,8 +6,9 @@
  * *total* dopant density at room temperature, i.e. they computed μ from
  * σ = q·N·μ assuming every dopant is ionized. Our equilibrium solver ionizes
  * dopants incompletely, so σ = q·n·μ_fit would count the un-ionized fraction
- * twice (once in n, once inside μ_fit). The majority-carrier drift mobility is
- * therefore
+ * twice (once in n, once inside μ_fit). The majority carrier's mobility per
+ * free carrier (freeCarrierMobility, DRIFT.FREEMOBILITY, and what conductivity
+ * uses) is therefore
  *
  *   μ = μ_fit(N, T) · N_net / n_eq(300 K)
  *
@@ -15,7 +16,7 @@
  * temperature, from the same solver. At 300 K σ then equals q·N_net·μ_fit (so
  * ρ agrees with ASTM F723 and Irvin as well as the fits do); at other
  * temperatures freeze-out enters through n(T)/n(300 K). Minority carriers keep
- * μ_fit unchanged.
+ * μ_fit unchanged. DRIFT.MOBILITY returns μ_fit itself (the model as published).
  *
  * Implemented form. With m and m' the 300 K majority and minority densities
  * and s = max(0, (m − m')/(m + m')) the extrinsic fraction,

@@ -15,7 +15,15 @@
  *
  * The other fits take the total impurity density N = N_D + N_A of the sample
  * (common practice for compensated material, no source). With them minority
- * carriers use the same fit for their carrier type at that total density.
+ * carriers use the same fit for their carrier type at that total density;
+ * a blank code therefore chooses 'klaassen' for silicon minority carriers
+ * (defaultMobilityModelFor).
+ *
+ * Published vs free-carrier mobility: `mobility` returns each model as
+ * published; `freeCarrierMobility` (and driftMobilities, which conductivity
+ * uses) multiplies the silicon fits' majority-carrier value by
+ * fullIonizationCorrection, so σ = q(nμn + pμp) with the solver's
+ * incompletely ionized n, p reproduces the fits' 300 K resistivity.
  *
  * Masetti species: electrons use the named dopant's own row when it is a donor
  * (dopant.mobilitySpecies, 'As' or 'P'), otherwise the P row; holes always use
@@ -26,8 +34,9 @@
  * 'roschke-schwierz'), each the default of its material; a blank code means
  * the sample material's default, and a code without parameters for the
  * material is refused with a message naming the models it supports. The
- * material fits describe free-carrier mobility and are used unchanged (no
- * full-ionization correction; see materialFits.ts).
+ * material fits describe free-carrier mobility, so their free-carrier
+ * mobility is the published value (no full-ionization correction; see
+ * materialFits.ts).
  */
 import type { Carrier, Sample } from '../sample';
 import { sampleDopants, totalImpurityDensity } from '../sample';
@@ -165,7 +174,9 @@ function checked(value: number, what: string, carrier: Carrier, sample: Sample):
  * The published fit value: conductivity mobility vs total impurity density
  * N = density + counterDensity, at the sample's temperature (for 'masetti' and
  * 'caughey-thomas' via Arora's temperature ratio, see the module comment).
- * It assumes full ionization; use `mobility` for transport.
+ * It assumes full ionization (freeCarrierMobility is the per-free-carrier form).
+ * Equal to `mobility` for a named model; a blank code here is the material's
+ * default for both carriers (no per-carrier choice).
  *
  * @param model - mobility model code (case-insensitive)
  * @param carrier - 'electron' or 'hole'
@@ -178,57 +189,131 @@ export function fitMobility(model: string, carrier: Carrier, sample: Sample): nu
   return checked(fitted(code, carrier, sample), 'the fitted mobility', carrier, sample);
 }
 
-/** Drift mobilities of both carriers, sharing one 300 K reference solve. */
+/**
+ * The model a blank code chooses for one carrier of a sample. A carrier that
+ * is the sample's minority carrier (the type opposite to netMajorityCarrier,
+ * so a counter-doped sample that changed type counts by its net doping) gets
+ * the material's model with minority-carrier physics: 'klaassen' in silicon,
+ * whose repulsive-impurity and electron–hole terms fit measured minority
+ * mobilities (the other silicon fits are majority-carrier fits). Germanium,
+ * GaAs and 4H-SiC have one fit each, used for both roles. Majority carriers,
+ * and both carriers of an exactly compensated sample (no minority type), get
+ * the material's default (defaultMobilityModel).
+ *
+ * @param carrier - 'electron' or 'hole'
+ * @param sample - the sample
+ * @returns the model code a blank model means for this carrier
+ * @example defaultMobilityModelFor('electron', boron1e19At300K) // 'klaassen'
+ * @example defaultMobilityModelFor('hole', boron1e19At300K) // 'masetti'
+ */
+export function defaultMobilityModelFor(carrier: Carrier, sample: Sample): string {
+  const majority = netMajorityCarrier(sample);
+  const isMinority = majority !== undefined && carrier !== majority;
+  return isMinority ? defaultMinorityMobilityModel(sample.material) : defaultMobilityModel(sample.material);
+}
+
+/** Silicon's model with minority-carrier physics, which a blank code chooses for minority carriers. */
+export const SILICON_MINORITY_MOBILITY_MODEL: MobilityModelCode = 'klaassen';
+
+/**
+ * The model a blank code chooses for minority carriers of a material:
+ * silicon 'klaassen'; the other materials their single fit (their default).
+ *
+ * @param material - host material
+ * @returns a model code of that material
+ * @example defaultMinorityMobilityModel(SILICON) // 'klaassen'
+ */
+export function defaultMinorityMobilityModel(material: Material): string {
+  return material.code === SILICON.code ? SILICON_MINORITY_MOBILITY_MODEL : defaultMobilityModel(material);
+}
+
+/** A named code parsed for the material, or the carrier's blank-code choice. */
+function modelFor(model: string | undefined, carrier: Carrier, sample: Sample): string {
+  if (model === undefined || model.trim() === '') return defaultMobilityModelFor(carrier, sample);
+  return resolveMobilityModel(model, sample.material);
+}
+
+/**
+ * The factor that turns the published mobility of a carrier into its
+ * free-carrier drift mobility: fullIonizationCorrection (≈ N_net / n_eq at
+ * 300 K) for the net-majority carrier under a silicon model, 1 for minority
+ * carriers and for the material fits (fitted to free-carrier data already,
+ * materialFits.ts).
+ */
+function freeCarrierFactor(code: string, carrier: Carrier, sample: Sample): number {
+  if (materialMobilityFit(code) !== undefined) return 1;
+  return carrier === netMajorityCarrier(sample) ? fullIonizationCorrection(sample) : 1;
+}
+
+/**
+ * Mobility of a carrier as the named model publishes it (DRIFT.MOBILITY):
+ * the fit's conductivity mobility at the total impurity density, at the
+ * sample's temperature. A blank model chooses per carrier
+ * (defaultMobilityModelFor: 'klaassen' for silicon minority carriers).
+ *
+ * @param model - mobility model code (case-insensitive); '' for the carrier's default
+ * @param carrier - 'electron' or 'hole'
+ * @param sample - the sample
+ * @returns μ in cm²/(V·s)
+ * @example mobility('masetti', 'electron', arsenic1e18At300K) // ≈ 284 (Masetti et al. 1983, eq. 1)
+ * @example mobility('', 'electron', boron1e19At300K) // ≈ 210 (klaassen, minority electrons)
+ */
+export function mobility(model: string, carrier: Carrier, sample: Sample): number {
+  const code = modelFor(model, carrier, sample);
+  return checked(fitted(code, carrier, sample), 'the mobility', carrier, sample);
+}
+
+/**
+ * Mobility per free carrier (DRIFT.FREEMOBILITY): the published mobility of
+ * `mobility` times freeCarrierFactor, so that with n, p from the equilibrium
+ * solve σ = q(n·μn,free + p·μp,free) equals `conductivity` for the same named
+ * model. The silicon fits were made as μ = σ/(qN) with every dopant counted
+ * as ionized; per free carrier (n < N at 300 K) the same σ needs μ·N/n.
+ * Equal to `mobility` for minority carriers and for the Ge, GaAs and 4H-SiC
+ * fits. A blank model chooses per carrier as `mobility` does.
+ *
+ * @param model - mobility model code (case-insensitive); '' for the carrier's default
+ * @param carrier - 'electron' or 'hole'
+ * @param sample - the sample
+ * @returns μ_free in cm²/(V·s)
+ * @example freeCarrierMobility('masetti', 'hole', boron1e18At300K) // ≈ 210 (Masetti 160 × 1.31)
+ */
+export function freeCarrierMobility(model: string, carrier: Carrier, sample: Sample): number {
+  const code = modelFor(model, carrier, sample);
+  return checked(fitted(code, carrier, sample) * freeCarrierFactor(code, carrier, sample), 'the free-carrier mobility', carrier, sample);
+}
+
+/** Free-carrier drift mobilities of both carriers under one model. */
 export interface DriftMobilities {
   readonly electron: number;
   readonly hole: number;
 }
 
 /**
- * Drift mobilities of electrons and holes in a sample: the fit for each
- * carrier, with the net-majority carrier's fit multiplied by
- * fullIonizationCorrection (≈ N_net / n_eq at 300 K). This is the single place
- * both `mobility` and `conductivity` take their mobilities from, so
- * σ = q(nμn + pμp) holds exactly with μ from `mobility`.
+ * Free-carrier mobilities of electrons and holes under one model, as
+ * conductivity and the saturating current density use them: both carriers
+ * take the same model (a blank code is the material's default for both,
+ * unlike `mobility`'s per-carrier choice), each value equal to
+ * freeCarrierMobility for that model.
  *
- * @param model - mobility model code (case-insensitive)
+ * @param model - mobility model code (case-insensitive); '' for the material's default
  * @param sample - the sample
  * @returns { electron, hole } in cm²/(V·s)
  * @example driftMobilities('masetti', phosphorus1e18At300K) // { electron: ≈ 343 (277 × 1.24), hole: ≈ 160 }
  */
 export function driftMobilities(model: string, sample: Sample): DriftMobilities {
   const code = resolveMobilityModel(model, sample.material);
-  const majority = netMajorityCarrier(sample);
-  // Material fits describe free carriers already (materialFits.ts): no correction.
-  const corrected = majority !== undefined && materialMobilityFit(code) === undefined;
-  const correction = corrected ? fullIonizationCorrection(sample) : 1;
-  const drift = (carrier: Carrier): number => {
-    const fit = fitted(code, carrier, sample);
-    return checked(carrier === majority ? fit * correction : fit, 'the drift mobility', carrier, sample);
-  };
+  const drift = (carrier: Carrier): number =>
+    checked(fitted(code, carrier, sample) * freeCarrierFactor(code, carrier, sample), 'the free-carrier mobility', carrier, sample);
   return { electron: drift('electron'), hole: drift('hole') };
-}
-
-/**
- * Drift mobility of free carriers, used everywhere in transport: the fit
- * times ≈ N_net / n_eq(300 K) for the net-majority carrier, the fit unchanged
- * for the other (see fullIonizationCorrection for why).
- *
- * @param model - mobility model code (case-insensitive)
- * @param carrier - 'electron' or 'hole'
- * @param sample - the sample
- * @returns μ in cm²/(V·s)
- * @example mobility('masetti', 'hole', boron1e18At300K) // ≈ 210 (fit 160 × 1.31)
- */
-export function mobility(model: string, carrier: Carrier, sample: Sample): number {
-  return driftMobilities(model, sample)[carrier];
 }
 
 /**
  * Diffusivity from the generalized Einstein relation
  * D = μ·(kT/q)·F½(η)/F−½(η), η the carrier's reduced Fermi level relative to
  * its band edge in the sample's equilibrium (Fermi–Dirac statistics, parabolic
- * bands; bands/einsteinRelation.ts), with μ the drift mobility of `mobility`.
+ * bands; bands/einsteinRelation.ts), with μ the published mobility of `mobility`
+ * (a blank model chooses per carrier as there).
  * It is μ·kT/q for non-degenerate carriers (factor 1 + e^η/2^{3/2}) and larger
  * in degenerate material (about 2.1 for electrons in 1e20 cm⁻³ P-doped Si at 300 K).
  *
@@ -236,7 +321,7 @@ export function mobility(model: string, carrier: Carrier, sample: Sample): numbe
  * @param carrier - 'electron' or 'hole'
  * @param sample - the sample
  * @returns D in cm²/s
- * @example diffusivity('masetti', 'electron', phosphorus1e16At300K) // ≈ 30.7
+ * @example diffusivity('masetti', 'electron', phosphorus1e16At300K) // ≈ 30.6
  */
 export function diffusivity(model: string, carrier: Carrier, sample: Sample): number {
   const drift = mobility(model, carrier, sample);

@@ -54,10 +54,10 @@
  *   densities, n = N_D in n-type at 300 K). We pass dopant densities N_D, N_A
  *   and equilibrium carriers, with the net-majority carrier's density
  *   multiplied by fullIonizationCorrection (≈ N_net/n_eq(300 K)) — the same
- *   factor driftMobilities applies to that carrier's mobility. At 300 K the
+ *   factor freeCarrierMobility applies to that carrier's mobility. At 300 K the
  *   majority density is then N_net exactly as in Klaassen's fit, so
  *   σ = q·n·μ_drift = q·N_net·μ_Klaassen(N) reproduces the fitted resistivity as
- *   for the other silicon fits; away from 300 K freeze-out (fewer screening
+ *   for the other silicon fits (DRIFT.MOBILITY returns μ_Klaassen itself); away from 300 K freeze-out (fewer screening
  *   carriers) and intrinsic carriers (electron–hole scattering) still enter.
  * - Dopant species. Klaassen's parameters are species-independent apart from
  *   donor vs acceptor clustering; every donor (acceptor) uses the donor
@@ -433,8 +433,9 @@ export function klaassenSampleDensities(sample: Sample): KlaassenDensities {
 }
 
 /**
- * Klaassen's fitted mobility for a carrier in a sample (the fit value that
- * driftMobilities then treats like the other silicon fits).
+ * Klaassen's mobility for a carrier in a sample, as published (n = N_net for
+ * the majority carrier at 300 K, see klaassenSampleDensities); freeCarrierMobility
+ * then treats it like the other silicon fits.
  *
  * @param carrier - 'electron' or 'hole'
  * @param sample - a silicon sample

@@ -1,9 +1,12 @@
 import {
   DEFAULT_MOBILITY_MODEL,
   MOBILITY_MODEL_CODES,
+  defaultMinorityMobilityModel,
+  defaultMobilityModelFor,
   diffusivity,
   driftMobilities,
   fitMobility,
+  freeCarrierMobility,
   mobility,
   resolveMobilityModel,
 } from '../../../src/physics/mobility';
@@ -14,7 +17,7 @@ import { fullIonizationCorrection } from '../../../src/physics/mobility/fullIoni
 import { thermalVoltage } from '../../../src/physics/constants';
 import { einsteinDegeneracyFactor } from '../../../src/physics/bands';
 import { solveEquilibrium } from '../../../src/physics/equilibrium';
-import { SILICON } from '../../../src/physics/materials';
+import { GALLIUM_ARSENIDE, GERMANIUM, SILICON, SILICON_CARBIDE_4H } from '../../../src/physics/materials';
 import { sampleDopants } from '../../../src/physics/sample';
 import { PhysicsDomainError } from '../../../src/physics/errors';
 import { siliconSample } from '../transportSamples';
@@ -73,29 +76,71 @@ describe('fitMobility', () => {
   });
 });
 
-describe('mobility (drift)', () => {
+describe('mobility (the named model as published)', () => {
+  it('is the fit itself for both carriers under every named silicon model (no ionization factor)', () => {
+    for (const model of MOBILITY_MODEL_CODES) {
+      const sample = siliconSample('P', 1e18, 250);
+      expect(mobility(model, 'electron', sample)).toBe(fitMobility(model, 'electron', sample));
+      expect(mobility(model, 'hole', sample)).toBe(fitMobility(model, 'hole', sample));
+    }
+  });
+});
+
+describe('freeCarrierMobility (mobility per free carrier)', () => {
   it('is the fit times N_net/n_net(300 K) for the net-majority carrier and the fit for the other', () => {
     for (const model of MOBILITY_MODEL_CODES) {
       const sample = siliconSample('P', 1e18, 250);
-      expect(mobility(model, 'electron', sample)).toBe(fitMobility(model, 'electron', sample) * fullIonizationCorrection(sample));
-      expect(mobility(model, 'hole', sample)).toBe(fitMobility(model, 'hole', sample));
+      expect(freeCarrierMobility(model, 'electron', sample)).toBe(fitMobility(model, 'electron', sample) * fullIonizationCorrection(sample));
+      expect(freeCarrierMobility(model, 'hole', sample)).toBe(fitMobility(model, 'hole', sample));
     }
   });
   it('applies the factor to the counter-dopant’s carrier when counter-doping outweighs the named dopant', () => {
     const sample = siliconSample('P', 1e17, 300, 1e18);
-    expect(mobility('masetti', 'hole', sample)).toBe(fitMobility('masetti', 'hole', sample) * fullIonizationCorrection(sample));
-    expect(mobility('masetti', 'electron', sample)).toBe(fitMobility('masetti', 'electron', sample));
+    expect(freeCarrierMobility('masetti', 'hole', sample)).toBe(fitMobility('masetti', 'hole', sample) * fullIonizationCorrection(sample));
+    expect(freeCarrierMobility('masetti', 'electron', sample)).toBe(fitMobility('masetti', 'electron', sample));
   });
   it('equals the shared driftMobilities used by conductivity', () => {
     const sample = siliconSample('B', 3e18, 350, 1e17);
     const both = driftMobilities('arora', sample);
-    expect(mobility('arora', 'electron', sample)).toBe(both.electron);
-    expect(mobility('arora', 'hole', sample)).toBe(both.hole);
+    expect(freeCarrierMobility('arora', 'electron', sample)).toBe(both.electron);
+    expect(freeCarrierMobility('arora', 'hole', sample)).toBe(both.hole);
+  });
+});
+
+describe('blank model: chosen per carrier', () => {
+  it('is klaassen for silicon minority carriers and masetti for majority carriers', () => {
+    const pType = siliconSample('B', 1e19);
+    expect(defaultMobilityModelFor('electron', pType)).toBe('klaassen');
+    expect(defaultMobilityModelFor('hole', pType)).toBe('masetti');
+    expect(mobility('', 'electron', pType)).toBe(mobility('klaassen', 'electron', pType));
+    expect(mobility('', 'hole', pType)).toBe(mobility('masetti', 'hole', pType));
+    expect(freeCarrierMobility('', 'electron', pType)).toBe(freeCarrierMobility('klaassen', 'electron', pType));
+    expect(freeCarrierMobility('', 'hole', pType)).toBe(freeCarrierMobility('masetti', 'hole', pType));
+  });
+  it('follows the net doping: in P-doped Si counter-doped with more acceptors the electrons are the minority', () => {
+    const typeChanged = siliconSample('P', 1e17, 300, 1e18);
+    expect(defaultMobilityModelFor('electron', typeChanged)).toBe('klaassen');
+    expect(defaultMobilityModelFor('hole', typeChanged)).toBe('masetti');
+  });
+  it('has no minority carrier in exactly compensated material: the default for both', () => {
+    const compensated = siliconSample('P', 1e17, 300, 1e17);
+    expect(defaultMobilityModelFor('electron', compensated)).toBe('masetti');
+    expect(defaultMobilityModelFor('hole', compensated)).toBe('masetti');
+  });
+  it('keeps each other material’s own fit for both carriers', () => {
+    for (const [material, code] of [[GERMANIUM, 'hilsum'], [GALLIUM_ARSENIDE, 'sotoodeh'], [SILICON_CARBIDE_4H, 'roschke-schwierz']] as const) {
+      expect(defaultMinorityMobilityModel(material)).toBe(code);
+    }
+    expect(defaultMinorityMobilityModel(SILICON)).toBe('klaassen');
+  });
+  it('uses the carrier’s choice in diffusivity too', () => {
+    const pType = siliconSample('B', 1e18);
+    expect(diffusivity('', 'electron', pType)).toBe(diffusivity('klaassen', 'electron', pType));
   });
 });
 
 describe('diffusivity', () => {
-  it('is the generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) with the drift mobility', () => {
+  it('is the generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) with the published mobility', () => {
     for (const t of [77, 300, 600]) {
       const sample = siliconSample('As', 1e17, t);
       const state = solveEquilibrium(SILICON, t, sampleDopants(sample));
@@ -110,7 +155,7 @@ describe('diffusivity', () => {
     const sample = siliconSample('As', 5e19, 300);
     expect(diffusivity('masetti', 'electron', sample) / (mobility('masetti', 'electron', sample) * thermalVoltage(300))).toBeGreaterThan(1.2);
   });
-  it('is about 30.7 cm²/s for electrons in 1e16 P-doped Si at 300 K (Masetti 1983: 1184 × 1.004 ionization factor × kT/q 0.02585)', () => {
+  it('is about 30.6 cm²/s for electrons in 1e16 P-doped Si at 300 K (Masetti et al. 1983 eq. 1: 1184 × kT/q 0.02585)', () => {
     expect(diffusivity('masetti', 'electron', siliconSample('P', 1e16))).toBeGreaterThan(30.4);
     expect(diffusivity('masetti', 'electron', siliconSample('P', 1e16))).toBeLessThan(30.9);
   });

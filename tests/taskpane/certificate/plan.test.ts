@@ -166,9 +166,9 @@ describe('options', () => {
     await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, typeMeansConductivity: false });
     const values = port.engineValues();
     expect(valueAt(values, TOP + 1, FIRST_NEW)).toBe('P');
-    expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'P')).toBeCloseTo(1, 12);
+    expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'P', 300, 'masetti')).toBeCloseTo(1, 12);
     // N is not an element symbol: the functions read it as the generic donor either way.
-    expect(numberAt(values, TOP + 3, FIRST_NEW + 1) / value('DOPING', 3, 'n')).toBeCloseTo(1, 12);
+    expect(numberAt(values, TOP + 3, FIRST_NEW + 1) / value('DOPING', 3, 'n', 300, 'masetti')).toBeCloseTo(1, 12);
   });
 
   it('without a type column, every row uses the dopant parameter cell', async () => {
@@ -247,7 +247,7 @@ describe('refusals and warnings', () => {
     [{ neededMin: 0 }, /Needed doping min must be a number above 0/],
     [{ neededMax: Number.NaN }, /Needed doping max must be a number/],
     [{ temperatureK: 5 }, /Temperature must be 20–1000 K; got 5/],
-    [{ model: 'nobody' }, /Unknown model 'nobody': allowed are masetti/],
+    [{ model: 'nobody' }, /Unknown model 'nobody': allowed are f723-anchored, masetti/],
     [{ material: 'Xx' }, /Unknown material 'Xx': allowed are Si/],
     [{ thicknessUnit: null }, /thickness column 'Thickness \(um\)' names no unit the check knows/],
     [{ resistivityUnit: '' }, /Choose the unit of the resistivity columns/],
