@@ -20,7 +20,7 @@ Other materials have their own fit, which is their default (blank model): hilsum
   result: { unit: 'cm²/(V·s)', description: 'Drift mobility' },
   parameters: [doping, dopant, temperature, carrier, mobilityModel, material, counterDoping] as const,
   examples: [
-    { formula: '=DRIFT.MOBILITY(1e16,"P")', note: 'electrons in 1e16 cm⁻³ phosphorus-doped Si at 300 K' },
+    { formula: '=DRIFT.MOBILITY(1e16,"phosphorus")', note: 'electrons in 1e16 cm⁻³ phosphorus-doped Si at 300 K' },
     { formula: '=DRIFT.MOBILITY(1e17,"B",300,"minority")', note: 'minority electrons in p-type Si' },
     { formula: '=DRIFT.MOBILITY(A2:A30,"As",,,"arora")', note: 'a doping column with the Arora model' },
     { formula: '=DRIFT.MOBILITY(1e19,"B",300,"minority","klaassen")', note: 'minority electrons in p+ Si with Klaassen’s model' },

@@ -29,9 +29,9 @@ Validity: silicon only (other materials give an error), dopant densities of abou
   result: { unit: 'cm⁻³', description: 'Effective intrinsic density ni_eff' },
   parameters: [doping, dopant, temperature, bandgapNarrowingModel, material] as const,
   examples: [
-    { formula: '=DRIFT.NIEFF(1e19,"P")', note: 'about 3.1e10 cm⁻³ in 1e19 cm⁻³ phosphorus-doped Si at 300 K' },
+    { formula: '=DRIFT.NIEFF(1e19,"phosphorus")', note: 'about 3.1e10 cm⁻³ in 1e19 cm⁻³ phosphorus-doped Si at 300 K' },
     { formula: '=DRIFT.NIEFF(1e20,"B",300,"slotboom-1976")', note: 'the original 1976 parameters for a boron-doped emitter' },
-    { formula: '=DRIFT.NIEFF(1e19,"P")^2/DRIFT.MAJORITY(1e19,"P")', note: 'the minority holes in a 1e19 cm⁻³ n+ region with narrowing' },
+    { formula: '=DRIFT.NIEFF(1e19,"phosphorus")^2/DRIFT.MAJORITY(1e19,"phosphorus")', note: 'the minority holes in a 1e19 cm⁻³ n+ region with narrowing' },
   ],
   models: BANDGAP_NARROWING_MODELS,
   compute: (density, dopantCode, temperatureK, model, materialValue) => {
