@@ -14,7 +14,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
     // 1e19–1e20 well above majority). Drift values: minority 211 (fit, no correction), majority
     // 128 (fit 115 × the 300 K full-ionization factor 1.11).
     const minority = value('DRIFT.MOBILITY', 1e19, 'B', 300, 'minority', 'klaassen');
-    const majority = value('DRIFT.MOBILITY', 1e19, 'P', 300, 'majority', 'klaassen');
+    const majority = value('DRIFT.MOBILITY', 1e19, 'phosphorus', 300, 'majority', 'klaassen');
     expect(minority / majority).toBeGreaterThan(1.5);
     expect(minority / majority).toBeLessThan(2);
     expect(minority).toBeCloseTo(211, -1);
@@ -24,7 +24,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
   });
 
   it('is accepted case-insensitively and listed in the model argument', () => {
-    expect(value('MOBILITY', 1e17, 'P', 300, 'majority', 'Klaassen')).toBe(value('MOBILITY', 1e17, 'P', 300, 'majority', 'klaassen'));
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'Klaassen')).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'klaassen'));
     const model = findFunction('MOBILITY')!.parameters.find((p) => p.name === 'model')!;
     expect(model.details).toContain('klaassen');
     expect(findFunction('MOBILITY')!.models).toContain('klaassen');
@@ -32,7 +32,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
 
   it('keeps 300 K resistivity close to the default (Masetti) for P: within 0.1 % at 1e14–1e19 cm⁻³', () => {
     for (const n of [1e14, 1e16, 1e18, 1e19]) {
-      expect(value('RESISTIVITY', n, 'P', 300, 'klaassen') / value('RESISTIVITY', n, 'P', 300)).toBeCloseTo(1, 3);
+      expect(value('RESISTIVITY', n, 'phosphorus', 300, 'klaassen') / value('RESISTIVITY', n, 'phosphorus', 300)).toBeCloseTo(1, 3);
     }
   });
 
