@@ -192,7 +192,7 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
       const match = spellings().get(value.trim().toLowerCase());
       if (match === undefined) {
         const also = aliases ? `; also ${Object.keys(aliases).join(', ')}` : '';
-        throw new InputError(`${name} "${value}" is not known; allowed (any case): ${choices().join(', ')}${also}`);
+        throw new InputError(`${name} "${value}" is not known; allowed: ${choices().join(', ')}${also}`);
       }
       return resolve(match);
     },

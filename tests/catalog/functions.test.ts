@@ -90,7 +90,7 @@ describe('arguments', () => {
     expect(value('INTRINSIC', 300)).toBe(value('INTRINSIC', 300, 'si', 'MISIAKOS'));
   });
 
-  it('reads P as phosphorus and p as a generic acceptor', () => {
+  it('reads dopant words and symbols in any case', () => {
     expect(value('MAJORITY', 1e16, 'acceptor')).toBe(value('HOLES', 0, 1e16));
     expect(value('MAJORITY', 1e16, 'phosphorus')).toBeCloseTo(value('MAJORITY', 1e16, ' Phosphorus '), 0);
     expect(value('MOBILITY', 1e18, 'as')).toBe(value('MOBILITY', 1e18, 'As'));

@@ -21,7 +21,7 @@ describe('material argument', () => {
     expect(new Set(codes).size).toBe(codes.length);
     const description = findFunction('RESISTIVITY')!.parameters.find((p) => p.name === 'dopant')!.details;
     expect(description).toContain('GaAs: Zn, Be, C, Mg, Si, Te, Se, Sn');
-    expect(description).toContain('4H-SiC: Al, B, N, P');
+    expect(description).toContain('4H-SiC: Al, B, nitrogen, phosphorus');
   });
 
   it('shows blank model arguments as the material’s default', () => {
@@ -72,7 +72,7 @@ describe('clear errors for what a material has no parameters for', () => {
     [['RESISTIVITY', 1e16, 'Al', 300, 'astm-f723', '4H-SiC'], "#VALUE! resistivity model 'astm-f723' has parameters for silicon only; 4H silicon carbide supports: roschke-schwierz"],
     [['DOPING', 1, 'B', 300, 'arora', 'Ge'], "#VALUE! resistivity model 'arora' has parameters for silicon only; germanium supports: hilsum"],
     [['INTRINSIC', 300, 'Ge', 'misiakos'], "#VALUE! intrinsic density model 'misiakos' has parameters for silicon only; germanium supports: dos"],
-    [['RESISTIVITY', 1e16, 'B', 300, null, 'GaAs'], "#VALUE! unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, n, p"],
+    [['RESISTIVITY', 1e16, 'B', 300, null, 'GaAs'], "#VALUE! unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor"],
     [['RESISTIVITY', 1e16, 'Zn', 300, null, 'Si'], "#VALUE! unknown dopant 'Zn' for silicon"],
     [['MOBILITY', 1e16, 'phosphorus', 300, null, 'drude', 'Ge'], '#VALUE! model "drude" is not known'],
   ] as const)('%j', (call, expected) => {

@@ -234,7 +234,7 @@ describe('references across sheets', () => {
   it('reads ranges and cells of another sheet, quoted names included', () => {
     build({
       'Lot data': [['lot', 'rho min', 'rho max'], ['NQ-1', 4, 6]],
-      Results: [["=DRIFT.DOPING('Lot data'!B2:C2,\"P\")", null, "=DRIFT.SHEETRES('Lot data'!B2,10)"]],
+      Results: [["=DRIFT.DOPING('Lot data'!B2:C2,\"phosphorus\")", null, "=DRIFT.SHEETRES('Lot data'!B2,10)"]],
     });
     const results = engine.getSheetId('Results') as number;
     expect(engineGrid(rangeValues(results, 0, 0, 0, 1))).toEqual(direct('DOPING', [[[4, 6]], 'phosphorus']));
