@@ -180,6 +180,7 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
     optional,
     defaultText: defaultCode,
     choices,
+    aliases: aliases ? Object.keys(aliases) : undefined,
     zeroIsBlank: true,
     parse(value) {
       if (value === null || (typeof value === 'string' && value.trim() === '')) {
