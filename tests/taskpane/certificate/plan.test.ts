@@ -169,7 +169,7 @@ describe('options', () => {
     expect(valueAt(values, TOP + 1, FIRST_NEW)).toBe('phosphorus');
     expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'phosphorus')).toBeCloseTo(1, 12);
     expect(valueAt(values, TOP + 3, FIRST_NEW)).toBe('nitrogen');
-    expect(valueAt(values, TOP + 3, FIRST_NEW + 1)).toMatchObject({ error: '#VALUE!' });
+    expect(valueAt(values, TOP + 3, FIRST_NEW + 1)).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringContaining("unknown dopant 'nitrogen' for silicon") });
   });
 
   it('reads a lone p or n on the certificate as P or N: the same word in any case, whichever the switch', async () => {
