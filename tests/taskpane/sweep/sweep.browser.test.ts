@@ -55,7 +55,7 @@ describe('Sweep builder in Chromium', () => {
     expect(await announced(page)).toMatch(/^Inserted at Sheet1!B2:F17: =DRIFT\.RESISTIVITY\(B5:B17,"phosphorus",C4:F4\) in C5 spills 13 × 4 values; chart added \(log x, log y\)\.$/);
 
     const table = await readBlock(page, cells({ row: 1, column: 1, rowCount: 16, columnCount: 5 }));
-    expect(table.values[0][0]).toBe('Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, P');
+    expect(table.values[0][0]).toBe('Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, phosphorus');
     expect(table.values[1]).toEqual(['Temperature (°C) →', -25, 25, 75, 125]);
     expect(table.values[2]).toEqual(['Doping (cm⁻³) ↓ · Temperature (K) →', 248.15, 298.15, 348.15, 398.15]);
     const doping = table.values.slice(3).map((row) => row[0] as number);
