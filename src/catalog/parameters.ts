@@ -145,7 +145,8 @@ interface CodeOptions<T> {
 /**
  * The canonical code for each spelling, lower case; throws if two spellings
  * are the same case-insensitively, so no code can differ from another by case
- * alone (the catalog fails to load rather than read a code two ways).
+ * alone (the argument fails, as an internal error, rather than read a code
+ * two ways; tests/catalog/codeCase.test.ts parses every code of every argument).
  */
 export function spellingTable(name: string, codes: readonly string[], aliases: Readonly<Record<string, string>> = {}): Map<string, string> {
   const table = new Map<string, string>();
