@@ -25,7 +25,7 @@ export function handTypedFit(cell: string): string {
 
 /** The DRIFT call for the same carrier and model. */
 export function driftCall(cell: string): string {
-  return `=DRIFT.MOBILITY(${cell},"P",300,"majority","caughey-thomas")`;
+  return `=DRIFT.MOBILITY(${cell},"phosphorus",300,"majority","caughey-thomas")`;
 }
 
 /** rows × columns doping values, then as many formulas, each referring to its doping cell. */

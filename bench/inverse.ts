@@ -42,7 +42,7 @@ function stats(values: readonly number[]): { max: number; mean: number } {
 
 /** Runs benchmark 4. */
 export function runInverse(elements = 100): Section {
-  const phosphorus = resolveDopant(SILICON, 'P');
+  const phosphorus = resolveDopant(SILICON, 'phosphorus');
   const densities = Array.from({ length: elements }, (_, i) => dopingAt(i, elements));
   const rhos = densities.map((n) => resistivity({ material: SILICON, temperature: 300, dopant: phosphorus, density: n, counterDensity: 0 }));
   const densityColumn = densities.map((n) => [n]);
@@ -56,11 +56,11 @@ export function runInverse(elements = 100): Section {
   };
   const [forwardMs, inverseMs, majorityMs, coldForwardMs, coldInverseMs] = sideBySide(
     [
-      () => consume(evaluate(spec('RESISTIVITY'), [densityColumn, 'P']).length),
-      () => consume(evaluate(spec('DOPING'), [rhoColumn, 'P']).length),
-      () => consume(evaluate(spec('MAJORITY'), [densityColumn, 'P']).length),
-      () => consume(evaluate(spec('RESISTIVITY'), [densityColumn, 'P', coldTemperatures()]).length),
-      () => consume(evaluate(spec('DOPING'), [rhoColumn, 'P', coldTemperatures()]).length),
+      () => consume(evaluate(spec('RESISTIVITY'), [densityColumn, 'phosphorus']).length),
+      () => consume(evaluate(spec('DOPING'), [rhoColumn, 'phosphorus']).length),
+      () => consume(evaluate(spec('MAJORITY'), [densityColumn, 'phosphorus']).length),
+      () => consume(evaluate(spec('RESISTIVITY'), [densityColumn, 'phosphorus', coldTemperatures()]).length),
+      () => consume(evaluate(spec('DOPING'), [rhoColumn, 'phosphorus', coldTemperatures()]).length),
     ],
     9,
   );

@@ -26,7 +26,7 @@ export async function writeWaferLog(file: string, rows: number): Promise<void> {
     const boron = i % 3 !== 0;
     // Invented: resistivities spread over 1–20 Ω·cm in a repeating pattern.
     const rho = Number((1 + ((i * 7919) % 1900) / 100).toFixed(2));
-    sheet.addRow([`LOT${String(Math.floor(i / 25) + 1).padStart(4, '0')}`, (i % 25) + 1, boron ? 'B' : 'P', rho, 725]);
+    sheet.addRow([`LOT${String(Math.floor(i / 25) + 1).padStart(4, '0')}`, (i % 25) + 1, boron ? 'B' : 'phosphorus', rho, 725]);
     const row = sheet.getRow(r);
     const formulas = [
       `=DRIFT.DOPING(D${r},C${r})`,

@@ -5,7 +5,8 @@
 import {
   SILICON,
   MATERIAL_CODES,
-  dopantCodes,
+  dopantCodeProblem,
+  typedDopantCodes,
   intrinsicModelCodes,
   mobilityModelCodes,
   defaultMobilityModel,
@@ -66,26 +67,28 @@ export const material = codeParameter<Material>({
 });
 
 /**
- * Every dopant code any material accepts, each once, in material order; the
- * material decides which apply. Codes are distinct as written ('P' phosphorus
- * and 'p' the generic acceptor, 'N' nitrogen and 'n' the generic donor).
+ * Every dopant code any material accepts as typed, each once, in material
+ * order; the material decides which apply. A lone P or N is not among them:
+ * it is refused as ambiguous, and "phosphorus" / "nitrogen" are listed instead.
  */
 export function allDopantCodes(): readonly string[] {
-  return allCodes(dopantCodes);
+  return allCodes(typedDopantCodes);
 }
 
-/** A material's dopant codes without its generic donor and acceptor. */
+/** A material's typed dopant codes without its generic donor and acceptor. */
 function namedDopantCodes(host: Material): readonly string[] {
-  return dopantCodes(host).filter((code) => code !== host.genericDopants.donor && code !== host.genericDopants.acceptor);
+  return typedDopantCodes(host).filter((code) => code !== host.genericDopants.donor && code !== host.genericDopants.acceptor);
 }
 
 export const dopant = requiredCode({
   name: 'dopant',
-  description: 'Dopant element symbol, e.g. B, P, As for Si (P is phosphorus, p a generic acceptor); list on the help page.',
+  description: 'Dopant: symbol or name (B, As, phosphorus…), or donor / acceptor; any case. List on the help page.',
   details:
-    `Symbols by material: ${perMaterial(namedDopantCodes)}; n / p for a generic donor / acceptor. ` +
-    'Case-insensitive, except that P is phosphorus and p a generic acceptor, N nitrogen and n a generic donor.',
+    `By material: ${perMaterial(namedDopantCodes)}; "donor" / "acceptor" (or "n-type" / "p-type") for a generic donor / acceptor. ` +
+    'Symbols and element names are accepted in any case. A lone P or N is refused, because it could mean the element ' +
+    '(phosphorus, nitrogen) or the conductivity type (p-type, n-type): type "phosphorus" or "acceptor", "nitrogen" or "donor".',
   choices: allDopantCodes,
+  problem: dopantCodeProblem,
 });
 
 export const doping = requiredNumber({
@@ -119,16 +122,30 @@ export const counterDoping = optionalNumber({
   max: MAX_DENSITY,
 });
 
+/** Other spellings of the carriers: plurals, and n / p / e / h as engineers abbreviate them. */
+export const CARRIER_ALIASES: Readonly<Record<string, string>> = {
+  electrons: 'electron',
+  holes: 'hole',
+  n: 'electron',
+  e: 'electron',
+  p: 'hole',
+  h: 'hole',
+};
+
+/** Help-page note on the carrier spellings. */
+export const CARRIER_SPELLINGS = 'Any case; electrons / holes, n / p and e / h are accepted for electron / hole.';
+
 export const carrier: ParameterSpec<CarrierRole> = {
   ...codeParameter<CarrierRole>({
     name: 'carrier',
-    description: 'Which carrier: majority (the type the dopant supplies), minority, electron or hole; blank means majority.',
+    description: 'Which carrier: majority (the type the dopant supplies), minority, electron (n) or hole (p); blank: majority.',
     choices: () => CARRIER_ROLES,
     defaultCode: 'majority',
     resolve: (code) => code as CarrierRole,
+    aliases: CARRIER_ALIASES,
   }),
   details:
-    'majority and minority name the dopant’s own carrier type and the other one. With a blank model the mobility model ' +
+    `${CARRIER_SPELLINGS} majority and minority name the dopant’s own carrier type and the other one. With a blank model the mobility model ` +
     'follows the carrier’s role in the sample by net doping (counter_doping included): in Si the minority carrier gets ' +
     `${SILICON_MINORITY_MOBILITY_MODEL} (minority-carrier physics), the majority carrier ${defaultMobilityModel(SILICON)}; ` +
     'other materials use their own fit for both.',

@@ -138,12 +138,41 @@ interface CodeOptions<T> {
   readonly defaultCode?: string;
   /** Maps a canonical code to the value the implementation receives. */
   readonly resolve: (code: string) => T;
+  /** Other spellings, e.g. { electrons: 'electron' }: alias → code in `choices`. */
+  readonly aliases?: Readonly<Record<string, string>>;
 }
 
-/** A text code (case-insensitive) from a fixed list. */
+/**
+ * The canonical code for each spelling, lower case; throws if two spellings
+ * are the same case-insensitively, so no code can differ from another by case
+ * alone (the argument fails, as an internal error, rather than read a code
+ * two ways; tests/catalog/codeCase.test.ts parses every code of every argument).
+ */
+export function spellingTable(name: string, codes: readonly string[], aliases: Readonly<Record<string, string>> = {}): Map<string, string> {
+  const table = new Map<string, string>();
+  const add = (spelling: string, code: string) => {
+    const key = spelling.trim().toLowerCase();
+    const taken = table.get(key);
+    if (taken !== undefined && taken !== code) {
+      throw new Error(`${name}: "${spelling}" would mean both ${taken} and ${code}`);
+    }
+    table.set(key, code);
+  };
+  for (const code of codes) add(code, code);
+  for (const [alias, code] of Object.entries(aliases)) {
+    if (!codes.includes(code)) throw new Error(`${name}: alias "${alias}" names unknown code ${code}`);
+    add(alias, code);
+  }
+  return table;
+}
+
+/** A text code (case-insensitive, with optional aliases) from a fixed list. */
 export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
-  const { name, description, choices, defaultCode, resolve } = options;
+  const { name, description, choices, defaultCode, resolve, aliases } = options;
   const optional = defaultCode !== undefined;
+  let table: Map<string, string> | undefined;
+  // Built on first use: choices may read tables that are still loading when the catalog module runs.
+  const spellings = () => (table ??= spellingTable(name, choices(), aliases));
   return {
     name,
     type: 'text',
@@ -152,6 +181,7 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
     optional,
     defaultText: defaultCode,
     choices,
+    aliases: aliases ? Object.keys(aliases) : undefined,
     zeroIsBlank: true,
     parse(value) {
       if (value === null || (typeof value === 'string' && value.trim() === '')) {
@@ -161,10 +191,10 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
       if (typeof value !== 'string') {
         throw new InputError(`${name} must be a text code; got ${describeValue(value)}; allowed: ${choices().join(', ')}`);
       }
-      const wanted = value.trim().toLowerCase();
-      const match = choices().find((c) => c.toLowerCase() === wanted);
+      const match = spellings().get(value.trim().toLowerCase());
       if (match === undefined) {
-        throw new InputError(`${name} "${value}" is not known; allowed: ${choices().join(', ')}`);
+        const also = aliases ? `; also ${Object.keys(aliases).join(', ')}` : '';
+        throw new InputError(`${name} "${value}" is not known; allowed: ${choices().join(', ')}${also}`);
       }
       return resolve(match);
     },
@@ -174,10 +204,18 @@ export function codeParameter<T>(options: CodeOptions<T>): ParameterSpec<T> {
 /**
  * A required code whose meaning depends on another argument (a dopant is
  * known only per material), so the implementation resolves it. This parser
- * only insists on non-blank text and hands it on trimmed.
+ * insists on non-blank text, refuses what `problem` names (a code that reads
+ * two ways), and hands the rest on trimmed.
  */
-export function requiredCode(options: { readonly name: string; readonly description: string; readonly details?: string; readonly choices: () => readonly string[] }): ParameterSpec<string> {
-  const { name, description, details, choices } = options;
+export function requiredCode(options: {
+  readonly name: string;
+  readonly description: string;
+  readonly details?: string;
+  readonly choices: () => readonly string[];
+  /** Why a text cannot be taken (the message), or null. */
+  readonly problem?: (text: string) => string | null;
+}): ParameterSpec<string> {
+  const { name, description, details, choices, problem } = options;
   return {
     name,
     type: 'text',
@@ -194,6 +232,8 @@ export function requiredCode(options: { readonly name: string; readonly descript
       if (typeof value !== 'string') {
         throw new InputError(`${name} must be a text code; got ${describeValue(value)}; allowed: ${choices().join(', ')}`);
       }
+      const refusal = problem?.(value);
+      if (refusal) throw new InputError(refusal);
       return value.trim();
     },
   };

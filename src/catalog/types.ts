@@ -20,8 +20,10 @@ export interface ParameterSpec<T = unknown> {
   readonly optional: boolean;
   /** Display form of the default, for help and metadata (e.g. `300`, `Si`). */
   readonly defaultText?: string;
-  /** Allowed codes, for text parameters that take a code. */
+  /** Allowed codes, for text parameters that take a code. Matched in any case. */
   readonly choices?: () => readonly string[];
+  /** Other accepted spellings of those codes (e.g. 'electrons'), matched in any case. */
+  readonly aliases?: readonly string[];
   /**
    * Turns one element into the value the implementation receives. `null`
    * means blank. Throws InputError with a message naming the argument, the

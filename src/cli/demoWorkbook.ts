@@ -38,11 +38,11 @@ interface WaferRecord {
 
 /** Invented: n-type device wafers for the sensing die, p-type wafers for a reference die. */
 const WAFERS: readonly WaferRecord[] = [
-  { lot: 'NQ-2417', wafer: 'W01', dopant: 'P', rhoMin: 4, rhoMax: 6, rhoMeasured: 4.8 },
-  { lot: 'NQ-2417', wafer: 'W02', dopant: 'P', rhoMin: 4, rhoMax: 6, rhoMeasured: 5.3 },
-  { lot: 'NQ-2417', wafer: 'W03', dopant: 'P', rhoMin: 4, rhoMax: 6, rhoMeasured: 6.4 },
-  { lot: 'NQ-2431', wafer: 'W01', dopant: 'P', rhoMin: 4, rhoMax: 6, rhoMeasured: 4.1 },
-  { lot: 'NQ-2431', wafer: 'W02', dopant: 'P', rhoMin: 4, rhoMax: 6, rhoMeasured: 5.9 },
+  { lot: 'NQ-2417', wafer: 'W01', dopant: 'phosphorus', rhoMin: 4, rhoMax: 6, rhoMeasured: 4.8 },
+  { lot: 'NQ-2417', wafer: 'W02', dopant: 'phosphorus', rhoMin: 4, rhoMax: 6, rhoMeasured: 5.3 },
+  { lot: 'NQ-2417', wafer: 'W03', dopant: 'phosphorus', rhoMin: 4, rhoMax: 6, rhoMeasured: 6.4 },
+  { lot: 'NQ-2431', wafer: 'W01', dopant: 'phosphorus', rhoMin: 4, rhoMax: 6, rhoMeasured: 4.1 },
+  { lot: 'NQ-2431', wafer: 'W02', dopant: 'phosphorus', rhoMin: 4, rhoMax: 6, rhoMeasured: 5.9 },
   { lot: 'RB-0932', wafer: 'W07', dopant: 'B', rhoMin: 10, rhoMax: 20, rhoMeasured: 12.5 },
   { lot: 'RB-0932', wafer: 'W08', dopant: 'B', rhoMin: 10, rhoMax: 20, rhoMeasured: 9.2 },
   { lot: 'RB-0932', wafer: 'W09', dopant: 'B', rhoMin: 10, rhoMax: 20, rhoMeasured: 17.9 },

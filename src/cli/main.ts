@@ -36,7 +36,7 @@ begins with "-" needs "--" before it (driftcell calc -- '-1*DRIFT.INTRINSIC(300)
 
 Examples:
   driftcell calc 'DRIFT.RESISTIVITY(1e15,"B")'
-  driftcell calc '=DRIFT.RESISTIVITY({1e15;1e16},"P",{250,300,350})'
+  driftcell calc '=DRIFT.RESISTIVITY({1e15;1e16},"phosphorus",{250,300,350})'
   driftcell calc 'DRIFT.RESISTOR(DRIFT.RESISTIVITY(2e18,"B"),450,15,2.5)/1000'`;
 
 const RECALC_HELP = `

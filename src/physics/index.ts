@@ -37,7 +37,7 @@ export {
   effectiveIntrinsicDensity,
   resolveBandgapNarrowingModel,
 } from './bands';
-export { dopantCodes, resolveDopant, genericDopant, type Dopant, type DopantKind } from './dopants';
+export { dopantCodes, typedDopantCodes, dopantCodeProblem, readDopant, resolveDopant, genericDopant, type Dopant, type DopantKind } from './dopants';
 export { solveEquilibrium, ionizedFraction, type DopantDensity, type Equilibrium } from './equilibrium';
 
 // Samples, mobility, transport, inverse.

@@ -37,7 +37,7 @@ export const CARRIER_ROLES: readonly CarrierRole[] = ['majority', 'minority', 'e
  *
  * @param sample - the sample
  * @returns one or two dopant densities, cm⁻³
- * @example sampleDopants({ ...s, dopant: boron, density: 1e16, counterDensity: 1e15 }) // [B 1e16, generic n 1e15]
+ * @example sampleDopants({ ...s, dopant: boron, density: 1e16, counterDensity: 1e15 }) // [B 1e16, generic donor 1e15]
  */
 export function sampleDopants(sample: Sample): DopantDensity[] {
   const dopants: DopantDensity[] = [{ dopant: sample.dopant, density: sample.density }];

@@ -13,34 +13,34 @@ import { message, value } from './support/call';
 describe('DRIFT.VELOCITY', () => {
   it('is MOBILITY·E at vanishing field for every carrier role, and tends to VSAT at high field', () => {
     for (const role of ['majority', 'minority', 'electron', 'hole']) {
-      const mu = value('MOBILITY', 1e16, 'P', 300, role);
-      expect(value('VELOCITY', 1e-15, 1e16, 'P', 300, role)).toBe(mu * 1e-15);
+      const mu = value('MOBILITY', 1e16, 'phosphorus', 300, role);
+      expect(value('VELOCITY', 1e-15, 1e16, 'phosphorus', 300, role)).toBe(mu * 1e-15);
     }
-    expect(value('VELOCITY', 1e8, 1e16, 'P') / value('VSAT')).toBeCloseTo(1, 2);
+    expect(value('VELOCITY', 1e8, 1e16, 'phosphorus') / value('VSAT')).toBeCloseTo(1, 2);
     expect(value('VELOCITY', -1e8, 1e16, 'B') / -value('VSAT', 300, 'hole')).toBeCloseTo(1, 2);
   });
 
   it('falls short of μE at 100 V/cm for electrons in 1e16 cm⁻³ Si by the percentage its help quotes (documentation check)', () => {
-    const shortfall = 1 - value('VELOCITY', 100, 1e16, 'P') / (100 * value('MOBILITY', 1e16, 'P', 300, 'electron'));
+    const shortfall = 1 - value('VELOCITY', 100, 1e16, 'phosphorus') / (100 * value('MOBILITY', 1e16, 'phosphorus', 300, 'electron'));
     expect(findFunction('VELOCITY')!.help).toContain(`${(100 * shortfall).toFixed(1)} % at 100 V/cm`);
   });
 
   it('defaults to the majority carrier at 300 K in Si', () => {
     expect(value('VELOCITY', 1e4, 1e16, 'B')).toBe(value('VELOCITY', 1e4, 1e16, 'B', 300, 'hole', 'Si'));
-    expect(value('VELOCITY', 1e4, 1e16, 'P')).toBe(value('VELOCITY', 1e4, 1e16, 'P', 300, 'electron'));
+    expect(value('VELOCITY', 1e4, 1e16, 'phosphorus')).toBe(value('VELOCITY', 1e4, 1e16, 'phosphorus', 300, 'electron'));
   });
 
   it('works for Ge, GaAs and 4H-SiC electrons, and refuses 4H-SiC holes', () => {
     expect(value('VELOCITY', 1e-15, 1e16, 'As', 300, 'electron', 'Ge')).toBe(value('MOBILITY', 1e16, 'As', 300, 'electron', null, 'Ge') * 1e-15);
     expect(value('VELOCITY', 1e8, 1e16, 'Si', 300, 'electron', 'GaAs') / value('VSAT', 300, 'electron', 'GaAs')).toBeCloseTo(1, 2);
-    expect(value('VELOCITY', 1e8, 1e16, 'N', 300, 'electron', '4H-SiC') / 2.2e7).toBeCloseTo(1, 2);
-    expect(message('VELOCITY', 1e4, 1e16, 'N', 300, 'minority', '4H-SiC')).toMatch(/no published hole saturation velocity for 4H-SiC/);
+    expect(value('VELOCITY', 1e8, 1e16, 'nitrogen', 300, 'electron', '4H-SiC') / 2.2e7).toBeCloseTo(1, 2);
+    expect(message('VELOCITY', 1e4, 1e16, 'nitrogen', 300, 'minority', '4H-SiC')).toMatch(/no published hole saturation velocity for 4H-SiC/);
   });
 
   it('names the temperature range where no saturation velocity is tabulated', () => {
-    expect(message('VELOCITY', 1e4, 1e16, 'P', 50)).toMatch(/77–1000 K/);
-    expect(message('VELOCITY', 1e4, 1e16, 'N', 400, null, '4H-SiC')).toMatch(/only 300 K/);
-    expect(message('VELOCITY', 'fast', 1e16, 'P')).toMatch(/field_V_per_cm must be a number/);
+    expect(message('VELOCITY', 1e4, 1e16, 'phosphorus', 50)).toMatch(/77–1000 K/);
+    expect(message('VELOCITY', 1e4, 1e16, 'nitrogen', 400, null, '4H-SiC')).toMatch(/only 300 K/);
+    expect(message('VELOCITY', 'fast', 1e16, 'phosphorus')).toMatch(/field_V_per_cm must be a number/);
   });
 });
 
@@ -83,7 +83,7 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
   };
 
   it('is q(n·vn + p·vp) with n, p from MAJORITY/MINORITY and v from VELOCITY’s law at FREEMOBILITY', () => {
-    for (const [field, doping, dopant] of [[3e3, 1e16, 'P'], [-2e4, 1e17, 'B'], [5e5, 1e15, 'As'], [1e4, 1e18, 'B']] as const) {
+    for (const [field, doping, dopant] of [[3e3, 1e16, 'phosphorus'], [-2e4, 1e17, 'B'], [5e5, 1e15, 'As'], [1e4, 1e18, 'B']] as const) {
       const nMajority = value('MAJORITY', doping, dopant);
       const nMinority = value('MINORITY', doping, dopant);
       const expected = ELEMENTARY_CHARGE * (nMajority * freeVelocity(field, doping, dopant, 300, 'majority') + nMinority * freeVelocity(field, doping, dopant, 300, 'minority'));
@@ -103,48 +103,48 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
   });
 
   it('gives J/(σE) → 1 as E → 0 and about 1 − 4e-5 at 1 V/cm in 1e16 cm⁻³ n-type Si', () => {
-    const sigma = value('CONDUCTIVITY', 1e16, 'P'); // the default model, as CURRENTDENSITY's
-    expect(value('CURRENTDENSITY', 1e-15, 1e16, 'P') / (sigma * 1e-15)).toBeCloseTo(1, 13);
+    const sigma = value('CONDUCTIVITY', 1e16, 'phosphorus'); // the default model, as CURRENTDENSITY's
+    expect(value('CURRENTDENSITY', 1e-15, 1e16, 'phosphorus') / (sigma * 1e-15)).toBeCloseTo(1, 13);
     // Shortfall ≈ (μE/v_sat)^β/β with Canali's β ≈ 1.109 (Canali et al. 1975, from memory): 3.7e-5.
-    const shortfall = 1 - value('CURRENTDENSITY', 1, 1e16, 'P') / sigma;
+    const shortfall = 1 - value('CURRENTDENSITY', 1, 1e16, 'phosphorus') / sigma;
     expect(shortfall).toBeGreaterThan(2e-5);
     expect(shortfall).toBeLessThan(6e-5);
   });
 
   it('is about half of σE at 1e4 V/cm in 1e16 cm⁻³ n-type Si, as its help says (documentation check)', () => {
-    const ratio = value('CURRENTDENSITY', 1e4, 1e16, 'P') / (1e4 * value('CONDUCTIVITY', 1e16, 'P'));
+    const ratio = value('CURRENTDENSITY', 1e4, 1e16, 'phosphorus') / (1e4 * value('CONDUCTIVITY', 1e16, 'phosphorus'));
     expect(ratio).toBeGreaterThan(0.4);
     expect(ratio).toBeLessThan(0.6);
   });
 
   it('keeps its argument positions; field_dependence "ohmic" gives σE and other codes are refused', () => {
-    expect(value('CURRENTDENSITY', 1e4, 1e16, 'P', 350, 'Si', 1e15, 'OHMIC')).toBeCloseTo(1e4 * value('CONDUCTIVITY', 1e16, 'P', 350, null, null, 1e15), 8);
-    expect(message('CURRENTDENSITY', 1e4, 1e16, 'P', 300, null, null, 'linear')).toMatch(/allowed: saturating, ohmic/);
+    expect(value('CURRENTDENSITY', 1e4, 1e16, 'phosphorus', 350, 'Si', 1e15, 'OHMIC')).toBeCloseTo(1e4 * value('CONDUCTIVITY', 1e16, 'phosphorus', 350, null, null, 1e15), 8);
+    expect(message('CURRENTDENSITY', 1e4, 1e16, 'phosphorus', 300, null, null, 'linear')).toMatch(/allowed: saturating, ohmic/);
   });
 
   it('works at 77 K in n-type Si, where the refused hole term cannot matter, and refuses p-type Si there', () => {
-    const n77 = value('CURRENTDENSITY', 3e4, 1e16, 'P', 77);
-    expect(n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'P', 77) * freeVelocity(3e4, 1e16, 'P', 77, 'majority'))).toBeCloseTo(1, 12);
+    const n77 = value('CURRENTDENSITY', 3e4, 1e16, 'phosphorus', 77);
+    expect(n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'phosphorus', 77) * freeVelocity(3e4, 1e16, 'phosphorus', 77, 'majority'))).toBeCloseTo(1, 12);
     expect(message('CURRENTDENSITY', 3e4, 1e16, 'B', 77)).toMatch(/102–1000 K.*ohmic/);
   });
 
   it('points to the ohmic form where the saturating form has no data', () => {
-    expect(message('CURRENTDENSITY', 1e3, 1e16, 'P', 40)).toMatch(/77–1000 K.*ohmic/);
+    expect(message('CURRENTDENSITY', 1e3, 1e16, 'phosphorus', 40)).toMatch(/77–1000 K.*ohmic/);
     expect(message('CURRENTDENSITY', 1e3, 1e16, 'Al', 300, '4H-SiC')).toMatch(/no published hole saturation velocity.*ohmic/);
-    expect(value('CURRENTDENSITY', 1e3, 1e16, 'P', 40, null, null, 'ohmic')).toBeGreaterThan(0);
+    expect(value('CURRENTDENSITY', 1e3, 1e16, 'phosphorus', 40, null, null, 'ohmic')).toBeGreaterThan(0);
   });
 });
 
 describe('DRIFT.TCR', () => {
   it('is positive for lightly doped Si at 300 K (about +7000 ppm/K at 1e15 cm⁻³; handbook-level, from memory)', () => {
-    expect(value('TCR', 1e15, 'P')).toBeGreaterThan(5000);
-    expect(value('TCR', 1e15, 'P')).toBeLessThan(9000);
+    expect(value('TCR', 1e15, 'phosphorus')).toBeGreaterThan(5000);
+    expect(value('TCR', 1e15, 'phosphorus')).toBeLessThan(9000);
   });
 
   it('is negative in freeze-out and in the intrinsic regime, and defined at both ends of 20–1000 K', () => {
-    expect(value('TCR', 1e15, 'P', 20)).toBeLessThan(0);
+    expect(value('TCR', 1e15, 'phosphorus', 20)).toBeLessThan(0);
     expect(value('TCR', 1e14, 'B', 600)).toBeLessThan(0);
-    expect(value('TCR', 1e14, 'P', 1000)).toBeLessThan(0);
+    expect(value('TCR', 1e14, 'phosphorus', 1000)).toBeLessThan(0);
   });
 
   it('agrees with a wide central difference of DRIFT.RESISTIVITY to its truncation error', () => {

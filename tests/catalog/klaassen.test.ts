@@ -13,7 +13,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
     // Klaassen (1992) I, minority-carrier effect (from memory: minority electron mobility in p-Si at
     // 1e19–1e20 well above majority). Published model values: minority 211, majority 115.
     const minority = value('DRIFT.MOBILITY', 1e19, 'B', 300, 'minority', 'klaassen');
-    const majority = value('DRIFT.MOBILITY', 1e19, 'P', 300, 'majority', 'klaassen');
+    const majority = value('DRIFT.MOBILITY', 1e19, 'phosphorus', 300, 'majority', 'klaassen');
     expect(minority / majority).toBeGreaterThan(1.5);
     expect(minority / majority).toBeLessThan(2);
     expect(minority).toBeCloseTo(211, -1);
@@ -23,7 +23,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
   });
 
   it('is accepted case-insensitively and listed in the model argument', () => {
-    expect(value('MOBILITY', 1e17, 'P', 300, 'majority', 'Klaassen')).toBe(value('MOBILITY', 1e17, 'P', 300, 'majority', 'klaassen'));
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'Klaassen')).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'klaassen'));
     const model = findFunction('MOBILITY')!.parameters.find((p) => p.name === 'model')!;
     expect(model.details).toContain('klaassen');
     expect(findFunction('MOBILITY')!.models).toContain('klaassen');
@@ -31,7 +31,7 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
 
   it('keeps 300 K resistivity close to the default (Masetti) for P: within 0.1 % at 1e14–1e19 cm⁻³', () => {
     for (const n of [1e14, 1e16, 1e18, 1e19]) {
-      expect(value('RESISTIVITY', n, 'P', 300, 'klaassen') / value('RESISTIVITY', n, 'P', 300, 'masetti')).toBeCloseTo(1, 3);
+      expect(value('RESISTIVITY', n, 'phosphorus', 300, 'klaassen') / value('RESISTIVITY', n, 'phosphorus', 300, 'masetti')).toBeCloseTo(1, 3);
     }
   });
 

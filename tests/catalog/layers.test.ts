@@ -23,7 +23,7 @@ describe('DRIFT.LAYERSHEETRES', () => {
   it('takes the xj that DRIFT.JUNCTIONDEPTH gives, for both profiles', () => {
     for (const profile of ['gaussian', 'erfc']) {
       const xj = value('JUNCTIONDEPTH', 1e20, 0.2, 1e16, profile);
-      expect(value('LAYERSHEETRES', 1e20, xj, 1e16, 'P', profile)).toBeGreaterThan(0);
+      expect(value('LAYERSHEETRES', 1e20, xj, 1e16, 'phosphorus', profile)).toBeGreaterThan(0);
     }
     expect(value('JUNCTIONDEPTH', 1e19, 0.5, 1e15)).toBeCloseTo(0.5 * Math.sqrt(Math.log(1e4)), 12);
   });

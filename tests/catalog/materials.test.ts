@@ -17,11 +17,11 @@ describe('material argument', () => {
 
   it('offers every material’s dopant codes, each once', () => {
     const codes = allDopantCodes();
-    for (const code of ['B', 'Al', 'Ga', 'In', 'P', 'As', 'Sb', 'n', 'p', 'Zn', 'Be', 'C', 'Mg', 'Si', 'Te', 'Se', 'Sn', 'N']) expect(codes).toContain(code);
+    for (const code of ['B', 'Al', 'Ga', 'In', 'phosphorus', 'As', 'Sb', 'donor', 'acceptor', 'Zn', 'Be', 'C', 'Mg', 'Si', 'Te', 'Se', 'Sn', 'nitrogen']) expect(codes).toContain(code);
     expect(new Set(codes).size).toBe(codes.length);
     const description = findFunction('RESISTIVITY')!.parameters.find((p) => p.name === 'dopant')!.details;
     expect(description).toContain('GaAs: Zn, Be, C, Mg, Si, Te, Se, Sn');
-    expect(description).toContain('4H-SiC: Al, B, N, P');
+    expect(description).toContain('4H-SiC: Al, B, nitrogen, phosphorus');
   });
 
   it('shows blank model arguments as the material’s default', () => {
@@ -37,7 +37,7 @@ describe('resistivity of Ge, GaAs and 4H-SiC samples', () => {
   it.each([
     ['Ge', 'Sb', 1e15, 1 / (1.602e-19 * 1e15 * (3900 / (1 + Math.sqrt(1e15 / 1e17)))), 0.05],
     ['GaAs', 'Si', 1e16, 1 / (1.602e-19 * 1e16 * 6460), 0.1],
-    ['4H-SiC', 'N', 1e16, 1 / (1.602e-19 * 1e16 * 865), 0.1],
+    ['4H-SiC', 'nitrogen', 1e16, 1 / (1.602e-19 * 1e16 * 865), 0.1],
   ] as const)('%s:%s at %s cm⁻³ and 300 K is close to 1/(qNμ)', (materialCode, dopant, n, expected, tolerance) => {
     const rho = value('RESISTIVITY', n, dopant, 300, null, materialCode);
     expect(Math.abs(rho / expected - 1)).toBeLessThan(tolerance);
@@ -55,7 +55,7 @@ describe('resistivity of Ge, GaAs and 4H-SiC samples', () => {
   });
 
   it('evaluates the other material-aware functions for each new host', () => {
-    for (const [materialCode, donor] of [['Ge', 'As'], ['GaAs', 'Se'], ['4H-SiC', 'P']] as const) {
+    for (const [materialCode, donor] of [['Ge', 'As'], ['GaAs', 'Se'], ['4H-SiC', 'phosphorus']] as const) {
       expect(value('BANDGAP', 300, materialCode)).toBeGreaterThan(0.6);
       expect(value('CONDUCTIONDOS', 300, materialCode)).toBeGreaterThan(1e17);
       expect(value('VALENCEDOS', 300, materialCode)).toBeGreaterThan(1e18);
@@ -73,9 +73,9 @@ describe('clear errors for what a material has no parameters for', () => {
     [['RESISTIVITY', 1e16, 'Al', 300, 'astm-f723', '4H-SiC'], "#VALUE! resistivity model 'astm-f723' has parameters for silicon only; 4H silicon carbide supports: roschke-schwierz"],
     [['DOPING', 1, 'B', 300, 'arora', 'Ge'], "#VALUE! resistivity model 'arora' has parameters for silicon only; germanium supports: hilsum"],
     [['INTRINSIC', 300, 'Ge', 'misiakos'], "#VALUE! intrinsic density model 'misiakos' has parameters for silicon only; germanium supports: dos"],
-    [['RESISTIVITY', 1e16, 'B', 300, null, 'GaAs'], "#VALUE! unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, n, p"],
+    [['RESISTIVITY', 1e16, 'B', 300, null, 'GaAs'], "#VALUE! unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor"],
     [['RESISTIVITY', 1e16, 'Zn', 300, null, 'Si'], "#VALUE! unknown dopant 'Zn' for silicon"],
-    [['MOBILITY', 1e16, 'P', 300, null, 'drude', 'Ge'], '#VALUE! model "drude" is not known'],
+    [['MOBILITY', 1e16, 'phosphorus', 300, null, 'drude', 'Ge'], '#VALUE! model "drude" is not known'],
   ] as const)('%j', (call, expected) => {
     const [name, ...args] = call;
     expect(message(name, ...args)).toContain(expected);

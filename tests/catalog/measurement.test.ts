@@ -15,7 +15,7 @@ function grid(name: string, ...args: ArgumentInput[]): CellOutput[][] {
 
 describe('DRIFT.DOPINGRANGE', () => {
   it('is [DRIFT.DOPING(ρmax), DRIFT.DOPING(ρmin)] with the default model', () => {
-    for (const [lo, hi, dopant, t] of [[8, 12, 'B', null], [1, 3, 'P', 350], [0.005, 0.02, 'Sb', null]] as const) {
+    for (const [lo, hi, dopant, t] of [[8, 12, 'B', null], [1, 3, 'phosphorus', 350], [0.005, 0.02, 'Sb', null]] as const) {
       expect(grid('DOPINGRANGE', lo, hi, dopant, t)).toEqual([[value('DOPING', hi, dopant, t), value('DOPING', lo, dopant, t)]]);
     }
   });

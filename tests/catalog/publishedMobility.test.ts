@@ -48,7 +48,7 @@ describe('DRIFT.MOBILITY returns the named model as published (300 K, within 1 %
   it('masetti: Masetti et al. (1983) eq. (1), Table I rows As, P (electrons) and B (holes)', () => {
     for (const n of DENSITIES) {
       expectWithinOnePercent(value('MOBILITY', n, 'As', 300, 'electron', 'masetti'), masetti('As', n));
-      expectWithinOnePercent(value('MOBILITY', n, 'P', 300, 'electron', 'masetti'), masetti('P', n));
+      expectWithinOnePercent(value('MOBILITY', n, 'phosphorus', 300, 'electron', 'masetti'), masetti('P', n));
       expectWithinOnePercent(value('MOBILITY', n, 'B', 300, 'hole', 'masetti'), masetti('B', n));
     }
   });
@@ -57,13 +57,13 @@ describe('DRIFT.MOBILITY returns the named model as published (300 K, within 1 %
     // Hand evaluation of eq. (1): As 1e18: 52.2 + 1364.8/(1 + 10.33^0.68) = 52.2 + 1364.8/5.894 = 283.8;
     // P 1e16: 68.5 + 1345.5/(1 + 0.1087^0.711) = 1183.8; B 1e18: 44.9·e^−0.0923 + 470.5/(1 + 4.484^0.719) − 0 ≈ 160.3.
     expectWithinOnePercent(value('MOBILITY', 1e18, 'As'), 283.8);
-    expectWithinOnePercent(value('MOBILITY', 1e16, 'P'), 1183.8);
+    expectWithinOnePercent(value('MOBILITY', 1e16, 'phosphorus'), 1183.8);
     expectWithinOnePercent(value('MOBILITY', 1e18, 'B'), 160.3);
   });
 
   it('arora: Arora et al. (1982) at 300 K, electrons and holes', () => {
     for (const n of DENSITIES) {
-      expectWithinOnePercent(value('MOBILITY', n, 'P', 300, 'electron', 'arora'), arora('electron', n));
+      expectWithinOnePercent(value('MOBILITY', n, 'phosphorus', 300, 'electron', 'arora'), arora('electron', n));
       expectWithinOnePercent(value('MOBILITY', n, 'B', 300, 'hole', 'arora'), arora('hole', n));
     }
   });
@@ -83,14 +83,14 @@ describe('DRIFT.MOBILITY returns the named model as published (300 K, within 1 %
       return p.mumin1 + (p.mumax - p.mumin1) / (1 + Math.pow(n / p.Cr, p.alpha));
     };
     for (const n of [1e14, 1e15, 1e16, 1e17, 1e18]) {
-      expectWithinOnePercent(value('MOBILITY', n, 'P', 300, 'electron', 'klaassen'), reduced('P', n));
+      expectWithinOnePercent(value('MOBILITY', n, 'phosphorus', 300, 'electron', 'klaassen'), reduced('P', n));
       expectWithinOnePercent(value('MOBILITY', n, 'B', 300, 'hole', 'klaassen'), reduced('B', n));
     }
   });
 
   it('DIFFUSIVITY is the published mobility times kT/q for non-degenerate carriers (Einstein relation)', () => {
     // 1e16 cm⁻³ P: Masetti 1183.8 × 0.025852 V = 30.6 cm²/s.
-    expectWithinOnePercent(value('DIFFUSIVITY', 1e16, 'P', 300, 'majority', 'masetti'), masetti('P', 1e16) * thermalVoltage(300));
+    expectWithinOnePercent(value('DIFFUSIVITY', 1e16, 'phosphorus', 300, 'majority', 'masetti'), masetti('P', 1e16) * thermalVoltage(300));
     expectWithinOnePercent(value('DIFFUSIVITY', 1e17, 'B', 300, 'majority', 'masetti'), masetti('B', 1e17) * thermalVoltage(300));
   });
 
@@ -124,13 +124,13 @@ describe('blank model: minority carriers in silicon get Klaassen’s minority ph
   // heavily doped, ~1e19 cm⁻³ and above, so the fit is checked there only).
   const delAlamo = (n: number): number => 130 + 370 / (1 + Math.pow(n / 8e17, 1.25));
   it.each([1e19, 3e19, 1e20])('minority holes in %s cm⁻³ P-doped Si', (n) => {
-    const mu = value('MOBILITY', n, 'P', 300, 'minority');
+    const mu = value('MOBILITY', n, 'phosphorus', 300, 'minority');
     expect(Math.abs(mu / delAlamo(n) - 1)).toBeLessThan(0.3);
   });
 
   it('follows net doping: electrons in P-doped Si counter-doped with more B are minority carriers (klaassen)', () => {
-    expect(value('MOBILITY', 1e17, 'P', 300, 'electron', null, null, 1e19)).toBe(value('MOBILITY', 1e17, 'P', 300, 'electron', 'klaassen', null, 1e19));
-    expect(value('MOBILITY', 1e17, 'P', 300, 'hole', null, null, 1e19)).toBe(value('MOBILITY', 1e17, 'P', 300, 'hole', 'masetti', null, 1e19));
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'electron', null, null, 1e19)).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'electron', 'klaassen', null, 1e19));
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'hole', null, null, 1e19)).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'hole', 'masetti', null, 1e19));
   });
 
   it('applies to FREEMOBILITY, DIFFUSIVITY and VELOCITY too; other materials keep their own fit', () => {

@@ -88,7 +88,7 @@ describe('reducing arguments', () => {
 
 describe('engine size prediction', () => {
   it('spills DRIFT.DOPINGRANGE as 1×2, and one row per window for columns', () => {
-    const engine = createEngine({ S: [['=DRIFT.DOPINGRANGE(8,12,"B")'], [null], ['=DRIFT.DOPINGRANGE({1;2;4},{3;5;9},"P")']] });
+    const engine = createEngine({ S: [['=DRIFT.DOPINGRANGE(8,12,"B")'], [null], ['=DRIFT.DOPINGRANGE({1;2;4},{3;5;9},"phosphorus")']] });
     try {
       const first = engine.getRangeValues({ start: { sheet: 0, row: 0, col: 0 }, end: { sheet: 0, row: 0, col: 2 } })[0];
       expect(typeof first[0]).toBe('number');

@@ -52,8 +52,8 @@ describe('calc', () => {
   });
 
   it('prints a spill as tab-separated rows', () => {
-    const result = driftcell('calc', '=DRIFT.RESISTIVITY({1e15;1e16},"P",{250,300,350})');
-    const expected = direct('RESISTIVITY', [[[1e15], [1e16]], 'P', [[250, 300, 350]]]);
+    const result = driftcell('calc', '=DRIFT.RESISTIVITY({1e15;1e16},"phosphorus",{250,300,350})');
+    const expected = direct('RESISTIVITY', [[[1e15], [1e16]], 'phosphorus', [[250, 300, 350]]]);
     expect(result.status).toBe(0);
     expect(result.stdout).toBe(expected.map((row) => row.map(String).join('\t')).join('\n') + '\n');
   });

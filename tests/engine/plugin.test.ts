@@ -59,8 +59,8 @@ describe('single cells', () => {
 
 describe('ranges and inline arrays as arguments', () => {
   it('spills a column of results for a column range', () => {
-    build({ S: [[1e14, '=DRIFT.RESISTIVITY(A1:A3,"P")'], [1e15], [1e16]] });
-    expect(engineGrid(rangeValues(0, 0, 1, 2, 1))).toEqual(direct('RESISTIVITY', [[[1e14], [1e15], [1e16]], 'P']));
+    build({ S: [[1e14, '=DRIFT.RESISTIVITY(A1:A3,"phosphorus")'], [1e15], [1e16]] });
+    expect(engineGrid(rangeValues(0, 0, 1, 2, 1))).toEqual(direct('RESISTIVITY', [[[1e14], [1e15], [1e16]], 'phosphorus']));
   });
 
   it('spills the full grid for a doping column against a temperature row', () => {
@@ -81,8 +81,8 @@ describe('ranges and inline arrays as arguments', () => {
   });
 
   it('spills inline arrays the same way', () => {
-    build({ S: [['=DRIFT.CONDUCTIVITY({1e15;1e16},"P",{250,300,350})']] });
-    expect(engineGrid(rangeValues(0, 0, 0, 1, 2))).toEqual(direct('CONDUCTIVITY', [[[1e15], [1e16]], 'P', [[250, 300, 350]]]));
+    build({ S: [['=DRIFT.CONDUCTIVITY({1e15;1e16},"phosphorus",{250,300,350})']] });
+    expect(engineGrid(rangeValues(0, 0, 0, 1, 2))).toEqual(direct('CONDUCTIVITY', [[[1e15], [1e16]], 'phosphorus', [[250, 300, 350]]]));
   });
 
   it('sizes a nested DRIFT call by its own arguments', () => {
@@ -196,8 +196,8 @@ describe('blank and omitted optional arguments', () => {
   });
 
   it('treats blank cells inside a range as defaults for optional arguments', () => {
-    build({ S: [[null, '=DRIFT.MOBILITY(1e16,"P",A1:A2)'], [350]] });
-    expect(engineGrid(rangeValues(0, 0, 1, 1, 1))).toEqual(direct('MOBILITY', [1e16, 'P', [[300], [350]]]));
+    build({ S: [[null, '=DRIFT.MOBILITY(1e16,"phosphorus",A1:A2)'], [350]] });
+    expect(engineGrid(rangeValues(0, 0, 1, 1, 1))).toEqual(direct('MOBILITY', [1e16, 'phosphorus', [[300], [350]]]));
   });
 
   it('reports a blank required argument as missing', () => {
@@ -234,10 +234,10 @@ describe('references across sheets', () => {
   it('reads ranges and cells of another sheet, quoted names included', () => {
     build({
       'Lot data': [['lot', 'rho min', 'rho max'], ['NQ-1', 4, 6]],
-      Results: [["=DRIFT.DOPING('Lot data'!B2:C2,\"P\")", null, "=DRIFT.SHEETRES('Lot data'!B2,10)"]],
+      Results: [["=DRIFT.DOPING('Lot data'!B2:C2,\"phosphorus\")", null, "=DRIFT.SHEETRES('Lot data'!B2,10)"]],
     });
     const results = engine.getSheetId('Results') as number;
-    expect(engineGrid(rangeValues(results, 0, 0, 0, 1))).toEqual(direct('DOPING', [[[4, 6]], 'P']));
+    expect(engineGrid(rangeValues(results, 0, 0, 0, 1))).toEqual(direct('DOPING', [[[4, 6]], 'phosphorus']));
     expect([[fromEngine(cell(results, 0, 2))]]).toEqual(direct('SHEETRES', [4, 10]));
   });
 });

@@ -113,10 +113,10 @@ describe('a spilled result', () => {
       const s = wb.addWorksheet('S');
       s.getCell('A1').value = 1e15;
       s.getCell('A2').value = -3;
-      s.getCell('B1').value = { formula: 'DRIFT.RESISTIVITY(A1:A2,"P")' } as ExcelJS.CellFormulaValue;
+      s.getCell('B1').value = { formula: 'DRIFT.RESISTIVITY(A1:A2,"phosphorus")' } as ExcelJS.CellFormulaValue;
     });
     const cells = await sheetCells(await openPackage(bytes), 'S');
-    const expected = direct('RESISTIVITY', [[[1e15], [-3]], 'P']);
+    const expected = direct('RESISTIVITY', [[[1e15], [-3]], 'phosphorus']);
     expect(cached(cells.get('B1'))).toBe(expected[0][0]);
     expect(cells.get('B2')?.attributes.t).toBe('e');
     expect(cells.get('B2')?.value).toBe('#VALUE!');
@@ -182,7 +182,7 @@ describe('a spilled result', () => {
   it('is stable: recalculating the written file again writes the same cells', async () => {
     const { bytes } = await roundTrip((wb) => {
       const s = wb.addWorksheet('S');
-      s.getCell('A1').value = { formula: 'DRIFT.CONDUCTIVITY({1e15;1e16},"P",{250,300})' } as ExcelJS.CellFormulaValue;
+      s.getCell('A1').value = { formula: 'DRIFT.CONDUCTIVITY({1e15;1e16},"phosphorus",{250,300})' } as ExcelJS.CellFormulaValue;
     });
     const again = await loadWorkbook(bytes);
     const summary = recalculateWorkbook(again);
@@ -202,7 +202,7 @@ describe('formulas in a recalculated workbook', () => {
       lots.getCell('A1').value = 4;
       lots.getCell('B1').value = 6;
       const calc = wb.addWorksheet('Calc');
-      calc.getCell('A1').value = { formula: "DRIFT.DOPING('Lot data'!A1:B1,\"P\")" } as ExcelJS.CellFormulaValue;
+      calc.getCell('A1').value = { formula: "DRIFT.DOPING('Lot data'!A1:B1,\"phosphorus\")" } as ExcelJS.CellFormulaValue;
       calc.getCell('A2').value = { formula: "SUM('Lot data'!A1:B1)*2" } as ExcelJS.CellFormulaValue;
       calc.getCell('A3').value = { formula: 'DRIFT.SHEETRES(rho_min,10)' } as ExcelJS.CellFormulaValue;
       calc.getCell('A4').value = { formula: 'IF(A2>10,TRUE,FALSE)' } as ExcelJS.CellFormulaValue;
@@ -213,7 +213,7 @@ describe('formulas in a recalculated workbook', () => {
     });
     expect(summary.problems).toEqual([]);
     const cells = await sheetCells(await openPackage(bytes), 'Calc');
-    const doping = direct('DOPING', [[[4, 6]], 'P'])[0] as number[];
+    const doping = direct('DOPING', [[[4, 6]], 'phosphorus'])[0] as number[];
     expect(cached(cells.get('A1'))).toBe(doping[0]);
     expect(cached(cells.get('B1'))).toBe(doping[1]);
     expect(cached(cells.get('A2'))).toBe(20);

@@ -14,7 +14,7 @@ describe('toArgumentInput', () => {
 
   it('keeps a matrix as a grid, row-major, with blanks as null', () => {
     expect(toArgumentInput([[1e15, 1e16], ['', null]], 'doping')).toEqual([[1e15, 1e16], [null, null]]);
-    expect(toArgumentInput([['P'], [true]], 'dopant')).toEqual([['P'], [true]]);
+    expect(toArgumentInput([['phosphorus'], [true]], 'dopant')).toEqual([['phosphorus'], [true]]);
   });
 
   it('passes a single value through, and reads a one-dimensional array as a row', () => {
@@ -64,13 +64,13 @@ describe('toArgumentInputs', () => {
   if (mobility === undefined) throw new Error('catalog lacks MOBILITY');
 
   it('gives one input per declared parameter and drops the invocation object Excel appends', () => {
-    const inputs = toArgumentInputs(mobility, [[[1e16]], [['P']], null, null, null, null, null, { address: 'Sheet1!A1' }]);
+    const inputs = toArgumentInputs(mobility, [[[1e16]], [['phosphorus']], null, null, null, null, null, { address: 'Sheet1!A1' }]);
     expect(inputs).toHaveLength(mobility.parameters.length);
-    expect(inputs).toEqual([[[1e16]], [['P']], undefined, undefined, undefined, undefined, undefined]);
+    expect(inputs).toEqual([[[1e16]], [['phosphorus']], undefined, undefined, undefined, undefined, undefined]);
   });
 
   it('fills arguments Excel did not pass at all as absent', () => {
-    expect(toArgumentInputs(mobility, [[[1e16]], [['P']]])).toEqual([[[1e16]], [['P']], undefined, undefined, undefined, undefined, undefined]);
+    expect(toArgumentInputs(mobility, [[[1e16]], [['phosphorus']]])).toEqual([[[1e16]], [['phosphorus']], undefined, undefined, undefined, undefined, undefined]);
   });
 });
 

@@ -54,7 +54,7 @@ describe('functions.ts entry', () => {
     }
     (globals.CustomFunctions as Record<string, unknown>).Error = LateError;
     const mobility = associate.mock.calls.find((c) => c[0] === 'MOBILITY')?.[1] as (...a: unknown[]) => unknown[][];
-    expect(mobility([[-5]], [['P']], null, null, null, null, null, {})[0][0]).toBeInstanceOf(LateError);
+    expect(mobility([[-5]], [['phosphorus']], null, null, null, null, null, {})[0][0]).toBeInstanceOf(LateError);
   });
 
   it('ignores a CustomFunctions object that is not a runtime', () => {

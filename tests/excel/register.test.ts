@@ -52,18 +52,18 @@ describe('makeExcelFunction', () => {
 
   it('broadcasts a column against a row as evaluate() does', () => {
     const fn = makeExcelFunction(runtime, spec('RESISTIVITY'));
-    const result = fn([[1e15], [1e16], [1e17]], [['P']], [[250, 300, 350]], null, null, null, {});
-    expect(result).toEqual(evaluate(spec('RESISTIVITY'), [[[1e15], [1e16], [1e17]], 'P', [[250, 300, 350]]]));
+    const result = fn([[1e15], [1e16], [1e17]], [['phosphorus']], [[250, 300, 350]], null, null, null, {});
+    expect(result).toEqual(evaluate(spec('RESISTIVITY'), [[[1e15], [1e16], [1e17]], 'phosphorus', [[250, 300, 350]]]));
     expect(result.map((r) => r.length)).toEqual([3, 3, 3]);
   });
 
   it('turns a bad element into a runtime Error with the catalog message, leaving the others', () => {
     const fn = makeExcelFunction(runtime, spec('MOBILITY'));
-    const args = [[[1e16], [-5]], [['P']], null, null, null, null, null, {}];
+    const args = [[[1e16], [-5]], [['phosphorus']], null, null, null, null, null, {}];
     const result = fn(...args);
     expect(typeof result[0][0]).toBe('number');
     expect(result[1][0]).toBeInstanceOf(FakeError);
-    expect(asCatalog(result)).toEqual(expectedFrom(evaluate(spec('MOBILITY'), [[[1e16], [-5]], 'P'])));
+    expect(asCatalog(result)).toEqual(expectedFrom(evaluate(spec('MOBILITY'), [[[1e16], [-5]], 'phosphorus'])));
     expect((result[1][0] as FakeError).code).toBe('#VALUE!');
     expect((result[1][0] as FakeError).message).toMatch(/doping/);
   });
@@ -117,13 +117,13 @@ describe('registerCatalog', () => {
     const bound = new Map<string, (...a: unknown[]) => unknown>();
     registerCatalog({ associate: (id, fn) => void bound.set(id, fn) }, CATALOG, () => errors);
     errors = fakeErrors();
-    const [[cell]] = (bound.get('MOBILITY') as (...a: unknown[]) => unknown[][])([[-5]], [['P']], null, null, null, null, null, {});
+    const [[cell]] = (bound.get('MOBILITY') as (...a: unknown[]) => unknown[][])([[-5]], [['phosphorus']], null, null, null, null, null, {});
     expect(cell).toBeInstanceOf(FakeError);
   });
 
   it('throws (Excel shows #VALUE!) when a result holds an error and no Error constructor exists', () => {
     const fn = makeExcelFunction(() => undefined, spec('MOBILITY'));
-    expect(fn([[1e16]], [['P']], null, null, null, null, null, {})[0][0]).toEqual(expect.any(Number));
-    expect(() => fn([[-5]], [['P']], null, null, null, null, null, {})).toThrow(/CustomFunctions\.Error is not available/);
+    expect(fn([[1e16]], [['phosphorus']], null, null, null, null, null, {})[0][0]).toEqual(expect.any(Number));
+    expect(() => fn([[-5]], [['phosphorus']], null, null, null, null, null, {})).toThrow(/CustomFunctions\.Error is not available/);
   });
 });

@@ -68,7 +68,7 @@ describe('f723SpeciesFor', () => {
   });
   it('rejects other dopants, listing B, P and As', () => {
     expect(() => f723SpeciesFor('Sb', 0, 300)).toThrow(/Allowed: B, P, As/);
-    expect(() => f723SpeciesFor('n', 0, 300)).toThrow(PhysicsDomainError);
+    expect(() => f723SpeciesFor('donor', 0, 300)).toThrow(PhysicsDomainError);
   });
   it('rejects counter-doping and says what to use instead', () => {
     expect(() => f723SpeciesFor('B', 1e14, 300)).toThrow(/uncompensated.*counter-doping 0/);

@@ -17,9 +17,9 @@ describe('sampleDopants', () => {
     const [named, counter] = sampleDopants(siliconSample('As', 1e17, 300, 3e16));
     expect(named.dopant).toBe(arsenic);
     expect(counter.dopant.kind).toBe('acceptor');
-    expect(counter.dopant.symbol).toBe('p');
+    expect(counter.dopant.symbol).toBe('acceptor');
     expect(counter.density).toBe(3e16);
-    expect(sampleDopants(siliconSample('B', 1e17, 300, 1e15))[1].dopant.symbol).toBe('n');
+    expect(sampleDopants(siliconSample('B', 1e17, 300, 1e15))[1].dopant.symbol).toBe('donor');
   });
 });
 

@@ -21,11 +21,11 @@ import { value } from '../catalog/support/call';
 const TEMPERATURES = [50, 77, 150, 300, 500, 700];
 const LOG_DENSITY = { from: 12, to: 21 };
 
-/** One donor and one acceptor per material: the first of each kind in its table (not the generic ones). */
+/** One donor and one acceptor per material by element name (a lone P or N is refused in cells): the first of each kind in its table (not the generic ones). */
 function namedDopants(materialCode: string): string[] {
   const material = MATERIALS.find((m) => m.code === materialCode)!;
   const named = material.dopants.filter((d) => d.symbol !== material.genericDopants.donor && d.symbol !== material.genericDopants.acceptor);
-  return ['donor', 'acceptor'].map((kind) => named.find((d) => d.kind === kind)!.symbol);
+  return ['donor', 'acceptor'].map((kind) => named.find((d) => d.kind === kind)!.name);
 }
 
 function logGrid(from: number, to: number, steps: number): number[] {

@@ -32,7 +32,7 @@ describe('conductivity', () => {
       siliconSample('P', 3e18, 77),
       siliconSample('As', 1e14, 600),
       siliconSample('Ga', 1e17, 250, 2e16),
-      siliconSample('n', 1e15, 400, 4e15),
+      siliconSample('donor', 1e15, 400, 4e15),
     ];
     for (const sample of cases) {
       for (const model of MOBILITY_MODEL_CODES) {

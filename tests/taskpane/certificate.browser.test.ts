@@ -22,7 +22,7 @@ const PANE_TEMPERATURE = 296.15;
 
 /** The dopant code the check derives from a certificate type with the conductivity-type switch on. */
 function codeOf(type: CellInput): string {
-  return type === 'P' ? 'p' : type === 'N' ? 'n' : String(type);
+  return type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : String(type);
 }
 
 /** What the check must show for a fixture row, from the catalog called directly. */
@@ -158,10 +158,11 @@ describe('the Certificate check in Chromium', () => {
     const written = await readBlock(page, cells({ row: TOP, column: FIRST_NEW, rowCount: CERTIFICATE_TABLE.length, columnCount: 8 }));
     CERTIFICATE_ROWS.forEach((row, index) => {
       const shown = written.values[index + 1];
-      // Switch off: the type is passed on as written, so P is phosphorus; N is still the generic donor.
-      const code = String(row[2]);
+      // Switch off: a lone P is phosphorus and N nitrogen, which silicon has no parameters for (an error in that row).
+      const code = row[2] === 'P' ? 'phosphorus' : row[2] === 'N' ? 'nitrogen' : String(row[2]);
       expect(shown[0]).toBe(code);
-      expect(ratio(shown[1], value('DOPING', row[4] as number, code, PANE_TEMPERATURE))).toBeCloseTo(1, 12);
+      if (code === 'nitrogen') expect(typeof shown[1]).not.toBe('number');
+      else expect(ratio(shown[1], value('DOPING', row[4] as number, code, PANE_TEMPERATURE))).toBeCloseTo(1, 12);
       // Without edge 3, the radial variation averages edges 1 and 2 only.
       expect(shown[6]).toBeCloseTo(value('RADIALVARIATION', row[5] as number, [[row[6] as number, row[7] as number]]), 10);
     });

@@ -19,11 +19,11 @@ describe('createEnginePort', () => {
   it('spills a formula written into its anchor cell only', async () => {
     const port = createEnginePort();
     await port.write(cell(0, 0, 3, 1), [[1e14], [1e15], [1e16]]);
-    await port.write(cell(0, 1), [['=DRIFT.RESISTIVITY(A1:A3,"P")']]);
+    await port.write(cell(0, 1), [['=DRIFT.RESISTIVITY(A1:A3,"phosphorus")']]);
     const { values, formulas } = await port.read(cell(0, 1, 3, 1));
-    const expected = evaluate(RESISTIVITY, [[[1e14], [1e15], [1e16]], 'P']);
+    const expected = evaluate(RESISTIVITY, [[[1e14], [1e15], [1e16]], 'phosphorus']);
     expect(values).toEqual(expected);
-    expect(formulas).toEqual([['=DRIFT.RESISTIVITY(A1:A3,"P")'], [null], [null]]);
+    expect(formulas).toEqual([['=DRIFT.RESISTIVITY(A1:A3,"phosphorus")'], [null], [null]]);
   });
 
   it('accepts formula text as Excel writes it (upper-case exponent) and reads it back as written', async () => {

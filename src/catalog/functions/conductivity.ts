@@ -10,8 +10,8 @@ export const CONDUCTIVITY = elementwise({
   result: { unit: 'S/cm', description: 'Conductivity σ' },
   parameters: [doping, dopant, temperature, resistivityModel, material, counterDoping] as const,
   examples: [
-    { formula: '=DRIFT.CONDUCTIVITY(1e16,"P")', note: 'about 1.9 S/cm' },
-    { formula: '=DRIFT.CONDUCTIVITY(1e16,"P",{250,300,350})', note: 'across a row of temperatures' },
+    { formula: '=DRIFT.CONDUCTIVITY(1e16,"phosphorus")', note: 'about 1.9 S/cm' },
+    { formula: '=DRIFT.CONDUCTIVITY(1e16,"phosphorus",{250,300,350})', note: 'across a row of temperatures' },
   ],
   models: RESISTIVITY_MODELS,
   compute: (density, dopantCode, temperatureK, model, materialValue, counter) =>

@@ -27,9 +27,9 @@ The saturating form has the validity of DRIFT.VELOCITY (temperature ranges per m
   result: { unit: 'A/cm²', description: 'Current density J' },
   parameters: [field, doping, dopant, temperature, material, counterDoping, fieldDependence] as const,
   examples: [
-    { formula: '=DRIFT.CURRENTDENSITY(100,1e16,"P")', note: '100 V/cm across 1e16 cm⁻³ n-type Si' },
+    { formula: '=DRIFT.CURRENTDENSITY(100,1e16,"phosphorus")', note: '100 V/cm across 1e16 cm⁻³ n-type Si' },
     { formula: '=DRIFT.CURRENTDENSITY(A2:A11,1e15,"B")', note: 'a column of fields, with velocity saturation' },
-    { formula: '=DRIFT.CURRENTDENSITY(1e4,1e16,"P",,,,"ohmic")', note: 'J = σE, ignoring saturation' },
+    { formula: '=DRIFT.CURRENTDENSITY(1e4,1e16,"phosphorus",,,,"ohmic")', note: 'J = σE, ignoring saturation' },
   ],
   models: HIGH_FIELD_MODELS,
   compute: (fieldValue, density, dopantCode, temperatureK, materialValue, counter, dependence) =>

@@ -11,7 +11,7 @@ export const DIFFUSIVITY = elementwise({
   parameters: [doping, dopant, temperature, carrier, mobilityModel, material, counterDoping] as const,
   examples: [
     { formula: '=DRIFT.DIFFUSIVITY(1e17,"B",300,"minority")', note: 'minority electrons in a p-type base' },
-    { formula: '=DRIFT.DIFFUSIVITY(1e15,"P")', note: 'electrons in lightly doped n-type Si' },
+    { formula: '=DRIFT.DIFFUSIVITY(1e15,"phosphorus")', note: 'electrons in lightly doped n-type Si' },
   ],
   models: [...MOBILITY_MODELS, ...EQUILIBRIUM_MODELS],
   compute: (density, dopantCode, temperatureK, role, model, materialValue, counter) => {

@@ -11,7 +11,7 @@ export const DOPING = elementwise({
   parameters: [resistivity, dopant, temperature, resistivityModel, material, counterDoping] as const,
   examples: [
     { formula: '=DRIFT.DOPING(10,"B")', note: 'boron density of a 10 Ω·cm p-type wafer' },
-    { formula: '=DRIFT.DOPING(B2:C2,"P")', note: 'a certificate’s ρ window to a doping window' },
+    { formula: '=DRIFT.DOPING(B2:C2,"phosphorus")', note: 'a certificate’s ρ window to a doping window' },
     { formula: '=DRIFT.DOPING(10,"B",296.15)', note: 'at 23 °C: the ASTM F723 value' },
   ],
   models: RESISTIVITY_MODELS,

@@ -27,7 +27,7 @@ Cautions: a certificate's resistivity is measured (usually by four-point probe a
   ] as const,
   examples: [
     { formula: '=DRIFT.DOPINGRANGE(8,12,"B")', note: 'a 8–12 Ω·cm boron wafer: two densities in a row' },
-    { formula: '=DRIFT.DOPINGRANGE({1;0.005},{3;0.02},{"P";"Sb"})', note: 'two certificates, one window per row' },
+    { formula: '=DRIFT.DOPINGRANGE({1;0.005},{3;0.02},{"phosphorus";"Sb"})', note: 'two certificates, one window per row' },
     { formula: '=DRIFT.DOPINGRANGE(8,12,"B",296.15)', note: 'at 23 °C: the ASTM F723 window' },
     { formula: '=DRIFT.DOPINGRANGE(8,12,"B",,"masetti")', note: 'the same window from the Masetti physics alone' },
   ],

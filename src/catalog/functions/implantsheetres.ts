@@ -26,7 +26,7 @@ Assumption: as-implanted, fully activated, no damage. A real implant needs an an
   parameters: [dose, range, straggle, background, dopant, temperature] as const,
   examples: [
     { formula: '=DRIFT.IMPLANTSHEETRES(1e14,0.1,0.04,1e15,"B")', note: 'a boron implant in 1e15 cm⁻³ n-type silicon, fully activated' },
-    { formula: '=DRIFT.IMPLANTSHEETRES(1e12,0.5,0.1,1e15,"P")', note: 'a buried phosphorus layer: two junctions' },
+    { formula: '=DRIFT.IMPLANTSHEETRES(1e12,0.5,0.1,1e15,"phosphorus")', note: 'a buried phosphorus layer: two junctions' },
     { formula: '=DRIFT.IMPLANTSHEETRES({1e12;1e13;1e14;1e15},0.1,0.04,1e15,"B")', note: 'a dose sweep' },
   ],
   models: ['irvin-layers', 'lss-gaussian-implant', 'masetti'],

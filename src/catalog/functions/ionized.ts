@@ -10,7 +10,7 @@ export const IONIZED = elementwise({
   result: { unit: null, description: 'Ionized fraction, 0–1' },
   parameters: [doping, dopant, temperature, material] as const,
   examples: [
-    { formula: '=DRIFT.IONIZED(1e16,"P",77)', note: 'phosphorus at 77 K' },
+    { formula: '=DRIFT.IONIZED(1e16,"phosphorus",77)', note: 'phosphorus at 77 K' },
     { formula: '=DRIFT.IONIZED(1e16,"In")', note: 'indium is deep: well below 1 at 300 K' },
   ],
   models: IONIZATION_MODELS,

@@ -20,7 +20,7 @@ Cautions: the profiles are ideal as-diffused shapes (real high-concentration pho
   ] as const,
   examples: [
     { formula: '=DRIFT.LAYERSHEETRES(1e19,2,1e15,"B")', note: 'a 2 µm Gaussian boron layer in 1e15 cm⁻³ n-type silicon: about 120 Ω/sq' },
-    { formula: '=DRIFT.LAYERSHEETRES(1e20,1,1e16,"P","erfc")', note: 'a 1 µm phosphorus predeposition in 1e16 cm⁻³ p-type silicon' },
+    { formula: '=DRIFT.LAYERSHEETRES(1e20,1,1e16,"phosphorus","erfc")', note: 'a 1 µm phosphorus predeposition in 1e16 cm⁻³ p-type silicon' },
     { formula: '=DRIFT.LAYERSHEETRES(1e19,2,1e15,"B",,{250,300,350,400})', note: 'the same boron layer from 250 K to 400 K' },
   ],
   models: ['irvin-layers', 'gaussian', 'erfc', 'masetti'],

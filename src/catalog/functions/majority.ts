@@ -9,9 +9,9 @@ export const MAJORITY = elementwise({
   result: { unit: 'cm⁻³', description: 'Majority-carrier density' },
   parameters: [doping, dopant, temperature, material, counterDoping] as const,
   examples: [
-    { formula: '=DRIFT.MAJORITY(1e17,"P")', note: 'electrons in 1e17 cm⁻³ phosphorus-doped Si at 300 K' },
+    { formula: '=DRIFT.MAJORITY(1e17,"phosphorus")', note: 'electrons in 1e17 cm⁻³ phosphorus-doped Si at 300 K' },
     { formula: '=DRIFT.MAJORITY(1e17,"B",77)', note: 'holes at 77 K: freeze-out lowers them' },
-    { formula: '=DRIFT.MAJORITY(1e16,"P",300,,4e15)', note: 'compensated: about 6e15 cm⁻³' },
+    { formula: '=DRIFT.MAJORITY(1e16,"phosphorus",300,,4e15)', note: 'compensated: about 6e15 cm⁻³' },
   ],
   models: EQUILIBRIUM_MODELS,
   compute: (density, dopantCode, temperatureK, materialValue, counter) =>

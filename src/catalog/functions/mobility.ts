@@ -22,7 +22,7 @@ Other materials have their own fit, which is their default (blank model) for bot
   result: { unit: 'cm²/(V·s)', description: 'Mobility' },
   parameters: [doping, dopant, temperature, carrier, mobilityModel, material, counterDoping] as const,
   examples: [
-    { formula: '=DRIFT.MOBILITY(1e16,"P")', note: 'electrons in 1e16 cm⁻³ phosphorus-doped Si at 300 K (masetti)' },
+    { formula: '=DRIFT.MOBILITY(1e16,"phosphorus")', note: 'electrons in 1e16 cm⁻³ phosphorus-doped Si at 300 K (masetti)' },
     { formula: '=DRIFT.MOBILITY(1e17,"B",300,"minority")', note: 'minority electrons in p-type Si (klaassen, the blank choice for minority carriers)' },
     { formula: '=DRIFT.MOBILITY(A2:A30,"As",,,"arora")', note: 'a doping column with the Arora model' },
     { formula: '=DRIFT.MOBILITY(1e19,"B",300,"minority","masetti")', note: 'the majority-electron fit at the same doping, for comparison' },

@@ -10,7 +10,7 @@ export const SHEETRES = elementwise({
   parameters: [resistivity, length('thickness_um', 'Layer thickness')] as const,
   examples: [
     { formula: '=DRIFT.SHEETRES(1,10)', note: '1 Ω·cm over 10 µm: 1000 Ω/sq' },
-    { formula: '=DRIFT.SHEETRES(DRIFT.RESISTIVITY(1e17,"P"),5)', note: 'a 5 µm epitaxial layer' },
+    { formula: '=DRIFT.SHEETRES(DRIFT.RESISTIVITY(1e17,"phosphorus"),5)', note: 'a 5 µm epitaxial layer' },
   ],
   models: [],
   compute: (rho, thicknessUm) => sheetResistance(rho, thicknessUm),

@@ -31,7 +31,7 @@ Evidence for the sign: the positive TCR of heavily doped Si resistors below the 
   result: { unit: 'ppm/K', description: 'Temperature coefficient of resistivity' },
   parameters: [doping, dopant, temperature, resistivityModel, material] as const,
   examples: [
-    { formula: '=DRIFT.TCR(1e15,"P")', note: 'lightly doped n-type Si at 300 K (positive)' },
+    { formula: '=DRIFT.TCR(1e15,"phosphorus")', note: 'lightly doped n-type Si at 300 K (positive)' },
     { formula: '=DRIFT.TCR(1e15,"B",A2:A40)', note: 'a temperature sweep' },
     { formula: '=DRIFT.TCR(1e18,"As",300,"arora")', note: 'with the Arora model' },
   ],

@@ -24,7 +24,7 @@ Si: saturation velocity of Quay et al. (2000) (see DRIFT.VSAT), accepted for ${S
   result: { unit: 'cm/s', description: 'Drift velocity' },
   parameters: [field, doping, dopant, temperature, carrier, material] as const,
   examples: [
-    { formula: '=DRIFT.VELOCITY(1e4,1e16,"P")', note: 'electrons in 1e16 cm⁻³ n-type Si at 10 kV/cm' },
+    { formula: '=DRIFT.VELOCITY(1e4,1e16,"phosphorus")', note: 'electrons in 1e16 cm⁻³ n-type Si at 10 kV/cm' },
     { formula: '=DRIFT.VELOCITY(A2:A40,1e15,"B",,"hole")', note: 'a velocity–field curve of holes' },
     { formula: '=DRIFT.VELOCITY(5e3,1e16,"Si",300,"electron","GaAs")', note: 'electrons in Si-doped GaAs (no transferred-electron peak)' },
   ],

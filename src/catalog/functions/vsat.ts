@@ -1,6 +1,6 @@
 import { saturationVelocity, type Carrier } from '../../physics';
 import { carrierHighFieldTable, canaliExponentAt300K } from '../../physics/highField';
-import { material, temperature } from '../common';
+import { CARRIER_ALIASES, CARRIER_SPELLINGS, material, temperature } from '../common';
 import { codeParameter } from '../parameters';
 import { elementwise, type ParameterSpec } from '../types';
 import { InputError } from '../values';
@@ -15,10 +15,12 @@ const carrierTypeCodes = codeParameter<Carrier>({
   choices: () => CARRIER_TYPES,
   defaultCode: 'electron',
   resolve: (code) => code as Carrier,
+  aliases: CARRIER_ALIASES,
 });
 
 const carrierType: ParameterSpec<Carrier> = {
   ...carrierTypeCodes,
+  details: CARRIER_SPELLINGS,
   parse(value) {
     if (typeof value === 'string' && ['majority', 'minority'].includes(value.trim().toLowerCase())) {
       throw new InputError(

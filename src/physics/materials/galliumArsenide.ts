@@ -73,5 +73,5 @@ export const GALLIUM_ARSENIDE: Material = {
   densityOfStates: SZE_NG_2007_GALLIUM_ARSENIDE_DENSITY_OF_STATES,
   intrinsicFits: [],
   dopants: GALLIUM_ARSENIDE_DOPANTS,
-  genericDopants: { donor: 'n', acceptor: 'p' },
+  genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

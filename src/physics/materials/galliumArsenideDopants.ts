@@ -53,8 +53,8 @@ const ENERGY = {
 } as const;
 
 /**
- * Dopants in the order users see them: acceptors, donors, then generic n and p.
- * Generic n is taken as Si, the usual n-type dopant; generic p as Zn, the usual
+ * Dopants in the order users see them: acceptors, donors, then the generic donor and acceptor.
+ * The generic donor is taken as Si, the usual n-type dopant; the acceptor as Zn, the usual
  * p-type dopant of melt-grown GaAs (assumptions).
  */
 export const GALLIUM_ARSENIDE_DOPANTS: readonly Dopant[] = [
@@ -66,6 +66,6 @@ export const GALLIUM_ARSENIDE_DOPANTS: readonly Dopant[] = [
   galliumArsenideDopant('Te', 'tellurium', 'donor', ENERGY.Te),
   galliumArsenideDopant('Se', 'selenium', 'donor', ENERGY.Se),
   galliumArsenideDopant('Sn', 'tin', 'donor', ENERGY.Sn),
-  galliumArsenideDopant('n', 'generic donor', 'donor', ENERGY.Si, `taken as silicon (assumption); ${SZE_NG_2007_GAAS}`),
-  galliumArsenideDopant('p', 'generic acceptor', 'acceptor', ENERGY.Zn, `taken as zinc (assumption); ${SZE_NG_2007_GAAS}`),
+  galliumArsenideDopant('donor', 'generic donor', 'donor', ENERGY.Si, `taken as silicon (assumption); ${SZE_NG_2007_GAAS}`),
+  galliumArsenideDopant('acceptor', 'generic acceptor', 'acceptor', ENERGY.Zn, `taken as zinc (assumption); ${SZE_NG_2007_GAAS}`),
 ];

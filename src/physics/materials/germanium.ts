@@ -73,5 +73,5 @@ export const GERMANIUM: Material = {
   densityOfStates: SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES,
   intrinsicFits: [],
   dopants: GERMANIUM_DOPANTS,
-  genericDopants: { donor: 'n', acceptor: 'p' },
+  genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

@@ -37,7 +37,7 @@ function germaniumDopant(symbol: string, name: string, kind: DopantKind, energy:
 /** Isolated ionization energies in Ge, eV (Sze & Ng 2007, from memory). */
 const ENERGY = { B: 0.0104, Ga: 0.0108, In: 0.0112, P: 0.012, As: 0.0127, Sb: 0.0096 } as const;
 
-/** Dopants in the order users see them: acceptors, donors, then generic n and p. */
+/** Dopants in the order users see them: acceptors, donors, then the generic donor and acceptor. */
 export const GERMANIUM_DOPANTS: readonly Dopant[] = [
   germaniumDopant('B', 'boron', 'acceptor', ENERGY.B),
   germaniumDopant('Ga', 'gallium', 'acceptor', ENERGY.Ga),
@@ -45,6 +45,6 @@ export const GERMANIUM_DOPANTS: readonly Dopant[] = [
   germaniumDopant('P', 'phosphorus', 'donor', ENERGY.P),
   germaniumDopant('As', 'arsenic', 'donor', ENERGY.As),
   germaniumDopant('Sb', 'antimony', 'donor', ENERGY.Sb),
-  germaniumDopant('n', 'generic donor', 'donor', ENERGY.P, `taken as phosphorus (assumption); ${SZE_NG_2007_GE}`),
-  germaniumDopant('p', 'generic acceptor', 'acceptor', ENERGY.B, `taken as boron (assumption); ${SZE_NG_2007_GE}`),
+  germaniumDopant('donor', 'generic donor', 'donor', ENERGY.P, `taken as phosphorus (assumption); ${SZE_NG_2007_GE}`),
+  germaniumDopant('acceptor', 'generic acceptor', 'acceptor', ENERGY.B, `taken as boron (assumption); ${SZE_NG_2007_GE}`),
 ];

@@ -144,7 +144,7 @@ export interface MottScaledHost {
  * density (mottScaledIonization).
  *
  * @param host permittivity and mobility note of the host
- * @param symbol element symbol as users type it (or 'n' / 'p')
+ * @param symbol element symbol as users type it (or 'donor' / 'acceptor')
  * @param name element name
  * @param kind 'donor' or 'acceptor'
  * @param isolatedEnergy ΔE0, eV

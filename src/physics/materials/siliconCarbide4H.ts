@@ -68,5 +68,5 @@ export const SILICON_CARBIDE_4H: Material = {
   densityOfStates: LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES,
   intrinsicFits: [],
   dopants: SILICON_CARBIDE_4H_DOPANTS,
-  genericDopants: { donor: 'n', acceptor: 'p' },
+  genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

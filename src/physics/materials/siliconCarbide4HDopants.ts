@@ -74,15 +74,17 @@ function siliconCarbideDopant(symbol: string, name: string, kind: DopantKind, en
 const ENERGY = { N: 0.08, P: 0.07, Al: 0.2, B: 0.3 } as const;
 
 /**
- * Dopants in the order users see them: acceptors, donors, then generic n and p
- * (n as nitrogen, p as aluminium: the usual dopants, assumption). Note that
- * 'N' is nitrogen and 'n' the generic donor, like 'P' and 'p' (see dopants.ts).
+ * Dopants in the order users see them: acceptors, donors, then the generic donor and acceptor
+ * (the donor as nitrogen, the acceptor as aluminium: the usual dopants,
+ * assumption). A lone 'N' or 'P' typed in a cell is refused as ambiguous
+ * (element or conductivity type, see dopants.ts); 'nitrogen' and
+ * 'phosphorus' say which.
  */
 export const SILICON_CARBIDE_4H_DOPANTS: readonly Dopant[] = [
   siliconCarbideDopant('Al', 'aluminium', 'acceptor', ENERGY.Al, SOURCES.Al),
   siliconCarbideDopant('B', 'boron', 'acceptor', ENERGY.B, SOURCES.B),
   siliconCarbideDopant('N', 'nitrogen', 'donor', ENERGY.N, SOURCES.N),
   siliconCarbideDopant('P', 'phosphorus', 'donor', ENERGY.P, SOURCES.P),
-  siliconCarbideDopant('n', 'generic donor', 'donor', ENERGY.N, `taken as nitrogen (assumption); ${SOURCES.N}`),
-  siliconCarbideDopant('p', 'generic acceptor', 'acceptor', ENERGY.Al, `taken as aluminium (assumption); ${SOURCES.Al}`),
+  siliconCarbideDopant('donor', 'generic donor', 'donor', ENERGY.N, `taken as nitrogen (assumption); ${SOURCES.N}`),
+  siliconCarbideDopant('acceptor', 'generic acceptor', 'acceptor', ENERGY.Al, `taken as aluminium (assumption); ${SOURCES.Al}`),
 ];

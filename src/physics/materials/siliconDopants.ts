@@ -96,7 +96,7 @@ const AS_PROXY_FOR_SB =
 const B_PROXY =
   'Masetti et al. (1983) fitted only B among acceptors; its fit is used for every acceptor (assumption)';
 
-/** Dopants in the order users see them: acceptors, donors, then generic n and p. */
+/** Dopants in the order users see them: acceptors, donors, then the generic donor and acceptor. */
 export const SILICON_DOPANTS: readonly Dopant[] = [
   {
     symbol: 'B',
@@ -176,7 +176,7 @@ export const SILICON_DOPANTS: readonly Dopant[] = [
     ionization: borrowedIonization(0.039, PHOSPHORUS_IONIZATION, 'P'),
   },
   {
-    symbol: 'n',
+    symbol: 'donor',
     name: 'generic donor',
     kind: 'donor',
     ionizationEnergy: 0.045,
@@ -187,7 +187,7 @@ export const SILICON_DOPANTS: readonly Dopant[] = [
     ionization: PHOSPHORUS_IONIZATION,
   },
   {
-    symbol: 'p',
+    symbol: 'acceptor',
     name: 'generic acceptor',
     kind: 'acceptor',
     ionizationEnergy: 0.045,

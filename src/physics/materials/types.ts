@@ -88,7 +88,7 @@ export interface IonizationParameters extends Provenance {
 
 /** One dopant species in one host material. */
 export interface Dopant {
-  /** 'P', 'B', ... or 'n'/'p' for a generic donor/acceptor. */
+  /** 'P', 'B', ... or 'donor'/'acceptor' for the generic ones; unique case-insensitively within a material. */
   readonly symbol: string;
   /** Element name or "generic donor"/"generic acceptor". */
   readonly name: string;
@@ -135,6 +135,6 @@ export interface Material {
   readonly intrinsicFits: readonly IntrinsicDensityFit[];
   /** Dopants in the order users see them. */
   readonly dopants: readonly Dopant[];
-  /** Symbols of the generic donor and acceptor. */
+  /** Symbols of the generic donor and acceptor ('donor', 'acceptor'). */
   readonly genericDopants: { readonly donor: string; readonly acceptor: string };
 }

@@ -86,7 +86,7 @@ export function roleFromHeader(header: string): ColumnRole {
 }
 
 /** Words a type column of a certificate holds; used when no header says "type". */
-const TYPE_VALUES = new Set(['p', 'n', 'p type', 'n type', 'ptype', 'ntype', 'boron', 'phosphorus', 'arsenic', 'antimony', 'b', 'as', 'sb']);
+const TYPE_VALUES = new Set(['p', 'n', 'p type', 'n type', 'ptype', 'ntype', 'donor', 'acceptor', 'boron', 'phosphorus', 'arsenic', 'antimony', 'b', 'as', 'sb']);
 
 function looksLikeTypeColumn(values: readonly unknown[]): boolean {
   const texts = values.filter((value) => value !== null && value !== '');

@@ -156,7 +156,7 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
   const dopantColumn = has('type') ? columns.length : -1;
   if (has('type')) {
     columns.push({
-      header: settings.typeMeansConductivity ? 'Dopant code (P/N read as p-/n-type)' : 'Dopant code',
+      header: settings.typeMeansConductivity ? 'Dopant code (P/N read as p-/n-type)' : 'Dopant code (P/N read as elements)',
       formula: (row) => dopantCodeFormula(ref('type', row), settings.typeMeansConductivity),
     });
   }

@@ -146,7 +146,7 @@ export function rowWarnings(table: CertificateTable, settings: CertificateSettin
   if (unknownTypes.length > 0) {
     warnings.push(
       `Type not known as a dopant in ${unknownTypes.join(', ')}; those rows show an error. ` +
-        `Allowed: ${dopantCodeList(materialCode(settings))}, n-type, p-type or element names.`,
+        `Allowed (any case): ${dopantCodeList(materialCode(settings))}, n-type, p-type or element names.`,
     );
   }
   return warnings;

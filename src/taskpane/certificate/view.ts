@@ -63,7 +63,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     element(doc, 'p', {
       class: 'dc-hint',
       id: `${typeSwitch.id}-hint`,
-      text: 'On: a lone P or N becomes the generic acceptor p or donor n (boron-like or phosphorus-like mobility). Off: P means phosphorus. B, As, Sb, Boron, n-type… are read as written either way.',
+      text: 'On: a lone P or N (any case) becomes the generic acceptor or donor (boron-like or phosphorus-like mobility). Off: P means phosphorus, N nitrogen. B, As, Sb, Boron, n-type… are read as written either way.',
     }),
   ]);
   typeSwitch.setAttribute('aria-describedby', `${typeSwitch.id}-hint`);

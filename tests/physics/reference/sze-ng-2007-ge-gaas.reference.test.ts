@@ -21,7 +21,7 @@ import type { Carrier } from '../../../src/physics/sample';
 
 /** A lightly doped sample, where the fits give the lattice mobility. */
 function lightlyDoped(material: Material, carrier: Carrier, temperature = 300) {
-  const dopant = resolveDopant(material, carrier === 'electron' ? 'n' : 'p');
+  const dopant = resolveDopant(material, carrier === 'electron' ? 'donor' : 'acceptor');
   return { material, temperature, dopant, density: 1e13, counterDensity: 0 };
 }
 

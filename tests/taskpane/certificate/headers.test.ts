@@ -71,6 +71,10 @@ describe('mapping of a whole header row', () => {
   it('takes a column of type words as the type column when no header says type', () => {
     const columns = [['A1', 'A2'], ['P', 'n-type'], [8, 9]];
     expect(guessMapping(['Wafer', 'Class', 'Rho min'], columns)).toEqual(['wafer', 'type', 'rho-min']);
+    // In any case, and with the generic words the functions take.
+    for (const words of [['p', 'N-TYPE'], ['Donor', 'ACCEPTOR'], ['Phosphorus', 'bOrOn']]) {
+      expect(guessMapping(['Wafer', 'Class', 'Rho min'], [['A1', 'A2'], words, [8, 9]])).toEqual(['wafer', 'type', 'rho-min']);
+    }
   });
 
   it('numbered readings all become readings', () => {

@@ -6,7 +6,8 @@
  * physics (which has its own reference tests).
  */
 import { findFunction, qualifiedName } from '../../../src/catalog';
-import { dopantCodes, SILICON } from '../../../src/physics';
+import { dopantCodeProblem, typedDopantCodes, SILICON } from '../../../src/physics';
+import { dopantCodeFor, dopantCodeFormula } from '../../../src/taskpane/certificate/typeCodes';
 import { planCertificateCheck, type CertificateSettings } from '../../../src/taskpane/certificate/plan';
 import { addCertificateCheck, readCertificateTable } from '../../../src/taskpane/certificate/session';
 import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
@@ -62,7 +63,7 @@ describe('certificate check on the fictional test table', () => {
       const sheetRow = TOP + 1 + index;
       const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [string, string, string, number, number, number, number, number, number, number];
       // The certificate's P/N are conductivity types: generic acceptor / donor.
-      const code = type === 'P' ? 'p' : type === 'N' ? 'n' : type;
+      const code = type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : type;
       expect(valueAt(values, sheetRow, FIRST_NEW)).toBe(code);
       const atMax = value('DOPING', rhoMax, code, 300, 'masetti', 'Si');
       const atMin = value('DOPING', rhoMin, code, 300, 'masetti', 'Si');
@@ -120,7 +121,7 @@ describe('certificate check on the fictional test table', () => {
     port.put(windowRow, valueColumn, [[1.5e15]]);
     const after = port.engineValues();
     // Wafer W01's certified doping starts below 1.5e15 (its ρmax of 12 Ω·cm), so it no longer passes.
-    expect(value('DOPING', 12, 'p')).toBeLessThan(1.5e15);
+    expect(value('DOPING', 12, 'acceptor')).toBeLessThan(1.5e15);
     expect(valueAt(after, TOP + 1, FIRST_NEW + 7)).toBe('FAIL');
   });
 
@@ -158,17 +159,45 @@ describe('options', () => {
     expect(plan.writes[1].cells.map((row) => row[0])).toEqual(['Certificate check parameters', 'Needed doping min (cm⁻³)', 'Needed doping max (cm⁻³)', 'Temperature (K)']);
     expect(plan.writes[0].cells[1][1]).toBe(`=${qualifiedName(findFunction('DOPING')!)}(F3,L3,$V$5)`);
     const values = port.engineValues();
-    expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'p')).toBeCloseTo(1, 12);
+    expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'acceptor')).toBeCloseTo(1, 12);
   });
 
-  it('with the conductivity-type switch off, P is phosphorus', async () => {
+  it('with the conductivity-type switch off, P is phosphorus and N nitrogen (not a silicon dopant: the row shows an error)', async () => {
     const { port, mapping } = await portWithTable();
     await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, typeMeansConductivity: false });
     const values = port.engineValues();
-    expect(valueAt(values, TOP + 1, FIRST_NEW)).toBe('P');
-    expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'P', 300, 'masetti')).toBeCloseTo(1, 12);
-    // N is not an element symbol: the functions read it as the generic donor either way.
-    expect(numberAt(values, TOP + 3, FIRST_NEW + 1) / value('DOPING', 3, 'n', 300, 'masetti')).toBeCloseTo(1, 12);
+    expect(valueAt(values, TOP + 1, FIRST_NEW)).toBe('phosphorus');
+    expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'phosphorus', 300, 'masetti')).toBeCloseTo(1, 12);
+    expect(valueAt(values, TOP + 3, FIRST_NEW)).toBe('nitrogen');
+    expect(valueAt(values, TOP + 3, FIRST_NEW + 1)).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringContaining("unknown dopant 'nitrogen' for silicon") });
+  });
+
+  it('reads a lone p or n on the certificate as P or N: the same word in any case, whichever the switch', async () => {
+    for (const typeMeansConductivity of [true, false]) {
+      for (const [upper, lower] of [['P', 'p'], ['N', 'n']]) {
+        expect(dopantCodeFor(lower, typeMeansConductivity)).toBe(dopantCodeFor(upper, typeMeansConductivity));
+        expect(dopantCodeFor(` ${lower} `, typeMeansConductivity)).toBe(dopantCodeFor(upper, typeMeansConductivity));
+      }
+      for (const entry of ['P', 'p', 'N', 'n']) {
+        // Whatever the switch, what reaches the functions is never a lone letter they would refuse.
+        expect(dopantCodeProblem(dopantCodeFor(entry, typeMeansConductivity))).toBeNull();
+      }
+      for (const entry of ['B', 'boron', 'As', 'n-type', 'P-Type', 'Phosphorus']) expect(dopantCodeFor(entry, typeMeansConductivity)).toBe(entry);
+    }
+    expect(['P', 'N'].map((entry) => dopantCodeFor(entry, true))).toEqual(['acceptor', 'donor']);
+    expect(['P', 'N'].map((entry) => dopantCodeFor(entry, false))).toEqual(['phosphorus', 'nitrogen']);
+    expect(dopantCodeFormula('C2', true)).toBe('IF(TRIM(C2)="P","acceptor",IF(TRIM(C2)="N","donor",TRIM(C2)))');
+    const table = [
+      ['Wafer', 'Type', 'Rho min', 'Rho max'],
+      ['Z1', 'p', 8, 12],
+      ['Z2', 'P', 8, 12],
+    ];
+    const { port, mapping } = await portWithTable(table);
+    await addCertificateCheck(port, await port.selection(), { ...BASE, mapping });
+    const values = port.engineValues();
+    const first = LEFT + table[0].length;
+    expect([valueAt(values, TOP + 1, first), valueAt(values, TOP + 2, first)]).toEqual(['acceptor', 'acceptor']);
+    expect(numberAt(values, TOP + 1, first + 1)).toBe(numberAt(values, TOP + 2, first + 1));
   });
 
   it('without a type column, every row uses the dopant parameter cell', async () => {
@@ -194,7 +223,7 @@ describe('options', () => {
     const values = port.engineValues();
     const first = LEFT + table[0].length;
     expect(plan.writes[0].cells[1][1]).toMatch(/\(E3\*0\.001,/);
-    expect(numberAt(values, TOP + 1, first + 1) / value('DOPING', 0.004, 'n')).toBeCloseTo(1, 12);
+    expect(numberAt(values, TOP + 1, first + 1) / value('DOPING', 0.004, 'donor')).toBeCloseTo(1, 12);
     expect(numberAt(values, TOP + 1, first + 5) / value('SHEETRES', 0.003, 525)).toBeCloseTo(1, 12);
     expect(valueAt(values, TOP + 1, first + 6)).toBe('PASS');
   });
@@ -228,7 +257,7 @@ describe('options', () => {
     expect(plan.headers[3]).toBe('Needed window inside certified doping');
     const values = port.engineValues();
     CERTIFICATE_ROWS.forEach((row, index) => {
-      const code = row[2] === 'P' ? 'p' : row[2] === 'N' ? 'n' : String(row[2]);
+      const code = row[2] === 'P' ? 'acceptor' : row[2] === 'N' ? 'donor' : String(row[2]);
       const low = value('DOPING', row[4] as number, code);
       const high = value('DOPING', row[3] as number, code);
       expect(valueAt(values, TOP + 1 + index, FIRST_NEW + 3)).toBe(low <= 1.2e15 && high >= 1.5e15 ? 'yes' : 'no');
@@ -303,7 +332,7 @@ describe('refusals and warnings', () => {
     const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping });
     expect(plan.warnings).toEqual([
       'Rows 5: ρ min is above ρ max; the check uses the lower and higher of the two.',
-      `Type not known as a dopant in row 4 ('X-type'); those rows show an error. Allowed: ${dopantCodes(SILICON).join(', ')}, n-type, p-type or element names.`,
+      `Type not known as a dopant in row 4 ('X-type'); those rows show an error. Allowed (any case): ${typedDopantCodes(SILICON).join(', ')}, n-type, p-type or element names.`,
     ]);
     const values = port.engineValues();
     const shown = valueAt(values, TOP + 2, LEFT + 4 + 1);

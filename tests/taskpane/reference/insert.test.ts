@@ -25,7 +25,7 @@ describe('example arguments', () => {
       { kind: 'blank' },
       { kind: 'value', value: true },
     ]);
-    expect(exampleArguments('=DRIFT.DOPING(B2:C2,"P")', doping)![0]).toEqual({ kind: 'other', text: 'B2:C2' });
+    expect(exampleArguments('=DRIFT.DOPING(B2:C2,"phosphorus")', doping)![0]).toEqual({ kind: 'other', text: 'B2:C2' });
     expect(exampleArguments('=DRIFT.DOPING({1,2;3,4},MAX(1,2))', doping)).toEqual([
       { kind: 'array', values: [1, 2, 3, 4] },
       { kind: 'other', text: 'MAX(1,2)' },

@@ -128,8 +128,8 @@ describe('planSweep', () => {
   });
 
   it('leaves optional arguments blank between given ones, so the function’s default applies', () => {
-    const plan = planSweep(resolved({ values: { 'inner:dopant': 'P', 'inner:material': 'Si' } }), at(0, 0));
-    expect(plan.formula).toBe('=DRIFT.RESISTIVITY(A3:A7,"P",300,,"Si")');
+    const plan = planSweep(resolved({ values: { 'inner:dopant': 'phosphorus', 'inner:material': 'Si' } }), at(0, 0));
+    expect(plan.formula).toBe('=DRIFT.RESISTIVITY(A3:A7,"phosphorus",300,,"Si")');
   });
 
   it('SHEETRES nests RESISTIVITY so one formula still does the whole column', () => {
@@ -149,7 +149,7 @@ describe('insertSweep on the engine workbook', () => {
     ['RESISTIVITY over doping', {}],
     ['RESISTIVITY over doping × °C', { temperatureSwept: true, temperatureUnit: '°C' as const, temperatureFrom: '0', temperatureTo: '100', temperatureStep: '50' }],
     ['MOBILITY of minority electrons', { quantityId: 'MOBILITY', values: { 'inner:dopant': 'B', 'inner:carrier': 'electron' } }],
-    ['SHEETRES of a 2 µm layer', { quantityId: 'SHEETRES', values: { 'inner:dopant': 'P', 'outer:thickness_um': '2' } }],
+    ['SHEETRES of a 2 µm layer', { quantityId: 'SHEETRES', values: { 'inner:dopant': 'phosphorus', 'outer:thickness_um': '2' } }],
     ['INTRINSIC over temperature', { quantityId: 'INTRINSIC', dopingSwept: false, temperatureSwept: true, values: {} }],
   ])('%s: the spilled formula evaluates to the catalog’s numbers', async (_name, form) => {
     const input = resolved(form);
@@ -168,9 +168,9 @@ describe('insertSweep on the engine workbook', () => {
 
   it('the cells equal a direct catalog call with the same doping column (independent of the preview code)', async () => {
     const port = createEnginePort();
-    const { plan } = await insertSweep(port, resolved({ values: { 'inner:dopant': 'P' } }));
+    const { plan } = await insertSweep(port, resolved({ values: { 'inner:dopant': 'phosphorus' } }));
     const { values } = await port.read(plan.results);
-    const direct = evaluate(findFunction('RESISTIVITY')!, [[[1e14], [316227766017000], [1e15], [3162277660170000], [1e16]], 'P', 300]);
+    const direct = evaluate(findFunction('RESISTIVITY')!, [[[1e14], [316227766017000], [1e15], [3162277660170000], [1e16]], 'phosphorus', 300]);
     expect(values).toEqual(direct);
   });
 

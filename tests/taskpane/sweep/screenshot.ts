@@ -7,7 +7,7 @@ import type { Page } from 'playwright-core';
 import { cells, selectBlock } from '../support/harness';
 
 export async function prepare(page: Page): Promise<void> {
-  await page.getByLabel('dopant').selectOption('P');
+  await page.getByLabel('dopant').selectOption('phosphorus');
   await page.getByLabel('Sweep temperature').check();
   await selectBlock(page, cells({ row: 1, column: 1 }));
   await page.getByRole('button', { name: 'Insert table and chart' }).click();

@@ -36,7 +36,7 @@ describe('Sweep builder in Chromium', () => {
     const page = await harness.openPane({ width: 500 });
     await page.getByRole('tab', { name: 'Sweep builder' }).click();
     await page.getByLabel('Quantity').selectOption('RESISTIVITY');
-    await page.getByLabel('dopant').selectOption('P');
+    await page.getByLabel('dopant').selectOption('phosphorus');
     await page.getByLabel('From (cm⁻³)').fill('1e15');
     await page.getByLabel('To (cm⁻³)').fill('1e18');
     await page.getByLabel('Points per decade').fill('4');
@@ -45,17 +45,17 @@ describe('Sweep builder in Chromium', () => {
     await page.locator('#sw-temperature-from').fill('-25');
     await page.locator('#sw-temperature-to').fill('125');
     await page.locator('#sw-temperature-step').fill('50');
-    expect(await page.locator('#sw-formula').textContent()).toBe('=DRIFT.RESISTIVITY(A4:A16,"P",B3:E3)');
+    expect(await page.locator('#sw-formula').textContent()).toBe('=DRIFT.RESISTIVITY(A4:A16,"phosphorus",B3:E3)');
     // The live preview drew one curve per temperature and says what it shows.
     expect(await page.locator('#sw-plot svg path.curve').count()).toBe(4);
     expect(await page.locator('#sw-plot svg desc').textContent()).toMatch(/Resistivity ρ \(Ω·cm\) against Doping \(cm⁻³\), log x, log y/);
     await selectBlock(page, cells({ row: 1, column: 1 }));
     await page.getByRole('button', { name: 'Insert table and chart' }).click();
     await page.waitForFunction(() => /Inserted|Nothing written|Not inserted/.test(document.getElementById('messages')?.textContent ?? ''));
-    expect(await announced(page)).toMatch(/^Inserted at Sheet1!B2:F17: =DRIFT\.RESISTIVITY\(B5:B17,"P",C4:F4\) in C5 spills 13 × 4 values; chart added \(log x, log y\)\.$/);
+    expect(await announced(page)).toMatch(/^Inserted at Sheet1!B2:F17: =DRIFT\.RESISTIVITY\(B5:B17,"phosphorus",C4:F4\) in C5 spills 13 × 4 values; chart added \(log x, log y\)\.$/);
 
     const table = await readBlock(page, cells({ row: 1, column: 1, rowCount: 16, columnCount: 5 }));
-    expect(table.values[0][0]).toBe('Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, P');
+    expect(table.values[0][0]).toBe('Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, phosphorus');
     expect(table.values[1]).toEqual(['Temperature (°C) →', -25, 25, 75, 125]);
     expect(table.values[2]).toEqual(['Doping (cm⁻³) ↓ · Temperature (K) →', 248.15, 298.15, 348.15, 398.15]);
     const doping = table.values.slice(3).map((row) => row[0] as number);
@@ -63,10 +63,10 @@ describe('Sweep builder in Chromium', () => {
     expect(doping[doping.length - 1]).toBe(1e18);
     const kelvin = table.values[2].slice(1) as number[];
     // Exactly one formula: the anchor; the rest is its spill.
-    expect(table.formulas.flat().filter((f) => f !== null)).toEqual(['=DRIFT.RESISTIVITY(B5:B17,"P",C4:F4)']);
+    expect(table.formulas.flat().filter((f) => f !== null)).toEqual(['=DRIFT.RESISTIVITY(B5:B17,"phosphorus",C4:F4)']);
     // The catalog in Node, same axis values as the cells hold (Masetti et al. 1983 mobility is the default model;
     // this checks the wiring, the physics has its own reference tests).
-    const expected = evaluate(findFunction('RESISTIVITY')!, [doping.map((d) => [d]), 'P', [kelvin]]);
+    const expected = evaluate(findFunction('RESISTIVITY')!, [doping.map((d) => [d]), 'phosphorus', [kelvin]]);
     const spilled = table.values.slice(3).map((row) => row.slice(1));
     spilled.forEach((row, r) => row.forEach((v, c) => expect(v as number).toBeCloseTo(expected[r][c] as number, 10)));
 
