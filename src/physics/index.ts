@@ -83,7 +83,7 @@ export {
   type MaterialHighFieldTables,
 } from './highField';
 export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
-export { dopingForResistivity } from './inverse';
+export { dopingForResistivity, dopingSolutions, AmbiguousDopingError, type DensityWindow, type DensityWindowNames, type DopingSolution } from './inverse';
 export { f723Resistivity, f723Density, type F723Species } from './astmF723';
 
 // Geometry of uniform conductors.
