@@ -24,16 +24,15 @@ function spec(name: string): FunctionSpec {
 }
 
 /**
- * Forward evaluations the inverse's bracketing scan makes before it stops at
- * the grid interval holding the solution (physics/inverse.ts: grid in ln N
- * from NET_DENSITY_SEARCH.min, GRID_STEP_DECADES apart, scanned upwards).
+ * Forward evaluations of the inverse's scan (physics/inverse.ts: the whole
+ * grid in ln N from NET_DENSITY_SEARCH.min, GRID_STEP_DECADES apart, so that
+ * every solution is found; turning-point refinements come on top where ρ(N)
+ * is not monotone, never at 300 K).
  */
-function scanPointsUpTo(density: number): number {
+function scanPoints(): number {
   const lo = Math.log(NET_DENSITY_SEARCH.min);
   const hi = Math.log(NET_DENSITY_SEARCH.maxTotal);
-  const steps = Math.max(2, Math.ceil((hi - lo) / (GRID_STEP_DECADES * Math.LN10)));
-  const upper = Math.ceil(((Math.log(density) - lo) / (hi - lo)) * steps);
-  return Math.min(steps, upper) + 1;
+  return Math.max(2, Math.ceil((hi - lo) / (GRID_STEP_DECADES * Math.LN10))) + 1;
 }
 
 function stats(values: readonly number[]): { max: number; mean: number } {
@@ -72,7 +71,7 @@ export function runInverse(elements = 100): Section {
   rhos.forEach((rho, i) => {
     const solution = dopingForResistivity(rho, { material: SILICON, temperature: 300, dopant: phosphorus, counterDensity: 0 });
     dopingIterations.push(solution.iterations);
-    scanEvaluations.push(scanPointsUpTo(solution.density));
+    scanEvaluations.push(scanPoints());
     worstRoundTrip = Math.max(worstRoundTrip, Math.abs(solution.density / densities[i] - 1));
     majorityIterations.push(solveEquilibrium(SILICON, 300, [{ dopant: phosphorus, density: densities[i] }]).iterations);
   });

@@ -16,9 +16,12 @@
  * is an error listing them, unless a density window (min/max) leaves exactly
  * one. The method works for any forward model ρ(N):
  *
- * 1. ln ρ is sampled over the whole allowed range on a grid in u,
- *    GRID_STEP_DECADES apart (cached per conditions: it does not depend on the
- *    target).
+ * 1. ln ρ is sampled over the whole allowed range on a coarse grid in u,
+ *    COARSE_STEP_DECADES apart. Around every turning point of the samples and
+ *    every extremum of their slope (where a fold forms, or could hide between
+ *    coarse points) and at the ends, the grid is refined to GRID_STEP_DECADES.
+ *    The scan depends on the conditions only, not on the target, and is
+ *    cached: a column of targets under the same conditions scans once.
  * 2. The sampled curve is cut into monotone segments at its turning points
  *    (a reversal counts only beyond FLAT_LOG_RESISTIVITY, so round-off in a
  *    flat, intrinsic stretch makes none); each turning point is refined by a
@@ -27,19 +30,26 @@
  *    one solution; the grid interval holding it goes to the bracketed root
  *    finder on ln ρ(u) − ln ρ_target.
  *
- * Why the grid is fine enough: a pair of turning points (a maximum and a
- * minimum) escapes the grid only if no two grid points lie between them,
- * i.e. if they are less than two steps (0.1 decade) apart. Near such a fold
- * ln ρ is locally cubic in ln N, so the resistivity range with three solutions
- * shrinks as the cube of the separation. For the freeze-out fold of every
- * silicon dopant the height is ≈ 0.25·s³ in ln ρ for a separation of s
- * decades (measured on the forward model between the temperature where the
- * fold appears, ~110–135 K, and 60 K; the fold widens as T falls), so a missed
- * pair spans under 0.1 decade of N and under 2.5e-4 (0.025 %) of ρ: far below
- * the ~1 % a resistivity is measured to, and a stretch where ρ cannot tell
- * those densities apart anyway. The ionization and mobility models are
- * sigmoids in (N/N_ref)^k with k ≤ 2.4, each changing over ≳ 0.2 decade, so
- * no model feature is narrower than the grid step.
+ * Why the grid is fine enough. A fold (a maximum and a minimum of ρ) is an
+ * extremum of the slope d ln ρ/d ln N that crosses zero. The coarse slopes are
+ * averages of the slope over 0.25 decade; they show an extremum next to the
+ * true one wherever the slope has no second extremum within about half a
+ * decade, which holds for the models here: ionization (Altermatt et al. 2006)
+ * and the mobility fits (Masetti, Arora, Caughey–Thomas, Klaassen, the other
+ * materials' fits) are sums of sigmoids in (N/N_ref)^k with k ≤ 2.4, each
+ * turning over ≳ 0.4 decade. There the grid is refined to
+ * 0.05 decade, and a fold then escapes only if no two grid points lie
+ * between its maximum and minimum, i.e. if they are under 0.1 decade apart.
+ * Near a fold ln ρ is locally cubic in ln N, so the resistivity range with
+ * three solutions shrinks as the cube of the separation: for the freeze-out
+ * fold of every silicon dopant the height is ≈ 0.25·s³ in ln ρ for a
+ * separation of s decades (measured on the forward model between 60 K and
+ * the temperature where the fold appears, ~110–135 K; tested in
+ * tests/physics/inverseAmbiguity.test.ts), so a missed fold spans under
+ * 0.1 decade of N and under 2.5e-4 (0.025 %) of ρ: far below the ~1 % a
+ * resistivity is measured to, in a stretch where ρ cannot tell those
+ * densities apart anyway. Cost: about 160–270 forward evaluations for a new
+ * set of conditions (89 coarse points, the refinements, 30 per turning point).
  *
  * For 'astm-f723' the standard's own (monotone) reverse equation is used.
  */
@@ -56,7 +66,10 @@ import { f723Density, f723SpeciesFor } from './astmF723';
  */
 export const NET_DENSITY_SEARCH = { min: 1, maxTotal: 1e22 } as const;
 
-/** Grid spacing of the scan, decades of net density (why it suffices: module comment). */
+/** Spacing of the coarse scan over the whole range, decades of net density. */
+export const COARSE_STEP_DECADES = 0.25;
+
+/** Spacing of the scan where it is refined (why it suffices: module comment), decades of net density. */
 export const GRID_STEP_DECADES = 0.05;
 
 /**
@@ -74,8 +87,13 @@ export const FLAT_LOG_RESISTIVITY = 1e-9;
  */
 export const LOG_DENSITY_TOLERANCE = 1e-13;
 
-/** Golden-section iterations used to refine a turning point between grid points (bracket shrinks 0.618^60 ≈ 3e-13). */
-const PEAK_SEARCH_ITERATIONS = 60;
+/**
+ * Golden-section iterations refining a turning point between its grid
+ * neighbours (0.1 decade = 0.23 in ln N): the bracket shrinks to
+ * 0.23·0.618^30 ≈ 1.2e-7 in ln N, so the extreme ρ is found to ~1e-14
+ * relative (the error is quadratic in the position), below the root tolerance.
+ */
+const PEAK_SEARCH_ITERATIONS = 30;
 
 /** Result of the inverse: the density and the root-finder iterations used. */
 export interface DopingSolution {
@@ -210,7 +228,7 @@ function locateMaximum(g: (u: number) => number, a: number, b: number): { u: num
  * becomes a turning point once the curve has moved back from it by more than
  * `flat`. Indices lie strictly inside the grid.
  */
-function turningIndices(values: Float64Array, flat: number): number[] {
+function turningIndices(values: ArrayLike<number>, flat: number): number[] {
   const turns: number[] = [];
   let direction = 0;
   let low = 0;
@@ -243,22 +261,55 @@ function turningIndices(values: Float64Array, flat: number): number[] {
 }
 
 function scanConditions(logResistivityAt: (u: number) => number, lo: number, hi: number): Scan {
-  const steps = Math.max(2, Math.ceil((hi - lo) / (GRID_STEP_DECADES * Math.LN10)));
-  const grid = new Float64Array(steps + 1);
-  const values = new Float64Array(steps + 1);
-  for (let i = 0; i <= steps; i++) {
-    grid[i] = i === steps ? hi : lo + ((hi - lo) * i) / steps;
-    values[i] = logResistivityAt(grid[i]);
+  // 1. Coarse grid over the whole range.
+  const coarseSteps = Math.max(2, Math.ceil((hi - lo) / (COARSE_STEP_DECADES * Math.LN10)));
+  const coarseGrid = new Float64Array(coarseSteps + 1);
+  const coarseValues = new Float64Array(coarseSteps + 1);
+  for (let i = 0; i <= coarseSteps; i++) {
+    coarseGrid[i] = i === coarseSteps ? hi : lo + ((hi - lo) * i) / coarseSteps;
+    coarseValues[i] = logResistivityAt(coarseGrid[i]);
   }
+  // 2. Coarse intervals to refine: around every turning point of ln ρ and
+  //    every extremum of its slope (where a fold can form or hide), and the ends.
+  const differences = new Float64Array(coarseSteps);
+  for (let j = 0; j < coarseSteps; j++) differences[j] = coarseValues[j + 1] - coarseValues[j];
+  const refine = new Uint8Array(coarseSteps);
+  const mark = (j: number): void => {
+    for (let k = Math.max(0, j - 1); k <= Math.min(coarseSteps - 1, j + 1); k++) refine[k] = 1;
+  };
+  for (const k of turningIndices(coarseValues, FLAT_LOG_RESISTIVITY)) {
+    mark(k - 1);
+    mark(k);
+  }
+  for (const j of turningIndices(differences, FLAT_LOG_RESISTIVITY)) mark(j);
+  mark(0);
+  mark(coarseSteps - 1);
+  // 3. The grid: coarse points, with GRID_STEP_DECADES points inside the refined intervals.
+  const parts = Math.max(1, Math.round(COARSE_STEP_DECADES / GRID_STEP_DECADES));
+  const grid: number[] = [];
+  const values: number[] = [];
+  for (let j = 0; j < coarseSteps; j++) {
+    grid.push(coarseGrid[j]);
+    values.push(coarseValues[j]);
+    if (refine[j] === 0) continue;
+    for (let m = 1; m < parts; m++) {
+      const u = coarseGrid[j] + ((coarseGrid[j + 1] - coarseGrid[j]) * m) / parts;
+      grid.push(u);
+      values.push(logResistivityAt(u));
+    }
+  }
+  grid.push(coarseGrid[coarseSteps]);
+  values.push(coarseValues[coarseSteps]);
+  // 4. Turning points on that grid, each refined between its neighbours.
   const turningPoints = turningIndices(values, FLAT_LOG_RESISTIVITY).map((k): TurningPoint => {
     const sign = values[k] > values[k - 1] ? 1 : -1; // a maximum (+1) or a minimum (−1)
     const refined = locateMaximum((u) => sign * logResistivityAt(u), grid[k - 1], grid[k + 1]);
     // The grid point itself may be the better extreme (round-off on a flat top).
-    return sign * refined.value > sign * values[k]
+    return refined.value > sign * values[k]
       ? { u: refined.u, logResistivity: sign * refined.value }
       : { u: grid[k], logResistivity: values[k] };
   });
-  return { grid, logResistivity: values, turningPoints };
+  return { grid: Float64Array.from(grid), logResistivity: Float64Array.from(values), turningPoints };
 }
 
 /**
@@ -275,6 +326,45 @@ function scanConditions(logResistivityAt: (u: number) => number, lo: number, hi:
  */
 export function dopingSolutions(target: number, sample: Omit<Sample, 'density'>, model?: string): readonly DopingSolution[] {
   return solve(target, sample, model).solutions;
+}
+
+/**
+ * Turning points of ln ρ against the net doping, as the scan finds them:
+ * where ρ(N) changes between rising and falling (maxima and minima).
+ *
+ * @param sample - material, temperature, dopant and counterDensity
+ * @param model - resistivity model code (not 'astm-f723', which is monotone and not scanned)
+ * @returns the turning points, ascending: net density (cm⁻³), resistivity (Ω·cm) and kind
+ * @example resistivityTurningPoints(phosphorusAt77K).map((t) => t.kind) // ['minimum', 'maximum']
+ */
+export function resistivityTurningPoints(
+  sample: Omit<Sample, 'density'>,
+  model?: string,
+): readonly { netDensity: number; resistivity: number; kind: 'minimum' | 'maximum' }[] {
+  const code = resolveResistivityModel(model, sample.material);
+  if (code === ASTM_F723_CODE) return [];
+  const { scan } = scanFor(sample, code);
+  return scan.turningPoints.map((t, i) => {
+    const before = i === 0 ? scan.logResistivity[0] : scan.turningPoints[i - 1].logResistivity;
+    return { netDensity: Math.exp(t.u), resistivity: Math.exp(t.logResistivity), kind: t.logResistivity > before ? 'maximum' : 'minimum' };
+  });
+}
+
+function scanFor(sample: Omit<Sample, 'density'>, code: string): { scan: Scan; maxNet: number; densityOf: (u: number) => number; logResistivityAt: (u: number) => number } {
+  const counter = sample.counterDensity;
+  const maxNet = NET_DENSITY_SEARCH.maxTotal - counter;
+  if (!(maxNet > NET_DENSITY_SEARCH.min)) {
+    throw new PhysicsDomainError(
+      `counter-doping ${counter} cm⁻³ leaves no room for the dopant below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³ total; ` +
+        `use counter-doping below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³.`,
+    );
+  }
+  const densityOf = (u: number): number => counter + Math.exp(u);
+  const logResistivityAt = (u: number): number => Math.log(resistivity({ ...sample, density: densityOf(u) }, code));
+  const lo = Math.log(NET_DENSITY_SEARCH.min);
+  const hi = Math.log(maxNet);
+  const scan = cachedScan(sample, code, () => scanConditions(logResistivityAt, lo, hi));
+  return { scan, maxNet, densityOf, logResistivityAt };
 }
 
 interface Solved {
@@ -294,19 +384,7 @@ function solve(target: number, sample: Omit<Sample, 'density'>, model?: string):
     return { solutions: [{ density: f723Density(species, target), iterations: 0 }], code };
   }
 
-  const counter = sample.counterDensity;
-  const maxNet = NET_DENSITY_SEARCH.maxTotal - counter;
-  if (!(maxNet > NET_DENSITY_SEARCH.min)) {
-    throw new PhysicsDomainError(
-      `counter-doping ${counter} cm⁻³ leaves no room for the dopant below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³ total; ` +
-        `use counter-doping below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³.`,
-    );
-  }
-  const densityOf = (u: number): number => counter + Math.exp(u);
-  const logResistivityAt = (u: number): number => Math.log(resistivity({ ...sample, density: densityOf(u) }, code));
-  const lo = Math.log(NET_DENSITY_SEARCH.min);
-  const hi = Math.log(maxNet);
-  const scan = cachedScan(sample, code, () => scanConditions(logResistivityAt, lo, hi));
+  const { scan, maxNet, densityOf, logResistivityAt } = scanFor(sample, code);
 
   const logTarget = Math.log(target);
   // Positive where the sample is more resistive than the target.
