@@ -350,6 +350,20 @@ export function resistivityTurningPoints(
   });
 }
 
+/**
+ * Forward evaluations the scan makes for a new set of conditions (for the
+ * benchmark): its grid points plus the golden-section refinements.
+ *
+ * @param sample - material, temperature, dopant and counterDensity
+ * @param model - resistivity model code (not 'astm-f723', which is not scanned)
+ * @returns forward evaluations, made once per conditions (cached)
+ * @example scanEvaluations(phosphorusAt300K) // ≈ 160
+ */
+export function scanEvaluations(sample: Omit<Sample, 'density'>, model?: string): number {
+  const { scan } = scanFor(sample, resolveResistivityModel(model, sample.material));
+  return scan.grid.length + scan.turningPoints.length * (PEAK_SEARCH_ITERATIONS + 2);
+}
+
 function scanFor(sample: Omit<Sample, 'density'>, code: string): { scan: Scan; maxNet: number; densityOf: (u: number) => number; logResistivityAt: (u: number) => number } {
   const counter = sample.counterDensity;
   const maxNet = NET_DENSITY_SEARCH.maxTotal - counter;
