@@ -10,7 +10,7 @@ import { CATALOG } from '../src/catalog';
 import { evaluate } from '../src/catalog/broadcast';
 import type { FunctionSpec } from '../src/catalog/types';
 import { SILICON, dopingForResistivity, resolveDopant, resistivity, solveEquilibrium } from '../src/physics';
-import { GRID_STEP_DECADES, NET_DENSITY_SEARCH } from '../src/physics/inverse';
+import { scanEvaluations as scanEvaluationsFor } from '../src/physics/inverse';
 import { dopingAt } from './lib/sheets';
 import { consume, sideBySide } from './lib/timing';
 import { figure, ratio, show, target, type Section, type TableRow } from './lib/results';
@@ -21,19 +21,6 @@ function spec(name: string): FunctionSpec {
   const found = CATALOG.find((s) => s.name === name);
   if (found === undefined) throw new Error(`${name} missing from the catalog`);
   return found;
-}
-
-/**
- * Forward evaluations the inverse's bracketing scan makes before it stops at
- * the grid interval holding the solution (physics/inverse.ts: grid in ln N
- * from NET_DENSITY_SEARCH.min, GRID_STEP_DECADES apart, scanned upwards).
- */
-function scanPointsUpTo(density: number): number {
-  const lo = Math.log(NET_DENSITY_SEARCH.min);
-  const hi = Math.log(NET_DENSITY_SEARCH.maxTotal);
-  const steps = Math.max(2, Math.ceil((hi - lo) / (GRID_STEP_DECADES * Math.LN10)));
-  const upper = Math.ceil(((Math.log(density) - lo) / (hi - lo)) * steps);
-  return Math.min(steps, upper) + 1;
 }
 
 function stats(values: readonly number[]): { max: number; mean: number } {
@@ -72,7 +59,7 @@ export function runInverse(elements = 100): Section {
   rhos.forEach((rho, i) => {
     const solution = dopingForResistivity(rho, { material: SILICON, temperature: 300, dopant: phosphorus, counterDensity: 0 });
     dopingIterations.push(solution.iterations);
-    scanEvaluations.push(scanPointsUpTo(solution.density));
+    scanEvaluations.push(scanEvaluationsFor({ material: SILICON, temperature: 300, dopant: phosphorus, counterDensity: 0 }));
     worstRoundTrip = Math.max(worstRoundTrip, Math.abs(solution.density / densities[i] - 1));
     majorityIterations.push(solveEquilibrium(SILICON, 300, [{ dopant: phosphorus, density: densities[i] }]).iterations);
   });

@@ -89,7 +89,7 @@ export {
   type MaterialHighFieldTables,
 } from './highField';
 export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
-export { dopingForResistivity } from './inverse';
+export { dopingForResistivity, dopingSolutions, AmbiguousDopingError, type DensityWindow, type DensityWindowNames, type DopingSolution } from './inverse';
 export { f723Resistivity, f723Density, F723_VALIDITY, type F723Species } from './astmF723';
 export { F723_ANCHOR_TEMPERATURE } from './f723Anchored';
 

@@ -27,7 +27,14 @@ function calls(): Call[] {
     }
     for (const rho of [0.01, 1, 30]) {
       list.push(() => JSON.stringify(dopingForResistivity(rho, { material: SILICON, temperature: 300, dopant, counterDensity: 0 })));
-      list.push(() => JSON.stringify(dopingForResistivity(rho, { material: SILICON, temperature: 77, dopant, counterDensity: 1e13 })));
+      // At 77 K some of these have several solutions: the refusal must be the same whatever came before.
+      list.push(() => {
+        try {
+          return JSON.stringify(dopingForResistivity(rho, { material: SILICON, temperature: 77, dopant, counterDensity: 1e13 }));
+        } catch (error) {
+          return String(error);
+        }
+      });
     }
   }
   return list;

@@ -4,7 +4,7 @@
  * lighter doping, so the window comes out as [N(ρmax), N(ρmin)], low to high.
  */
 import { PhysicsDomainError } from '../errors';
-import { dopingForResistivity } from '../inverse';
+import { dopingForResistivity, type DensityWindow, type DensityWindowNames } from '../inverse';
 import type { Sample } from '../sample';
 
 /**
@@ -14,7 +14,10 @@ import type { Sample } from '../sample';
  * @param resistivityMax - ρmax in Ω·cm, ≥ ρmin
  * @param sample - material, temperature, dopant and counter-doping
  * @param model - resistivity model code (blank: the default)
+ * @param window - optional density window, cm⁻³, picking one solution at each end where several densities give that ρ
+ * @param names - how messages name the window's ends
  * @returns [N at ρmax, N at ρmin] in cm⁻³
+ * @throws PhysicsDomainError (AmbiguousDopingError) as dopingForResistivity, for either end
  * @example dopingWindow(8, 12, siliconBoronAt300K) // ≈ [1.1e15, 1.7e15]
  */
 export function dopingWindow(
@@ -22,11 +25,16 @@ export function dopingWindow(
   resistivityMax: number,
   sample: Omit<Sample, 'density'>,
   model?: string,
+  window?: DensityWindow,
+  names?: DensityWindowNames,
 ): readonly [number, number] {
   if (resistivityMin > resistivityMax) {
     throw new PhysicsDomainError(
       `resistivity_min ${resistivityMin} Ω·cm is above resistivity_max ${resistivityMax} Ω·cm: give the window low end first`,
     );
   }
-  return [dopingForResistivity(resistivityMax, sample, model).density, dopingForResistivity(resistivityMin, sample, model).density];
+  return [
+    dopingForResistivity(resistivityMax, sample, model, window, names).density,
+    dopingForResistivity(resistivityMin, sample, model, window, names).density,
+  ];
 }

@@ -12,7 +12,7 @@ import { planCertificateCheck, type CertificateSettings } from '../../../src/tas
 import { addCertificateCheck, readCertificateTable } from '../../../src/taskpane/certificate/session';
 import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
 import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
-import type { ResultElement } from '../../../src/engine/engine';
+import type { ResultElement, ResultError } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
 import { MemoryPort, valueAt } from '../support/memoryPort';
 import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './fixture';
@@ -211,6 +211,23 @@ describe('options', () => {
     expect(numberAt(values, TOP + 1, LEFT + 3) / value('DOPING', 12, 'As')).toBeCloseTo(1, 12);
     // No readings, thickness, centre or edge: window check and pass/fail only.
     expect(plan.headers).toEqual(['Doping at ρmax (cm⁻³)', 'Doping at ρmin (cm⁻³)', 'Certified doping inside needed window', 'Pass/fail']);
+  });
+
+  it('a row whose resistivity several dopings give (77 K freeze-out) shows the error listing them, not a number', async () => {
+    // At 77 K, ρ of P-doped silicon falls, rises and falls again with doping
+    // (tests/physics/inverseAmbiguity.test.ts): 0.30–0.42 Ω·cm has three dopings, 2–6 Ω·cm one.
+    const table = [['Wafer', 'Rho min', 'Rho max'], ['A', 0.3, 0.42], ['B', 2, 6]];
+    const { port, mapping } = await portWithTable(table);
+    await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, dopant: 'phosphorus', temperatureK: 77 });
+    const values = port.engineValues();
+    for (const column of [LEFT + 3, LEFT + 4]) {
+      const shown = valueAt(values, TOP + 1, column);
+      expect(shown).toMatchObject({ kind: 'error', code: '#VALUE!' });
+      expect((shown as ResultError).message).toMatch(/^3 densities of P give resistivity .* Give doping_min and\/or doping_max/);
+    }
+    expect(valueAt(values, TOP + 1, LEFT + 6)).toMatchObject({ kind: 'error' }); // pass/fail: no verdict from an ambiguous doping
+    expect(numberAt(values, TOP + 2, LEFT + 3) / value('DOPING', 6, 'phosphorus', 77, 'masetti')).toBeCloseTo(1, 12);
+    expect(['PASS', 'FAIL']).toContain(valueAt(values, TOP + 2, LEFT + 6));
   });
 
   it('converts mΩ·cm and mm with documented factors', async () => {
