@@ -48,21 +48,32 @@ cell, the formula shows #SPILL! and the cell keeps its content. Values,
 formulas and cell formatting are kept; charts, pivot tables and macros are not
 carried into the copy. Cells that show errors are listed on stderr.
 
+With --values the copy is the values form, for programs without the DRIFT
+add-in (LibreOffice Calc shows #NAME? for spilled DRIFT results otherwise):
+every formula cell holds its result as a plain value, and a sheet "Formulas"
+(or "Formulas 2" … when that name is taken) lists each formula's sheet, cell,
+filled range and text. Nothing in the other sheets is recalculated by any
+program; edit the inputs in the live copy, not in this one.
+
 The input is never changed: -o must name another file. An existing output is
 only replaced with --force. The output is written to a temporary file in the
 same folder first and then renamed into place.
 
-Example:
-  driftcell recalc lots.xlsx -o lots-calculated.xlsx`;
+Examples:
+  driftcell recalc lots.xlsx -o lots-calculated.xlsx
+  driftcell recalc lots.xlsx -o lots-values.xlsx --values`;
 
 const DEMO_HELP = `
 The demo is invented from start to end: a fictional pressure-sensor maker
 checks incoming wafers against their ordered resistivity windows and sizes a
 boron-diffused resistor from -40 to 150 °C. Every result cell holds a live
-formula with its result stored. An existing file is never replaced.
+formula with its result stored; with --values every result is a plain value
+instead and the formulas are listed on a sheet "Formulas" (for programs
+without the DRIFT add-in). An existing file is never replaced.
 
-Example:
-  driftcell demo -o sensor-demo.xlsx`;
+Examples:
+  driftcell demo -o sensor-demo.xlsx
+  driftcell demo -o sensor-demo-values.xlsx --values`;
 
 /**
  * Builds the command-line program; actions report their exit status through `setStatus`.
@@ -103,8 +114,9 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
     .argument('<input>', 'the .xlsx workbook to read (it is not changed)')
     .requiredOption('-o, --output <file>', 'the .xlsx file to write')
     .option('-f, --force', 'replace the output file if it exists (never the input)', false)
+    .option('--values', 'write every result as a plain value and list the formulas on a sheet "Formulas"', false)
     .addHelpText('after', RECALC_HELP)
-    .action(async (input: string, options: { output: string; force: boolean }) =>
+    .action(async (input: string, options: { output: string; force: boolean; values: boolean }) =>
       setStatus(await runRecalc(input, options, output)),
     );
 
@@ -112,8 +124,11 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
     .command('demo')
     .description('write a demo workbook with invented data and print its resistor sweep')
     .option('-o, --output <file>', 'the .xlsx file to write', DEFAULT_DEMO_FILE)
+    .option('--values', 'write every result as a plain value and list the formulas on a sheet "Formulas"', false)
     .addHelpText('after', DEMO_HELP)
-    .action(async (options: { output: string }) => setStatus(await runDemo(options.output, output)));
+    .action(async (options: { output: string; values: boolean }) =>
+      setStatus(await runDemo(options.output, output, { values: options.values })),
+    );
 
   program.commands.forEach((command) => {
     command.exitOverride().configureOutput({
