@@ -21,8 +21,13 @@
 
 /** Storage prefixes of built-ins, removed for the engine. */
 const BUILTIN_PREFIX = /_xlfn\.|_xlws\.|_xlpm\./gi;
-/** An add-in function of the DRIFT namespace as Excel stores it. */
-const DRIFT_ADDIN_NAME = /_xldudf_DRIFT_([A-Z0-9]+)(?=\s*\()/gi;
+
+/**
+ * A DRIFT call in any form a file or a user may have: `DRIFT.NAME(` as typed, or
+ * `_xldudf_DRIFT_NAME(` as Excel stores it, in any case. The look-behind keeps
+ * longer names (MYDRIFT.X, A_xldudf_…) out.
+ */
+const DRIFT_ANY_FORM = /(?<![A-Za-z0-9_.])(?:DRIFT\.|_xldudf_DRIFT_)([A-Z0-9]+)(?=\s*\()/gi;
 
 /**
  * A number literal with an upper-case exponent (1E16, 2.5E-3, 1E+16), as Excel
@@ -34,7 +39,7 @@ const UPPER_CASE_EXPONENT = /(?<![A-Za-z_.\d])(\d+(?:\.\d*)?|\.\d+)E([+-]?\d)/g;
 function translateCode(code: string): string {
   return code
     .replace(BUILTIN_PREFIX, '')
-    .replace(DRIFT_ADDIN_NAME, (_match, name: string) => `DRIFT.${name.toUpperCase()}`)
+    .replace(DRIFT_ANY_FORM, (_match, name: string) => `DRIFT.${name.toUpperCase()}`)
     .replace(UPPER_CASE_EXPONENT, '$1e$2');
 }
 
@@ -80,12 +85,6 @@ export function engineFormula(stored: string): string {
     .join('')}`;
 }
 
-/**
- * A DRIFT call in any form a file or a user may have: `DRIFT.NAME(` as typed, or
- * `_xldudf_DRIFT_NAME(` as Excel stores it, in any case. The look-behind keeps
- * longer names (MYDRIFT.X, A_xldudf_…) out.
- */
-const DRIFT_ANY_FORM = /(?<![A-Za-z0-9_.])(?:DRIFT\.|_xldudf_DRIFT_)([A-Z0-9]+)(?=\s*\()/gi;
 
 /**
  * Formula text (as typed or as stored, with or without `=`) as a file stores it
