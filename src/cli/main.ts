@@ -41,10 +41,11 @@ Examples:
 
 const RECALC_HELP = `
 Every formula is recalculated (DRIFT functions, spreadsheet built-ins,
-references between sheets) and stored with its result, so any reader shows
-the values without recalculating. A formula whose result spills is written as
-a dynamic array over exactly its result; where a spill would cover a filled
-cell, the formula shows #SPILL! and the cell keeps its content. Values,
+references between sheets) and stored with its result, DRIFT calls in the
+form Excel stores for add-in functions. Excel shows the results; programs
+without the add-in may not (see --values). A formula whose result spills is
+written as a dynamic array over exactly its result; where a spill would cover
+a filled cell, the formula shows #SPILL! and the cell keeps its content. Values,
 formulas and cell formatting are kept; charts, pivot tables and macros are not
 carried into the copy. Cells that show errors are listed on stderr.
 
@@ -52,8 +53,8 @@ With --values the copy is the values form, for programs without the DRIFT
 add-in (LibreOffice Calc shows #NAME? for spilled DRIFT results otherwise):
 every formula cell holds its result as a plain value, and a sheet "Formulas"
 (or "Formulas 2" … when that name is taken) lists each formula's sheet, cell,
-filled range and text. Nothing in the other sheets is recalculated by any
-program; edit the inputs in the live copy, not in this one.
+filled range and text. Nothing in the other sheets recalculates any more:
+edit inputs in the live copy, not in this one.
 
 The input is never changed: -o must name another file. An existing output is
 only replaced with --force. The output is written to a temporary file in the
