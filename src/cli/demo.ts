@@ -53,7 +53,7 @@ export async function runDemo(file: string, output: Output, options: { readonly 
   if (existsSync(target)) {
     throw new CliFailure(`${file} already exists; not overwriting it. Choose another name with -o <file>`);
   }
-  const workbook = buildDemoWorkbook();
+  const workbook = buildDemoWorkbook(options.values === true);
   const summary = recalculateWorkbook(workbook);
   // The sweep is printed before the values form replaces the formulas (it reads cached results either way).
   const sweep = sweepTable(workbook);

@@ -270,7 +270,8 @@ describe('LibreOffice Calc reading the demo workbook', () => {
   it('shows every number and text of the values form, also when it recalculates on load', () => {
     for (const profile of [profiles.normal, profiles.recalcOnLoad]) {
       const shown = libreOffice(values, [...sheets, 'Formulas'], profile);
-      for (const cell of expected) expectShownAs(shown, cell);
+      // The About sheet's text says which form it is; everything else is as the engine left the live form.
+      for (const cell of expected) if (!(cell.sheet === SHEETS.about && cell.formula === 'none' && typeof cell.value === 'string')) expectShownAs(shown, cell);
       expect(shown.get('Formulas')?.length).toBe(3 + 31);
     }
   });
