@@ -21,7 +21,7 @@ import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
 import ExcelJS from 'exceljs';
 import { runDemo } from '../../src/cli/demo';
-import { SHEETS } from '../../src/cli/demoWorkbook';
+import { SHEETS, SWEEP_LAYOUT } from '../../src/cli/demoWorkbook';
 import { runRecalc } from '../../src/cli/recalc';
 import { readWorkbookFile } from '../../src/engine/xlsx';
 
@@ -291,5 +291,13 @@ describe('LibreOffice Calc reading the demo workbook', () => {
     for (const cell of singles) expectShownAs(shown, cell);
     // Inputs and text are shown as written.
     for (const cell of expected.filter((c) => c.formula === 'none')) expectShownAs(shown, cell);
+    // An array formula without DRIFT calls shows #NAME? when it uses a DRIFT result (the change
+    // column uses the R column), and its values when it does not (T in K from T in °C).
+    const sweep = expected.filter((c) => c.sheet === SHEETS.sweep && c.formula === 'array' && !c.drift);
+    const uses = sweep.filter((c) => c.column === SWEEP_LAYOUT.resistanceColumn + 1);
+    const free = sweep.filter((c) => c.column === SWEEP_LAYOUT.kelvinColumn);
+    expect([uses.length, free.length]).toEqual([20, 20]);
+    for (const cell of uses) expect({ cell, text: shownAt(shown, cell.sheet, cell.row, cell.column) }).toEqual({ cell, text: '#NAME?' });
+    for (const cell of free) expectShownAs(shown, cell);
   });
 });
