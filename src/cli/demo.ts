@@ -1,10 +1,12 @@
 /**
- * `driftcell demo [-o file]`: writes the demo workbook (invented data, live
- * formulas with cached results) and prints its resistor sweep.
+ * `driftcell demo [-o file] [--values]`: writes the demo workbook (invented
+ * data, live formulas with cached results, or with `--values` its values form)
+ * and prints its resistor sweep.
  */
 import { existsSync } from 'node:fs';
 import ExcelJS from 'exceljs';
 import { recalculateWorkbook, workbookBytes } from '../engine/xlsx';
+import { convertToValues, valuesWorkbookBytes, type ValuesForm } from '../engine/valuesForm';
 import { buildDemoWorkbook, DEMO_COMPANY, INVENTED_NOTE, SHEETS, SWEEP_LAYOUT } from './demoWorkbook';
 import { CliFailure, EXIT_OK, type Output } from './failure';
 import { resolveOutputPath, writeFileAtomically } from './files';
@@ -46,21 +48,30 @@ export function sweepTable(workbook: ExcelJS.Workbook): string[] {
  *
  * @returns the exit status (0); failures are thrown as CliFailure
  */
-export async function runDemo(file: string, output: Output): Promise<number> {
+export async function runDemo(file: string, output: Output, options: { readonly values?: boolean } = {}): Promise<number> {
   const target = resolveOutputPath(file);
   if (existsSync(target)) {
     throw new CliFailure(`${file} already exists; not overwriting it. Choose another name with -o <file>`);
   }
-  const workbook = buildDemoWorkbook();
+  const workbook = buildDemoWorkbook(options.values === true);
   const summary = recalculateWorkbook(workbook);
-  writeFileAtomically(target, await workbookBytes(workbook, summary), false);
+  // The sweep is printed before the values form replaces the formulas (it reads cached results either way).
+  const sweep = sweepTable(workbook);
+  let values: ValuesForm | undefined;
+  if (options.values) values = convertToValues(workbook);
+  const bytes = values ? await valuesWorkbookBytes(workbook) : await workbookBytes(workbook, summary);
+  writeFileAtomically(target, bytes, false);
 
   output.out(`${DEMO_COMPANY}: diffused-bar resistor over −40…150 °C (sheet "${SHEETS.sweep}")`);
   output.out(INVENTED_NOTE);
   output.out('');
-  sweepTable(workbook).forEach(output.out);
+  sweep.forEach(output.out);
   output.out('');
-  output.out(`wrote ${file}: ${summary.sheets.length} sheets, ${summary.formulas} formulas (live, with cached results)`);
+  output.out(
+    values
+      ? `wrote ${file} (values form): ${summary.sheets.length} sheets, ${summary.formulas} formulas as plain values, listed on sheet "${values.sheet}"`
+      : `wrote ${file}: ${summary.sheets.length} sheets, ${summary.formulas} formulas (live, with cached results)`,
+  );
   for (const problem of summary.problems) {
     output.err(`warning: ${problem.sheet}!${problem.address} shows ${problem.code} ${problem.message}`);
   }

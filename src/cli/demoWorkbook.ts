@@ -126,7 +126,7 @@ function spillArea(sheet: ExcelJS.Worksheet, top: number, left: number, rows: nu
   }
 }
 
-function aboutSheet(workbook: ExcelJS.Workbook): void {
+function aboutSheet(workbook: ExcelJS.Workbook, valuesForm: boolean): void {
   const sheet = workbook.addWorksheet(SHEETS.about);
   title(sheet, `${DEMO_COMPANY}: wafer qualification and resistor sizing`);
   const lines = [
@@ -137,7 +137,9 @@ function aboutSheet(workbook: ExcelJS.Workbook): void {
     `• ${SHEETS.table}: resistivity for a doping column against a temperature row, from one spilled DRIFT.RESISTIVITY.`,
     `• ${SHEETS.models}: DRIFT.MODELS(), every model code with its citation and validity range.`,
     '',
-    'Yellow cells are inputs; blue cells hold live formulas (with cached results), so editing an input and recalculating updates them.',
+    valuesForm
+      ? 'Yellow cells are inputs; blue cells hold the results of formulas as plain values (this is the values form); the formulas are listed on sheet "Formulas". Editing an input here updates nothing: use the live demo (driftcell demo without --values).'
+      : 'Yellow cells are inputs; blue cells hold live formulas (with cached results), so editing an input and recalculating updates them.',
     'The resistor is treated as a uniform bar at an effective doping: a first sizing estimate, not an integration over a diffusion profile.',
   ];
   lines.forEach((text, i) => (sheet.getCell(3 + i, 1).value = text));
@@ -242,13 +244,14 @@ function modelsSheet(workbook: ExcelJS.Workbook): void {
 /**
  * Builds the demo workbook with its formulas (results not yet computed).
  *
+ * @param valuesForm - the workbook will be written in its values form (the About sheet says so)
  * @returns an exceljs workbook; recalculate it before writing
  */
-export function buildDemoWorkbook(): ExcelJS.Workbook {
+export function buildDemoWorkbook(valuesForm = false): ExcelJS.Workbook {
   const workbook = new ExcelJS.Workbook();
   workbook.creator = 'driftcell demo';
   workbook.title = `${DEMO_COMPANY} demo: invented data`;
-  aboutSheet(workbook);
+  aboutSheet(workbook, valuesForm);
   wafersSheet(workbook);
   sweepSheet(workbook);
   tableSheet(workbook);

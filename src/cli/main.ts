@@ -41,28 +41,40 @@ Examples:
 
 const RECALC_HELP = `
 Every formula is recalculated (DRIFT functions, spreadsheet built-ins,
-references between sheets) and stored with its result, so any reader shows
-the values without recalculating. A formula whose result spills is written as
-a dynamic array over exactly its result; where a spill would cover a filled
-cell, the formula shows #SPILL! and the cell keeps its content. Values,
+references between sheets) and stored with its result, DRIFT calls in the
+form Excel stores for add-in functions. Excel shows the results; programs
+without the add-in may not (see --values). A formula whose result spills is
+written as a dynamic array over exactly its result; where a spill would cover
+a filled cell, the formula shows #SPILL! and the cell keeps its content. Values,
 formulas and cell formatting are kept; charts, pivot tables and macros are not
 carried into the copy. Cells that show errors are listed on stderr.
+
+With --values the copy is the values form, for programs without the DRIFT
+add-in (LibreOffice Calc shows #NAME? for spilled DRIFT results otherwise):
+every formula cell holds its result as a plain value, and a sheet "Formulas"
+(or "Formulas 2" … when that name is taken) lists each formula's sheet, cell,
+filled range and text. Nothing in the other sheets recalculates any more:
+edit inputs in the live copy, not in this one.
 
 The input is never changed: -o must name another file. An existing output is
 only replaced with --force. The output is written to a temporary file in the
 same folder first and then renamed into place.
 
-Example:
-  driftcell recalc lots.xlsx -o lots-calculated.xlsx`;
+Examples:
+  driftcell recalc lots.xlsx -o lots-calculated.xlsx
+  driftcell recalc lots.xlsx -o lots-values.xlsx --values`;
 
 const DEMO_HELP = `
 The demo is invented from start to end: a fictional pressure-sensor maker
 checks incoming wafers against their ordered resistivity windows and sizes a
 boron-diffused resistor from -40 to 150 °C. Every result cell holds a live
-formula with its result stored. An existing file is never replaced.
+formula with its result stored; with --values every result is a plain value
+instead and the formulas are listed on a sheet "Formulas" (for programs
+without the DRIFT add-in). An existing file is never replaced.
 
-Example:
-  driftcell demo -o sensor-demo.xlsx`;
+Examples:
+  driftcell demo -o sensor-demo.xlsx
+  driftcell demo -o sensor-demo-values.xlsx --values`;
 
 /**
  * Builds the command-line program; actions report their exit status through `setStatus`.
@@ -103,8 +115,9 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
     .argument('<input>', 'the .xlsx workbook to read (it is not changed)')
     .requiredOption('-o, --output <file>', 'the .xlsx file to write')
     .option('-f, --force', 'replace the output file if it exists (never the input)', false)
+    .option('--values', 'write every result as a plain value and list the formulas on a sheet "Formulas"', false)
     .addHelpText('after', RECALC_HELP)
-    .action(async (input: string, options: { output: string; force: boolean }) =>
+    .action(async (input: string, options: { output: string; force: boolean; values: boolean }) =>
       setStatus(await runRecalc(input, options, output)),
     );
 
@@ -112,8 +125,11 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
     .command('demo')
     .description('write a demo workbook with invented data and print its resistor sweep')
     .option('-o, --output <file>', 'the .xlsx file to write', DEFAULT_DEMO_FILE)
+    .option('--values', 'write every result as a plain value and list the formulas on a sheet "Formulas"', false)
     .addHelpText('after', DEMO_HELP)
-    .action(async (options: { output: string }) => setStatus(await runDemo(options.output, output)));
+    .action(async (options: { output: string; values: boolean }) =>
+      setStatus(await runDemo(options.output, output, { values: options.values })),
+    );
 
   program.commands.forEach((command) => {
     command.exitOverride().configureOutput({

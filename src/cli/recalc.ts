@@ -1,11 +1,13 @@
 /**
- * `driftcell recalc in.xlsx -o out.xlsx`: recalculates a workbook and writes
- * a copy with every formula's result cached.
+ * `driftcell recalc in.xlsx -o out.xlsx [--values]`: recalculates a workbook
+ * and writes a copy with every formula's result cached, or with `--values` its
+ * values form (results as plain values, formulas listed on their own sheet).
  */
 import { existsSync, statSync } from 'node:fs';
 import { WorkbookReadError, readWorkbookFile, recalculateWorkbook, workbookBytes, type RecalcSummary } from '../engine/xlsx';
 import { CliFailure, EXIT_CELLS_KEPT, EXIT_OK, type Output } from './failure';
 import { checkOutputAgainstInput, writeFileAtomically } from './files';
+import { convertToValues, valuesWorkbookBytes, type ValuesForm } from '../engine/valuesForm';
 import { formatError } from './format';
 import { phaseProgress } from './progress';
 
@@ -15,6 +17,8 @@ const LISTED_PROBLEMS = 20;
 export interface RecalcOptions {
   readonly output: string;
   readonly force: boolean;
+  /** Write the values form (valuesForm.ts) instead of live formulas. */
+  readonly values?: boolean;
 }
 
 function plural(n: number, word: string): string {
@@ -26,10 +30,13 @@ function quotedSheet(sheet: string): string {
 }
 
 /** The lines `recalc` prints about what it did. */
-export function describeSummary(summary: RecalcSummary, written: string): { lines: string[]; notes: string[] } {
+export function describeSummary(summary: RecalcSummary, written: string, values?: ValuesForm): { lines: string[]; notes: string[] } {
   const spills = summary.arrays.filter((a) => a.rows * a.columns > 1).length;
+  const counts = `${plural(summary.sheets.length, 'sheet')}, ${plural(summary.formulas, 'formula')}, ${plural(spills, 'spilled result')}`;
   const lines = [
-    `wrote ${written}: ${plural(summary.sheets.length, 'sheet')}, ${plural(summary.formulas, 'formula')}, ${plural(spills, 'spilled result')}`,
+    values === undefined
+      ? `wrote ${written}: ${counts}`
+      : `wrote ${written} (values form): ${counts}; every result is a plain value, the formulas are listed on sheet "${values.sheet}"`,
   ];
   const notes: string[] = [...summary.notices];
   if (summary.kept.length > 0) {
@@ -63,6 +70,7 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   const target = checkOutputAgainstInput(input, options.output, options.force);
   let summary: RecalcSummary;
   let bytes: Buffer;
+  let values: ValuesForm | undefined;
   // A bar on stderr only when it is a terminal: long workbooks take a while.
   const progress = phaseProgress(process.stderr, `recalc ${input}`, ['reading', 'calculating', 'writing']);
   progress.start(0);
@@ -76,7 +84,12 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
       throw e;
     }
     progress.start(2);
-    bytes = await workbookBytes(workbook, summary);
+    if (options.values) {
+      values = convertToValues(workbook);
+      bytes = await valuesWorkbookBytes(workbook);
+    } else {
+      bytes = await workbookBytes(workbook, summary);
+    }
   } catch (e) {
     if (e instanceof WorkbookReadError) throw new CliFailure(e.message);
     throw e;
@@ -86,7 +99,7 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   // Checked again just before writing: the output may have appeared meanwhile.
   checkOutputAgainstInput(input, options.output, options.force);
   writeFileAtomically(target, bytes, options.force, input);
-  const { lines, notes } = describeSummary(summary, options.output);
+  const { lines, notes } = describeSummary(summary, options.output, values);
   lines.forEach(output.out);
   notes.forEach(output.err);
   return summary.kept.length > 0 ? EXIT_CELLS_KEPT : EXIT_OK;

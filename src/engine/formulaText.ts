@@ -2,17 +2,32 @@
  * Formula text as .xlsx files store it, turned into the text the engine reads.
  *
  * Excel saves newer built-ins with a compatibility prefix (`_xlfn.SEQUENCE`,
- * `_xlfn._xlws.SORT`, `_xlpm.` for LET/LAMBDA names) and an add-in's custom
- * functions as `_xldudf_NAMESPACE_NAME`, e.g. `_xldudf_DRIFT_RESISTIVITY` for
- * DRIFT.RESISTIVITY (observed in workbooks Excel wrote; common practice, no
- * specification). The engine knows the plain names. Text inside string
- * literals and quoted sheet names is left alone.
+ * `_xlfn._xlws.SORT`, `_xlpm.` for LET/LAMBDA names) and an Office add-in's
+ * JavaScript custom functions with the prefix `_xldudf`: "For Javascript Custom
+ * Functions, we by default save out with a different prefix "_xldudf"" (a
+ * Microsoft engineer in OfficeDev/Excel-Custom-Functions issue #108; the
+ * `xldudf` substring in saved add-in cells is also the subject of
+ * OfficeDev/office-js issue #6655). The full stored name joins prefix,
+ * namespace and name with underscores, `_xldudf_DRIFT_RESISTIVITY` for
+ * DRIFT.RESISTIVITY (observed in workbooks Excel wrote, e.g.
+ * `_xldudf_optionsamurai_stock(…)` read back with openpyxl in a public test;
+ * common practice, no specification). The engine knows the plain names.
+ *
+ * Read: every form (`DRIFT.NAME(`, `_xldudf_DRIFT_NAME(`, either in any case).
+ * Written: only the form Excel writes, `_xldudf_DRIFT_NAME(` in upper case as
+ * the add-in registers its names. Text inside string literals and quoted
+ * sheet names is left alone.
  */
 
 /** Storage prefixes of built-ins, removed for the engine. */
 const BUILTIN_PREFIX = /_xlfn\.|_xlws\.|_xlpm\./gi;
-/** An add-in function of the DRIFT namespace as Excel stores it. */
-const DRIFT_ADDIN_NAME = /_xldudf_DRIFT_([A-Z0-9]+)(?=\s*\()/gi;
+
+/**
+ * A DRIFT call in any form a file or a user may have: `DRIFT.NAME(` as typed, or
+ * `_xldudf_DRIFT_NAME(` as Excel stores it, in any case. The look-behind keeps
+ * longer names (MYDRIFT.X, A_xldudf_…) out.
+ */
+const DRIFT_ANY_FORM = /(?<![A-Za-z0-9_.])(?:DRIFT\.|_xldudf_DRIFT_)([A-Z0-9]+)(?=\s*\()/gi;
 
 /**
  * A number literal with an upper-case exponent (1E16, 2.5E-3, 1E+16), as Excel
@@ -24,7 +39,7 @@ const UPPER_CASE_EXPONENT = /(?<![A-Za-z_.\d])(\d+(?:\.\d*)?|\.\d+)E([+-]?\d)/g;
 function translateCode(code: string): string {
   return code
     .replace(BUILTIN_PREFIX, '')
-    .replace(DRIFT_ADDIN_NAME, (_match, name: string) => `DRIFT.${name.toUpperCase()}`)
+    .replace(DRIFT_ANY_FORM, (_match, name: string) => `DRIFT.${name.toUpperCase()}`)
     .replace(UPPER_CASE_EXPONENT, '$1e$2');
 }
 
@@ -70,20 +85,32 @@ export function engineFormula(stored: string): string {
     .join('')}`;
 }
 
-/** A DRIFT call as the engine reads it. */
-const DRIFT_ENGINE_NAME = /\bDRIFT\.([A-Z0-9]+)(?=\s*\()/gi;
 
 /**
- * Engine formula text (with or without `=`) as a file stores it (without `=`):
- * DRIFT calls take the add-in form Excel itself writes, so Excel binds them to
- * the add-in when it opens the file. The inverse of engineFormula for DRIFT
- * calls; quoted text is left alone.
+ * Formula text (as typed or as stored, with or without `=`) as a file stores it
+ * (without `=`): every DRIFT call in the one form Excel itself writes for add-in
+ * functions, `_xldudf_DRIFT_NAME`, so Excel binds it to the add-in when it opens
+ * the file. Everything else, built-in prefixes included, is kept as it is;
+ * quoted text is left alone.
  *
- * @example storedFormula('=DRIFT.SHEETRES(A2,"DRIFT.X(")') // '_xldudf_DRIFT_SHEETRES(A2,"DRIFT.X(")'
+ * @example storedFormula('=drift.sheetres(A2,"DRIFT.X(")') // '_xldudf_DRIFT_SHEETRES(A2,"DRIFT.X(")'
  */
-export function storedFormula(engineText: string): string {
-  const body = engineText.startsWith('=') ? engineText.slice(1) : engineText;
+export function storedFormula(text: string): string {
+  const body = text.startsWith('=') ? text.slice(1) : text;
   return segments(body)
-    .map((part) => (part.quoted ? part.text : part.text.replace(DRIFT_ENGINE_NAME, (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`)))
+    .map((part) => (part.quoted ? part.text : part.text.replace(DRIFT_ANY_FORM, (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`)))
     .join('');
+}
+
+/**
+ * Formula text from a file as a person reads and types it in Excel: with `=`,
+ * DRIFT calls as `DRIFT.NAME`, built-ins without their storage prefixes.
+ *
+ * @example displayFormula('_xlfn.SUM(_xldudf_DRIFT_SHEETRES(A2,10))') // '=SUM(DRIFT.SHEETRES(A2,10))'
+ */
+export function displayFormula(stored: string): string {
+  const body = stored.startsWith('=') ? stored.slice(1) : stored;
+  return `=${segments(body)
+    .map((part) => (part.quoted ? part.text : part.text.replace(BUILTIN_PREFIX, '').replace(DRIFT_ANY_FORM, (_m, name: string) => `DRIFT.${name.toUpperCase()}`)))
+    .join('')}`;
 }

@@ -10,6 +10,8 @@
  * the file was read hold its old results, not user data, and are cleared
  * before recalculating. A spill that would cover a user's cell is not
  * written over it: the anchor shows #SPILL! and the user's cell keeps its value.
+ * DRIFT calls are written in the form Excel stores for add-in functions,
+ * whatever form the file had (formulaText.ts).
  */
 import { readFile, stat } from 'node:fs/promises';
 import ExcelJS from 'exceljs';
@@ -21,6 +23,7 @@ import { markDynamicArrays } from './dynamicArrays';
 import { ForeignPackageRefused, preparePackage, type PreparedPackage } from './foreignPackages';
 import { unevaluableReason } from './unevaluable';
 import { fileErrorText } from './errorTypes';
+import { storedFormula } from './formulaText';
 import { MAX_PACKAGE_BYTES, PackageRejected, checkPackage } from './packageCheck';
 import { engineContent, fileValue, type FileValue, type StoredFormula } from './workbookCells';
 
@@ -505,11 +508,15 @@ function coversMergedCells(worksheet: ExcelJS.Worksheet, range: SimpleCellRange)
   return false;
 }
 
+/**
+ * A recalculated formula as written: DRIFT calls in the one form Excel stores
+ * for add-in functions (`_xldudf_DRIFT_NAME`, see formulaText.ts) whatever form
+ * the file had, everything else as the file had it; with its cached result.
+ */
 function formulaValue(stored: string, result: CellValue): ExcelJS.CellFormulaValue {
   const cached: FileValue = fileValue(result);
-  return cached === null
-    ? { formula: stored }
-    : { formula: stored, result: cached as ExcelJS.CellFormulaValue['result'] };
+  const formula = storedFormula(stored);
+  return cached === null ? { formula } : { formula, result: cached as ExcelJS.CellFormulaValue['result'] };
 }
 
 /**

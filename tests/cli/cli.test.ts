@@ -168,6 +168,26 @@ describe('recalc', () => {
     expect(Number(cells.get('C1')?.value)).toBe((expected[1][0] as number) * 2);
   });
 
+  it('writes the values form with --values: results as plain values, formulas listed on sheet "Formulas"', async () => {
+    await writeInput('in.xlsx');
+    const result = driftcell('recalc', 'in.xlsx', '-o', 'values.xlsx', '--values');
+    expect(result.status).toBe(0);
+    expect(result.stdout).toBe(
+      'wrote values.xlsx (values form): 1 sheet, 2 formulas, 1 spilled result; every result is a plain value, the formulas are listed on sheet "Formulas"\n',
+    );
+    expect(otherFiles('in.xlsx', 'values.xlsx')).toEqual([]);
+    const zip = await openPackage(readFileSync(join(folder, 'values.xlsx')));
+    const cells = await sheetCells(zip, 'Data');
+    const expected = direct('RESISTIVITY', [[[1e15], [1e16]], 'B']);
+    for (const cell of cells.values()) expect(cell.formula).toBeUndefined();
+    expect(Number(cells.get('B1')?.value)).toBe(expected[0][0]);
+    expect(Number(cells.get('B2')?.value)).toBe(expected[1][0]);
+    expect(Number(cells.get('C1')?.value)).toBe((expected[1][0] as number) * 2);
+    const listing = await sheetCells(zip, 'Formulas');
+    expect(['A4', 'B4', 'C4', 'D4'].map((a) => listing.get(a)?.value)).toEqual(['Data', 'B1', 'B1:B2', '=DRIFT.RESISTIVITY(A1:A2,"B")']);
+    expect(['A5', 'B5', 'C5', 'D5'].map((a) => listing.get(a)?.value)).toEqual(['Data', 'C1', 'C1', '=Data!B2*2']);
+  });
+
   it('lists cells that show errors on stderr and still exits 0', async () => {
     const workbook = new ExcelJS.Workbook();
     workbook.addWorksheet('Bad sheet').getCell('A1').value = { formula: 'DRIFT.SHEETRES(-1,10)' } as ExcelJS.CellFormulaValue;
@@ -259,6 +279,33 @@ describe('demo', () => {
       const cells = await sheetCells(zip, name);
       expect(cells.get('A2')?.value).toMatch(/^Invented demo data/);
     }
+  });
+
+  it('writes the values form with --values and prints the same sweep', async () => {
+    const live = driftcell('demo', '-o', 'live.xlsx');
+    const result = driftcell('demo', '-o', 'values.xlsx', '--values');
+    expect(result.status).toBe(0);
+    const lines = result.stdout.trim().split('\n');
+    expect(lines.at(-1)).toBe('wrote values.xlsx (values form): 5 sheets, 31 formulas as plain values, listed on sheet "Formulas"');
+    expect(lines.slice(0, -1)).toEqual(live.stdout.trim().split('\n').slice(0, -1));
+    const zip = await openPackage(readFileSync(join(folder, 'values.xlsx')));
+    const liveZip = await openPackage(readFileSync(join(folder, 'live.xlsx')));
+    for (const name of Object.values(SHEETS)) {
+      const cells = await sheetCells(zip, name);
+      const liveCells = await sheetCells(liveZip, name);
+      for (const cell of cells.values()) expect(cell.formula).toBeUndefined();
+      // Every number and formula result as the live form caches it (plain text may differ: About says which form it is).
+      for (const [address, cell] of liveCells) {
+        if (cell.attributes.t !== 's') expect({ address, value: cells.get(address)?.value }).toEqual({ address, value: cell.value });
+      }
+    }
+    const about = [...(await sheetCells(zip, SHEETS.about)).values()].map((c) => c.value).join('\n');
+    expect(about).toMatch(/this is the values form/);
+    const listing = await sheetCells(zip, 'Formulas');
+    const sweepAnchor = [...listing.values()].find((c) => c.value === `C${SWEEP_LAYOUT.firstRow}`);
+    expect(sweepAnchor).toBeDefined();
+    const row = sweepAnchor?.address.slice(1);
+    expect(listing.get(`D${row}`)?.value).toMatch(/^=DRIFT\.RESISTOR\(DRIFT\.RESISTIVITY\(/);
   });
 
   it('refuses to overwrite an existing file and suggests -o', () => {
