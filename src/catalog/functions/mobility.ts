@@ -1,12 +1,15 @@
-import { carrierFor, mobility } from '../../physics';
+import { SILICON, carrierFor, fitMobility, mobility } from '../../physics';
 import { carrier, counterDoping, dopant, doping, material, mobilityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { MOBILITY_MODELS } from '../citedModels';
 
+/** Masetti's electron mobility in 1e18 cm⁻³ As-doped Si at 300 K, for the help text. */
+const MASETTI_AS_1E18 = fitMobility('masetti', 'electron', sampleOf(SILICON, 300, 'As', 1e18, 0)).toFixed(0);
+
 export const MOBILITY = elementwise({
   name: 'MOBILITY',
   summary: 'Low-field mobility of electrons or holes from the named published model, in cm²/(V·s).',
-  help: `Returns the low-field mobility of electrons or holes exactly as the selected doping-dependent model publishes it, at the total impurity density (doping + counter_doping) and the given temperature: e.g. masetti gives 284 cm²/(V·s) for electrons in 1e18 cm⁻³ As-doped Si at 300 K, as Masetti et al.'s equation does.
+  help: `Returns the low-field mobility of electrons or holes exactly as the selected doping-dependent model publishes it, at the total impurity density (doping + counter_doping) and the given temperature: e.g. masetti gives ${MASETTI_AS_1E18} cm²/(V·s) for electrons in 1e18 cm⁻³ As-doped Si at 300 K, as Masetti et al.'s equation does.
 
 The silicon fits (Masetti, Arora, Caughey–Thomas, Klaassen) were made against resistivity and the *total* dopant density, as if every dopant were ionized: they are mobilities per dopant, σ = q·N·μ. Driftcell's carrier densities include incomplete ionization (DRIFT.MAJORITY is below N), so DRIFT.CONDUCTIVITY does not multiply these values by DRIFT.MAJORITY. It uses DRIFT.FREEMOBILITY, the mobility per free carrier: for the majority carrier under a silicon model this value divided by the ionized share at 300 K (up to about 1.3× near 1e18 cm⁻³), for minority carriers and for the Ge, GaAs and 4H-SiC fits this value itself. Then CONDUCTIVITY = q(MAJORITY·FREEMOBILITY(majority) + MINORITY·FREEMOBILITY(minority)) for the same named model, and at 300 K that equals q·N·MOBILITY(majority) plus the minority term, the published resistivity.
 
