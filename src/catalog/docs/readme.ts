@@ -11,6 +11,7 @@ import {
   intrinsicModelCodes,
   mobilityModelCodes,
   resistivityModelCodes,
+  SILICON_MINORITY_MOBILITY_MODEL,
 } from '../../physics';
 import { perMaterial } from '../citedModels';
 import type { FunctionSpec } from '../types';
@@ -38,7 +39,11 @@ export function renderCodeTable(): string {
       'required',
     ],
     ['carrier', `${CARRIER_ROLES.join(', ')} (also electrons, holes, n / e, p / h)`, CARRIER_ROLES[0]],
-    ['model (mobility, diffusivity)', perMaterial(mobilityModelCodes), perMaterial(mobilityModelCodes, true)],
+    [
+      'model (mobility, diffusivity)',
+      perMaterial(mobilityModelCodes),
+      `${perMaterial(mobilityModelCodes, true)}; Si minority carriers: ${SILICON_MINORITY_MOBILITY_MODEL}`,
+    ],
     ['model (conductivity, resistivity, doping)', perMaterial(resistivityModelCodes), perMaterial(resistivityModelCodes, true)],
     ['model (ni)', perMaterial(intrinsicModelCodes), perMaterial(intrinsicModelCodes, true)],
   ];
