@@ -70,6 +70,20 @@ function temperatureHint(message: string): string | undefined {
   return `temperatures are in kelvin (K = °C + 273.15): ${got} °C is ${kelvin} K`;
 }
 
+function quoteHint(name: string): string {
+  return `${name} is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "${name}"`;
+}
+
+/**
+ * A hint for the reason recalc kept a formula cell unrecalculated, or undefined.
+ *
+ * @example reasonHint('the headless engine could not take the name B from the workbook') // the hint to write "B"
+ */
+export function reasonHint(reason: string): string | undefined {
+  const name = /could not take the name (\S+) from the workbook/.exec(reason);
+  return name === null ? undefined : quoteHint(name[1]);
+}
+
 /**
  * A hint for an error, or undefined when the message says enough.
  *
@@ -81,7 +95,7 @@ function temperatureHint(message: string): string | undefined {
 export function errorHint(error: ResultError, formula?: string): string | undefined {
   const name = /^Named expression (\S+) not recognized\.?$/.exec(error.message.trim());
   if (error.code === '#NAME?' && name !== null) {
-    return `${name[1]} is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "${name[1]}"`;
+    return quoteHint(name[1]);
   }
   const fn = /^Function name (\S+) not recognized\.?$/.exec(error.message.trim());
   if (error.code === '#NAME?' && fn !== null) return functionHint(fn[1]);
