@@ -27,6 +27,28 @@ function shownValue(cell: ExcelJS.Cell, decimals: number): string {
   return '';
 }
 
+/** An input as printed: large and small numbers in exponent form (1e+20), others as they are. */
+function inputText(value: ExcelJS.CellValue): string {
+  if (typeof value === 'number') return value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-3) ? value.toExponential() : String(value);
+  if (typeof value === 'string' || typeof value === 'boolean') return formatElement(value);
+  return '';
+}
+
+/**
+ * The resistor's design inputs as printed, `label: value` per line, read from
+ * the sweep sheet itself (the cells the sweep formula refers to).
+ */
+export function sweepInputs(workbook: ExcelJS.Workbook): string[] {
+  const sheet = workbook.getWorksheet(SHEETS.sweep);
+  if (sheet === undefined) throw new Error(`the demo has no sheet "${SHEETS.sweep}"`);
+  const { inputFirstRow, inputRows } = SWEEP_LAYOUT;
+  const lines: string[] = [];
+  for (let r = inputFirstRow; r < inputFirstRow + inputRows; r++) {
+    lines.push(`  ${formatElement(String(sheet.getCell(r, 1).value ?? ''))}: ${inputText(sheet.getCell(r, 2).value)}`);
+  }
+  return lines;
+}
+
 /**
  * The resistor sweep as printed: header, then T (°C), T (K), R (Ω) per row,
  * tab-separated, from the recalculated workbook.
@@ -57,6 +79,7 @@ export async function runDemo(file: string, output: Output, options: { readonly 
   const summary = recalculateWorkbook(workbook);
   // The sweep is printed before the values form replaces the formulas (it reads cached results either way).
   const sweep = sweepTable(workbook);
+  const inputs = sweepInputs(workbook);
   let values: ValuesForm | undefined;
   if (options.values) values = convertToValues(workbook);
   const bytes = values ? await valuesWorkbookBytes(workbook) : await workbookBytes(workbook, summary);
@@ -64,6 +87,9 @@ export async function runDemo(file: string, output: Output, options: { readonly 
 
   output.out(`${DEMO_COMPANY}: diffused-bar resistor over −40…150 °C (sheet "${SHEETS.sweep}")`);
   output.out(INVENTED_NOTE);
+  output.out('');
+  output.out('Inputs (a uniform bar at an effective doping; R = DRIFT.RESISTOR(DRIFT.RESISTIVITY(doping, dopant, T), length, width, thickness)):');
+  inputs.forEach(output.out);
   output.out('');
   sweep.forEach(output.out);
   output.out('');

@@ -73,8 +73,10 @@ const TABLE_DOPING: readonly number[] = [1e14, 3e14, 1e15, 3e15, 1e16, 3e16, 1e1
 /** Temperatures across the table, °C: the rating's ends and points between. */
 const TABLE_CELSIUS: readonly number[] = [-40, 0, 25, 50, 100, 150];
 
-/** Where the resistor sweep table sits, for the CLI's printout. */
+/** Where the resistor sweep table and its design inputs (label in column 1, value in 2) sit, for the CLI's printout. */
 export const SWEEP_LAYOUT = {
+  inputFirstRow: 3,
+  inputRows: 5,
   headerRow: 10,
   firstRow: 11,
   rows: SWEEP_CELSIUS.length,
@@ -194,8 +196,8 @@ function sweepSheet(workbook: ExcelJS.Workbook): void {
     ['Thickness = junction depth (µm)', RESISTOR_DESIGN.thicknessUm, '0.0'],
   ];
   design.forEach(([label, value, numFmt], i) => {
-    sheet.getCell(3 + i, 1).value = label;
-    input(sheet.getCell(3 + i, 2), value, numFmt);
+    sheet.getCell(SWEEP_LAYOUT.inputFirstRow + i, 1).value = label;
+    input(sheet.getCell(SWEEP_LAYOUT.inputFirstRow + i, 2), value, numFmt);
   });
   const { headerRow, firstRow, rows } = SWEEP_LAYOUT;
   const lastRow = firstRow + rows - 1;

@@ -1,14 +1,15 @@
 #!/usr/bin/env node
 /**
  * The `driftcell` command: DRIFT formulas without a spreadsheet program.
- * Subcommands: calc (one formula), recalc (a whole .xlsx workbook), demo
+ * Subcommands: calc (one formula or many), recalc (a whole .xlsx workbook), demo
  * (writes a demo workbook). Errors end in one line on stderr, never a stack
  * trace; exit statuses are listed in the help.
  */
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { Command, CommanderError } from 'commander';
-import { runCalc } from './calc';
+import { runCalc, type CalcOptions } from './calc';
+import { MAX_DIGITS, MIN_DIGITS } from './format';
 import { DEFAULT_DEMO_FILE, runDemo } from './demo';
 import { CliFailure, EXIT_CANNOT_RUN, EXIT_OK, EXIT_RESULT_ERROR, PROCESS_OUTPUT, type Output } from './failure';
 import { runRecalc } from './recalc';
@@ -26,18 +27,46 @@ function packageVersion(): string {
 const EXIT_STATUS_HELP = `
 Exit status:
   ${EXIT_OK}  done
-  ${EXIT_RESULT_ERROR}  calc only: the formula's result is an error (every element of it, for a spill)
+  ${EXIT_RESULT_ERROR}  calc: a formula's whole result is an error (every element of it, for a spill);
+     recalc: the copy was written, but some formula cells were kept unrecalculated
   ${EXIT_CANNOT_RUN}  the command could not run: wrong usage, a missing or unreadable workbook,
      or an output that would replace the input or an existing file`;
 
 const CALC_HELP = `
-The leading "=" is optional. Quote the formula for your shell. A formula that
+The leading "=" is optional. Quote each formula for your shell. A formula that
 begins with "-" needs "--" before it (driftcell calc -- '-1*DRIFT.INTRINSIC(300)').
+A formula is evaluated without a workbook: a reference to cells (A1, B2:C9,
+A:A, Sheet1!A1) is refused with #REF!; use recalc for formulas that need cells.
+
+One formula: a number at full precision (or --digits N significant digits), a
+spill as tab-separated rows, an error as its code and message.
+
+Several formulas (arguments, --file <file>, or "-" / --file - for stdin) print
+one record per formula, one line each, in order:
+  a value        13.53 · "text" in double quotes · TRUE · empty for a blank
+  an error       #VALUE! temperature_K must be ≥ 20 K … (the whole result)
+  a spill        an Excel array constant, {1,2;3,4}: "," between columns,
+                 ";" between rows, errors by their code
+In a file, each line is one formula; blank lines and lines starting with "#"
+are skipped (write an error constant as =#N/A). Messages for errors inside a
+spill and hints go to stderr as "<file> line N: …" or "formula N: …".
+--batch prints the record form for a single formula too.
+
+--digits N (1–17) prints numbers to N significant digits, as JavaScript's
+toPrecision: 2.86e+19 for 28599999999999922000 with --digits 3, 13.500 for 13.5
+with --digits 5 (exponent form when the exponent is ≥ N or < −6).
+
+Exit status of calc: 0 no formula's whole result is an error; 1 at least one
+formula's whole result is an error (every element, for a spill); 2 calc could
+not run (wrong usage, an unreadable file, a file without formulas).
 
 Examples:
   driftcell calc 'DRIFT.RESISTIVITY(1e15,"B")'
+  driftcell calc --digits 4 'DRIFT.RESISTIVITY(1e15,"B")'
   driftcell calc '=DRIFT.RESISTIVITY({1e15;1e16},"phosphorus",{250,300,350})'
-  driftcell calc 'DRIFT.RESISTOR(DRIFT.RESISTIVITY(2e18,"B"),450,15,2.5)/1000'`;
+  driftcell calc 'DRIFT.SHEETRES(1,10)' 'DRIFT.SHEETRES(2,10)'
+  driftcell calc --file formulas.txt > results.txt
+  printf '%s\\n' 'DRIFT.INTRINSIC(300)' 'DRIFT.INTRINSIC(350)' | driftcell calc -`;
 
 const RECALC_HELP = `
 Every formula is recalculated (DRIFT functions, spreadsheet built-ins,
@@ -88,7 +117,7 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
     .name('driftcell')
     .description(
       'Semiconductor transport physics (carrier densities, mobility, resistivity, doping …) as spreadsheet ' +
-        'formulas, without a spreadsheet program: evaluate one DRIFT formula, recalculate an .xlsx workbook, ' +
+        'formulas, without a spreadsheet program: evaluate DRIFT formulas, recalculate an .xlsx workbook, ' +
         'or write a demo workbook.',
     )
     .version(packageVersion(), '-V, --version', 'print the version')
@@ -104,10 +133,13 @@ export function buildProgram(output: Output, setStatus: (status: number) => void
 
   program
     .command('calc')
-    .description('evaluate one formula and print its result')
-    .argument('<formula>', 'a formula such as DRIFT.INTRINSIC(300) or =SUM(DRIFT.SHEETRES({1,2},10))')
+    .description('evaluate formulas and print their results, one formula or many (arguments, a file, stdin)')
+    .argument('[formulas...]', 'formulas such as DRIFT.INTRINSIC(300) or =SUM(DRIFT.SHEETRES({1,2},10)); - reads them from stdin')
+    .option('--file <file>', 'read formulas from a file, one a line (- for stdin)')
+    .option('--digits <n>', `print numbers to n significant digits (${MIN_DIGITS}–${MAX_DIGITS}) instead of full precision`)
+    .option('--batch', 'print one record per formula (the form for several formulas) even for one', false)
     .addHelpText('after', CALC_HELP)
-    .action((formula: string) => setStatus(runCalc(formula, output)));
+    .action((formulas: string[], options: CalcOptions) => setStatus(runCalc(formulas, options, output)));
 
   program
     .command('recalc')

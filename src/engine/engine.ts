@@ -6,7 +6,7 @@
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import type { CellValue, ConfigParams, SerializedNamedExpression, Sheets, SimpleCellAddress } from 'hyperformula';
 import type { ArraySizePredictor as ArraySizePredictorClass } from 'hyperformula/typings/ArraySize';
-import { cellName } from './a1';
+import { cellName, columnName } from './a1';
 import { engineFormula } from './formulaText';
 import { registerDriftFunctions } from './plugin';
 
@@ -154,12 +154,44 @@ export function isResultError(value: ResultElement): value is ResultError {
   return typeof value === 'object' && value !== null && value.kind === 'error';
 }
 
+/** A parsed reference as HyperFormula's parser reports it (dependencies of a temporary formula). */
+interface ParsedDependency {
+  readonly dependency?: { readonly row: number; readonly col: number; readonly sheet?: number };
+  readonly start?: { readonly row?: number; readonly col?: number };
+  readonly end?: { readonly row?: number; readonly col?: number };
+  readonly name?: string;
+}
+
+function referenceText(dep: ParsedDependency): string | undefined {
+  if (dep.dependency !== undefined) return `cell ${cellName(dep.dependency.row, dep.dependency.col)}${dep.dependency.sheet ? ' of another sheet' : ''}`;
+  const { start, end } = dep;
+  if (start === undefined || end === undefined) return undefined;
+  if (start.row !== undefined && start.col !== undefined && end.row !== undefined && end.col !== undefined) {
+    return `range ${cellName(start.row, start.col)}:${cellName(end.row, end.col)}`;
+  }
+  if (start.col !== undefined && end.col !== undefined) return `columns ${columnName(start.col)}:${columnName(end.col)}`;
+  if (start.row !== undefined && end.row !== undefined) return `rows ${start.row + 1}:${end.row + 1}`;
+  return undefined;
+}
+
+/**
+ * The cell, range, column and row references of a formula (not names, not
+ * text in quotes, not function names), as HyperFormula's parser finds them.
+ */
+function cellReferences(engine: HyperFormula, text: string): string[] {
+  // Internal like checkFormulaResultSize: the parser's dependency list is the one exact account of references.
+  const internals = engine as unknown as { extractTemporaryFormula(formula: string, sheetId: number): { dependencies?: readonly ParsedDependency[] } };
+  const found = (internals.extractTemporaryFormula(text, 0).dependencies ?? []).map(referenceText).filter((t): t is string => t !== undefined);
+  return [...new Set(found)];
+}
+
 /**
  * Evaluates one formula in an otherwise empty workbook, built-ins and DRIFT
  * functions alike.
  *
  * @param formula - with or without the leading `=`, e.g. `DRIFT.RESISTIVITY(1e15,"B")`
- * @returns the value, or the rows of the spilled result; a formula that cannot be read gives an #ERROR! element
+ * @returns the value, or the rows of the spilled result; a formula that cannot be read gives an #ERROR! element,
+ *   one that refers to cells or ranges (A1, $B$2:C3, A:A, Sheet1!A1) a #REF! element saying there is no workbook
  * @example evaluateFormula('=DRIFT.SHEETRES(1,10)') // 1000
  */
 export function evaluateFormula(formula: string): FormulaResult {
@@ -171,6 +203,16 @@ export function evaluateFormula(formula: string): FormulaResult {
     try {
       if (text === '=' || !engine.validateFormula(text)) {
         return { kind: 'error', code: '#ERROR!', message: `not a valid formula: ${text}` };
+      }
+      const references = cellReferences(engine, text);
+      if (references.length > 0) {
+        return {
+          kind: 'error',
+          code: '#REF!',
+          message:
+            `the formula refers to ${references.join(', ')}, but a formula evaluated on its own has no workbook and no cells ` +
+            '(a reference would read as a blank cell, 0). Write the value in its place, or put the formula in a workbook and run driftcell recalc',
+        };
       }
       checkFormulaResultSize(engine, text);
       value = engine.calculateFormula(text, 0);

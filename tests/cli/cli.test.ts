@@ -101,7 +101,35 @@ describe('calc', () => {
   it('exits 2 without a formula, with a one-line reason', () => {
     const result = driftcell('calc');
     expect(result.status).toBe(2);
-    expect(result.stderr).toMatch(/missing required argument 'formula'/);
+    expect(result.stderr).toBe('driftcell: give a formula, several formulas, --file <file>, or - to read formulas from stdin\n');
+  });
+
+  it('reads formulas from stdin with -, one record per line, and exits 1 when one whole result is an error', () => {
+    const result = run(cli, ['calc', '-'], folder, '# sheet resistance\nDRIFT.SHEETRES(1,10)\n\nDRIFT.SHEETRES(-1,10)\r\n=SEQUENCE(2,2)\n');
+    const bad = direct('SHEETRES', [-1, 10])[0][0];
+    if (!isFailure(bad)) throw new Error('expected a failure');
+    expect(result.stdout).toBe(`${String(direct('SHEETRES', [1, 10])[0][0])}\n${bad.code} ${bad.message}\n{1,2;3,4}\n`);
+    expect(result.status).toBe(1);
+  });
+
+  it('reads formulas from a file with --file and prints --digits significant digits', () => {
+    writeFileSync(join(folder, 'formulas.txt'), '28599999999999922000\n13.5\n');
+    const result = driftcell('calc', '--file', 'formulas.txt', '--digits', '3');
+    expect(result).toEqual({ status: 0, stdout: '2.86e+19\n13.5\n', stderr: '' });
+  });
+
+  it('exits 2 for a missing file of formulas, a file without formulas, and a bad --digits', () => {
+    expect(driftcell('calc', '--file', 'none.txt')).toEqual({ status: 2, stdout: '', stderr: 'driftcell: none.txt: no such file\n' });
+    writeFileSync(join(folder, 'empty.txt'), '# nothing\n\n');
+    expect(driftcell('calc', '--file', 'empty.txt').stderr).toBe('driftcell: empty.txt holds no formulas (blank lines and # comment lines are skipped)\n');
+    expect(driftcell('calc', '--digits', '18', '1')).toEqual({ status: 2, stdout: '', stderr: 'driftcell: --digits must be a whole number from 1 to 17; got 18\n' });
+  });
+
+  it('prints hints on stderr for a bare code and a temperature in °C', () => {
+    const bare = driftcell('calc', 'DRIFT.RESISTIVITY(1e15,B)');
+    expect(bare.status).toBe(1);
+    expect(bare.stdout).toBe('#NAME? Named expression B not recognized.\n');
+    expect(bare.stderr).toBe('hint: B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"\n');
   });
 });
 
@@ -249,6 +277,15 @@ describe('demo', () => {
     expect(result.status).toBe(0);
     expect(result.stdout).toMatch(/Invented demo data/);
     const lines = result.stdout.split('\n');
+    // The design inputs stand above the table (invented values of demoWorkbook.ts).
+    const inputs = lines.findIndex((line) => line.startsWith('Inputs '));
+    expect(lines.slice(inputs + 1, inputs + 6)).toEqual([
+      '  Dopant of the diffusion: B',
+      '  Effective doping (cm⁻³): 1e+20',
+      '  Length (µm): 450',
+      '  Width (µm): 15',
+      '  Thickness = junction depth (µm): 0.3',
+    ]);
     const header = lines.findIndex((line) => line.startsWith('T (°C)\t'));
     expect(header).toBeGreaterThanOrEqual(0);
     const rows = lines.slice(header + 1, header + 1 + SWEEP_LAYOUT.rows).map((line) => line.split('\t'));

@@ -264,6 +264,42 @@ describe('evaluateFormula', () => {
   it('names an unknown function', () => {
     expect(evaluateFormula('DRIFT.NOSUCH(1)')).toMatchObject({ kind: 'error', code: '#NAME?' });
   });
+
+  it('refuses cell, range, column, row and other-sheet references: it has no workbook (issue 14 §6)', () => {
+    const refs: [string, string][] = [
+      ['=A1+1', 'cell A1'],
+      ['=DRIFT.RESISTIVITY($B$2,"B")', 'cell B2'],
+      ['=SUM($B$2:C3)', 'range B2:C3'],
+      ['=SUM(A:A)', 'columns A:A'],
+      ['=SUM(1:1)', 'rows 1:1'],
+      ['=Sheet1!B2', 'cell B2'],
+      ["='Other sheet'!A1", 'cell A1 of another sheet'],
+      ['=E15*2', 'cell E15'],
+    ];
+    for (const [formula, named] of refs) {
+      const result = evaluateFormula(formula);
+      expect({ formula, result }).toMatchObject({ formula, result: { kind: 'error', code: '#REF!' } });
+      expect((result as { message: string }).message).toContain(`the formula refers to ${named}, but a formula evaluated on its own has no workbook`);
+      expect((result as { message: string }).message).toContain('driftcell recalc');
+    }
+  });
+
+  it('does not take function names, names, or quoted text for references', () => {
+    expect(evaluateFormula('=LOG10(100)')).toBe(2);
+    expect(evaluateFormula('="A1"&"B2:C3"')).toBe('A1B2:C3');
+    expect(evaluateFormula('=TRUE')).toBe(true);
+    expect(evaluateFormula('=DRIFT.SHEETRES(1,10)')).toBe(1000);
+    expect(evaluateFormula('=DRIFT.RESISTIVITY(1e15,B)')).toMatchObject({ kind: 'error', code: '#NAME?' });
+  });
+
+  it('gives an error, not 0, for a Hall density below the smallest double (issue 14 §6)', () => {
+    // 1e-300/(1.602e-19 × 1e308) ≈ 6e-590 cm⁻³ (arithmetic), below 4.9e-324, the least positive double (IEEE 754 binary64).
+    const result = evaluateFormula('=DRIFT.HALLDENSITY(1e308,1e-300)');
+    expect(result).toMatchObject({ kind: 'error', code: '#VALUE!' });
+    expect((result as { message: string }).message).toMatch(/carrier density for these arguments is about 1e-589 cm⁻³, smaller than 5e-324/);
+    const mobility = evaluateFormula('=DRIFT.HALLMOBILITY(1e-300,1e300)');
+    expect((mobility as { message: string }).message).toMatch(/mobility for these arguments is about 1e-600 /);
+  });
 });
 
 describe('registration', () => {

@@ -37,7 +37,32 @@ function checkHallFactor(value: number): void {
 export function hallDensity(hallCoefficient: number, hallFactor = 1): number {
   checkHallCoefficient(hallCoefficient);
   checkHallFactor(hallFactor);
-  return hallFactor / (ELEMENTARY_CHARGE * hallCoefficient);
+  return representable(
+    hallFactor / (ELEMENTARY_CHARGE * hallCoefficient),
+    Math.log10(hallFactor) - Math.log10(ELEMENTARY_CHARGE) - Math.log10(Math.abs(hallCoefficient)),
+    Math.sign(hallCoefficient),
+    'carrier density',
+    'cm⁻³',
+  );
+}
+
+/**
+ * A quotient of finite nonzero inputs is never truly 0 or infinite. When the
+ * double is (an intermediate product overflowed or the result is out of the
+ * double range), the magnitude is taken from logarithms instead: a value
+ * inside the range is returned from them, one outside is an error stating it.
+ *
+ * @param value - the quotient as computed
+ * @param log10Magnitude - log10 of its true absolute value
+ * @param sign - its true sign (±1)
+ */
+function representable(value: number, log10Magnitude: number, sign: number, what: string, unit: string): number {
+  if (value !== 0 && Number.isFinite(value)) return value;
+  const fromLogs = sign * 10 ** log10Magnitude;
+  if (fromLogs !== 0 && Number.isFinite(fromLogs)) return fromLogs;
+  const magnitude = `about 1e${Math.round(log10Magnitude)} ${unit}`;
+  const limit = fromLogs === 0 ? 'smaller than 5e-324, the smallest number above 0' : 'larger than 1.8e308, the largest number';
+  throw new PhysicsDomainError(`the ${what} for these arguments is ${magnitude}, ${limit} a spreadsheet can hold; check the units of the arguments`);
 }
 
 /**
@@ -55,5 +80,11 @@ export function hallMobility(hallCoefficient: number, resistivity: number, hallF
   if (!(resistivity > 0) || !Number.isFinite(resistivity)) {
     throw new PhysicsDomainError(`resistivity ${resistivity} Ω·cm is not allowed: it must be a finite number greater than 0`);
   }
-  return Math.abs(hallCoefficient) / (resistivity * hallFactor);
+  return representable(
+    Math.abs(hallCoefficient) / (resistivity * hallFactor),
+    Math.log10(Math.abs(hallCoefficient)) - Math.log10(resistivity) - Math.log10(hallFactor),
+    1,
+    'mobility',
+    'cm²/(V·s)',
+  );
 }

@@ -34,8 +34,8 @@ export interface RunResult {
   readonly stderr: string;
 }
 
-/** Runs the command with arguments in a working folder. */
-export function run(cli: BuiltCli, args: readonly string[], cwd: string): RunResult {
-  const result = spawnSync(process.execPath, [cli.main, ...args], { cwd, encoding: 'utf8' });
+/** Runs the command with arguments in a working folder, with `input` on stdin (default none). */
+export function run(cli: BuiltCli, args: readonly string[], cwd: string, input = ''): RunResult {
+  const result = spawnSync(process.execPath, [cli.main, ...args], { cwd, encoding: 'utf8', input });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
