@@ -11,7 +11,10 @@
  * Donor/Acceptor", "Klaassen s1…s7, r1…r6, Pfc, Pfb, FME, FMH"; and the Philips
  * model of github cogenda/Genius-TCAD-Open, src/material/Si/Si_mob_Philips.cc
  * (μmax, μmin, N_ref, α of the hole row, θ, clustering constants, f_CW, f_BH,
- * 3.97e13, 1.36e20, m_h/m0 and r1–r6). Expected values of the behaviour checks
+ * 3.97e13, 1.36e20, m_h/m0 and r1–r6); the P and B rows, θ, s1–s7, r1–r6,
+ * f_CW, f_BH, m_h/m0 and the clustering constants also in PVeducation's
+ * package (github pvedu/photovoltaic, photovoltaic/si.py, mob_klassen), which
+ * like us takes the P row for electrons. Expected values of the behaviour checks
  * (minority mobilities, temperature laws) are from memory of the papers'
  * figures; where a value is read off a figure from memory the bracket is wide.
  */
@@ -34,7 +37,7 @@ const klaassen = (carrier: 'electron' | 'hole', dopant: string, density: number,
 describe('Klaassen (1992) I: concentration dependence at 300 K', () => {
   // Expected values typed from the transcriptions named above, not from our tables. They print the
   // paper's numbers to 3–5 significant figures, so agreement is exact (toBe / 1e-12).
-  it('Table 1 carrier parameters: electrons the P row 1414, 68.5, 9.2e16, 0.711; holes 470.5, 44.9, 2.23e17, 0.719 (Charon "Philips Electron(P)", "Philips Hole"; hole row also Genius)', () => {
+  it('Table 1 carrier parameters: electrons the P row 1414, 68.5, 9.2e16, 0.711; holes 470.5, 44.9, 2.23e17, 0.719 (Charon "Philips Electron(P)", "Philips Hole"; pvedu; hole row also Genius)', () => {
     const e = KLAASSEN_CARRIER_TABLE.electron;
     expect([e.maximum, e.minimum, e.referenceDensity, e.alpha]).toEqual([1414, 68.5, 9.2e16, 0.711]);
     const h = KLAASSEN_CARRIER_TABLE.hole;
@@ -62,11 +65,20 @@ describe('Klaassen (1992) I: concentration dependence at 300 K', () => {
     expect(KLAASSEN_MINORITY_G).toEqual({ s1: 0.89233, s2: 0.41372, s3: 0.19778, s4: 0.28227, s5: 0.005978, s6: 1.80618, s7: 0.72169 });
   });
 
-  it('F(P) coefficients r1–r6 (Charon "Klaassen r1…r6"; Genius F(P))', () => {
-    // r5 = −0.8552 in both. A third public transcription (a Python module by T. Ried, 2022, class Klaassen,
-    // seen in the code search without its repository name) notes "r5(Sentaurus) = −0.8552, r5(Klaassen) =
-    // −0.01552", i.e. that the paper's Table 2 prints −0.01552. Unresolved without the paper; reported.
-    expect(KLAASSEN_ELECTRON_HOLE_F).toEqual({ r1: 0.7643, r2: 2.2999, r3: 6.5502, r4: 2.367, r5: -0.8552, r6: 0.6478 });
+  it('F(P) coefficients r1, r2, r3, r4, r6 (Charon "Klaassen r1…r6"; Genius F(P); pvedu mob_klassen)', () => {
+    const { r1, r2, r3, r4, r6 } = KLAASSEN_ELECTRON_HOLE_F;
+    expect({ r1, r2, r3, r4, r6 }).toEqual({ r1: 0.7643, r2: 2.2999, r3: 6.5502, r4: 2.367, r6: 0.6478 });
+  });
+
+  // r5: the transcriptions disagree. Charon and Genius (device simulators) print −0.8552, our value.
+  // PVeducation's mob_klassen prints −0.01552, and a Python module by T. Ried (2022, class Klaassen, seen in
+  // the code search without its repository name) prints −0.01552 with the note "r5(Sentaurus) = −0.8552,
+  // r5(Klaassen) = −0.01552": the paper's Table 2 value is then −0.01552 and −0.8552 a simulator's refit.
+  // Kept as a failing expectation for the integrator (a value change is a physics change). With −0.01552
+  // the 300 K minority mobilities fall by about 13 % (holes in n-Si, 1e19) to 21 % (holes, 1e20) and
+  // 11–17 % (electrons in p-Si, 1e19–1e20).
+  it.failing('KNOWN DISAGREEMENT (expected to fail): r5 = −0.01552, the paper’s value as two transcriptions that follow the paper print it', () => {
+    expect(KLAASSEN_ELECTRON_HOLE_F.r5).toBe(-0.01552);
   });
 
   it('majority mobility at 1e18 cm⁻³: 277 (electrons, P) and 153 (holes, B) cm²/(V·s)', () => {

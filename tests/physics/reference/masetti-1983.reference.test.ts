@@ -6,9 +6,10 @@
  * Table I as read in the Masetti parameter list of Sandia's Charon device
  * simulator (github tcadsoftware/charon, src/Charon_Material_Properties.cpp,
  * setSiliconParameters(), "Masetti Electron(As)", "Masetti Electron(P)",
- * "Masetti Hole"), which agrees with our memory of the table and, for the P and
- * B rows, with a second public transcription (a MATLAB function
- * mobilitySi_Masetti, "Model from Masetti et al, 1983", seen in the code search
+ * "Masetti Hole"), which agrees with our memory of the table; the P row also in
+ * PVeducation's package (github pvedu/photovoltaic, photovoltaic/si.py,
+ * mob_masetti_phos), the P and B rows also in a MATLAB function
+ * mobilitySi_Masetti ("Model from Masetti et al, 1983", seen in the code search
  * without its repository name). The abstract was read.
  */
 import { fitMobility } from '../../../src/physics/mobility';
