@@ -31,7 +31,9 @@ function masetti(row: keyof typeof MASETTI, n: number): number {
 }
 
 // Arora, Hauser, Roulston, IEEE Trans. Electron Devices 29, 292 (1982), at T = 300 K (Tn = 1, so only the
-// T^b of the amplitude remains): μ = μmin + A·300^b/(1 + (N/Nref)^α). Parameters from memory.
+// T^b of the amplitude remains): μ = μmin + A·300^b/(1 + (N/Nref)^α). Parameters from memory; they agree
+// with Charon's Arora list (tcadsoftware/charon, src/Charon_Material_Properties.cpp: μmin 88 / 54.3,
+// μmax(300 K) = A·300^b = 1252 / 407, Nref 1.26e17 / 2.35e17, α 0.88).
 function arora(carrier: 'electron' | 'hole', n: number): number {
   const p = carrier === 'electron' ? { min: 88, a: 7.4e8, b: -2.33, ref: 1.26e17, alpha: 0.88 } : { min: 54.3, a: 1.36e8, b: -2.23, ref: 2.35e17, alpha: 0.88 };
   return p.min + (p.a * Math.pow(300, p.b)) / (1 + Math.pow(n / p.ref, p.alpha));

@@ -85,8 +85,10 @@ import { MASETTI_TABLE, type MasettiParameters } from './masetti';
 export const KLAASSEN_SOURCE = {
   citation:
     'D. B. M. Klaassen, Solid-State Electron. 35, 953 (1992) (I: model equations, concentration dependence) ' +
-    'and 35, 961 (1992) (II: temperature dependence). Equations and all coefficients from memory; least ' +
-    'certain: the clustering constants c and N_ref, the G(P) and F(P) fit coefficients and the hole mass ratio 1.258',
+    'and 35, 961 (1992) (II: temperature dependence). Equations and coefficients from memory, checked against ' +
+    'public transcriptions (github tcadsoftware/charon src/Charon_Material_Properties.cpp; cogenda/Genius-TCAD-Open ' +
+    'src/material/Si/Si_mob_Philips.cc; pvedu/photovoltaic photovoltaic/si.py); they disagree on r5 of F(P) ' +
+    '(−0.8552 here, as in the simulators; −0.01552 in pvedu and another transcription that follows the paper)',
   validity:
     'Silicon. 300 K: majority electrons and holes about 1e14–1e21 cm⁻³ (P, As, B), minority carriers about ' +
     '1e17–1e20 cm⁻³; temperature: roughly 70/100–500 K (paper II, range from memory); extrapolated outside',

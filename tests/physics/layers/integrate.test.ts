@@ -37,7 +37,7 @@ describe('adaptive integration', () => {
 
   it('matches closed forms: ∫sin = 2 on [0, π], ∫e^(−x²) on [0, 3] = (√π/2)·erf(3)', () => {
     expect(integrate(Math.sin, [0, Math.PI]).value).toBeCloseTo(2, 14);
-    const erf3 = 0.9999779095030014; // erf(3), from memory
+    const erf3 = 0.9999779095030014; // erf(3), recalled; mpmath 1.3: 0.99997790950300141456
     expect(integrate((x) => Math.exp(-x * x), [0, 3]).value / ((Math.sqrt(Math.PI) / 2) * erf3)).toBeCloseTo(1, 13);
   });
 

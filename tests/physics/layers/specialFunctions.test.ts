@@ -28,7 +28,8 @@ function erfcByContinuedFraction(x: number): number {
 
 describe('erfc and erf', () => {
   // Values to 16 digits as tabulated for erf/erfc (Abramowitz & Stegun, Table 7.1, and standard
-  // double-precision libraries), from memory.
+  // double-precision libraries), recalled; each agrees with mpmath 1.3's erfc to the digits given
+  // (tests/physics/reference/mpmath-oracles.reference.test.ts checks erfc and erfcinv against mpmath).
   it.each([
     [0, 1],
     [0.5, 0.4795001221869535],
@@ -38,7 +39,7 @@ describe('erfc and erf', () => {
     [5, 1.5374597944280349e-12],
     [10, 2.088487583762545e-45],
     [-1, 1.8427007929497148],
-  ])('erfc(%s) = %s to 1e-13 relative (from memory)', (x, expected) => {
+  ])('erfc(%s) = %s to 1e-13 relative (recalled; equal to mpmath)', (x, expected) => {
     expect(Math.abs(erfc(x) / expected - 1)).toBeLessThan(1e-13);
   });
 
@@ -88,7 +89,7 @@ describe('erfcinv', () => {
     }
   });
 
-  it('gives erfcinv(1e-4) ≈ 2.751 (value from memory)', () => {
+  it('gives erfcinv(1e-4) ≈ 2.7510639 (recalled; mpmath: 2.7510639057120607879)', () => {
     expect(erfcinv(1e-4)).toBeCloseTo(2.7510639, 6);
   });
 

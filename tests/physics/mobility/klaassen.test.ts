@@ -21,7 +21,6 @@ import {
 } from '../../../src/physics/mobility/klaassen';
 import { driftMobilities, fitMobility, mobility } from '../../../src/physics/mobility';
 import { fullIonizationCorrection } from '../../../src/physics/mobility/fullIonizationCorrection';
-import { MASETTI_TABLE, masettiMobility } from '../../../src/physics/mobility/masetti';
 import { solveEquilibrium } from '../../../src/physics/equilibrium';
 import { sampleDopants, type Carrier } from '../../../src/physics/sample';
 import { conductivity } from '../../../src/physics/transport';
@@ -92,20 +91,9 @@ describe('300 K majority carriers (model property: Caughey–Thomas form with Ma
     }
   });
 
-  // Masetti et al., IEEE TED 30, 764 (1983), Table I (P and B rows, from memory).
-  // Measured deviations of the Klaassen fit from Masetti, 1e14–1e18: electrons
-  // below 0.01 % (same form and parameters); holes −4.6 % … +1.0 %, because
-  // Masetti's B row has μmin1·exp(−Pc/N) with μmin2 = 0 where Klaassen has a
-  // plain μmin.
-  it('is within 0.1 % (electrons, P) and 5 % (holes, B) of Masetti over 1e14–1e18 cm⁻³', () => {
-    for (const n of logSpaced(14, 18, 4)) {
-      const electrons = fit('electron', 'P', n) / masettiMobility(MASETTI_TABLE.P.parameters, n);
-      const holes = fit('hole', 'B', n) / masettiMobility(MASETTI_TABLE.B.parameters, n);
-      expect(Math.abs(electrons - 1)).toBeLessThan(1e-3);
-      expect(Math.abs(holes - 1)).toBeLessThan(0.05);
-    }
-    expect(fit('hole', 'B', 1e18) / masettiMobility(MASETTI_TABLE.B.parameters, 1e18)).toBeCloseTo(0.954, 2);
-  });
+  // (A comparison with our Masetti table was removed: Klaassen's table is built from it, and its
+  // tolerances were our own measured deviations. The parameters are checked against public
+  // transcriptions in tests/physics/reference/klaassen-1992.reference.test.ts.)
 
   it('gives σ = q·N·μ_Klaassen(N) at 300 K: the full-ionization handling keeps ρ on the fit', () => {
     for (const dopant of ['P', 'B', 'As']) {

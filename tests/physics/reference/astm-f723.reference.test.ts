@@ -4,8 +4,9 @@
  * Liu, Filliben, NBS Special Publication 400-64 (1981).
  *
  * The standard's tables were not at hand: its §1.2 self-consistency statement
- * was read in a public excerpt; the coefficients and the spot values below are
- * from memory.
+ * was read in a public excerpt; the coefficients were checked against two public
+ * transcriptions of F723-99 (named in src/physics/astmF723.ts); the spot values
+ * below are from memory.
  */
 import { F723_VALIDITY, f723Density, f723Resistivity, type F723Species } from '../../../src/physics/astmF723';
 import { resistivity } from '../../../src/physics/transport';
@@ -13,10 +14,11 @@ import { logSpaced, siliconSample } from '../transportSamples';
 
 describe('ASTM F723-99 §1.2: self-consistency of the two conversions', () => {
   // §1.2 (read): "within 3 % for boron from 0.0001 to 10 000 Ω·cm and within
-  // 4.5 % for phosphorus from 0.0002 to 4000 Ω·cm". With the coefficients as
-  // recalled, B stays within 2.95 %; P reaches 4.74 % at the 2e-4 Ω·cm end
-  // (4.5 % everywhere above 3e-4 Ω·cm): either the standard rounds its figure
-  // or one recalled coefficient is slightly off. Tolerance 4.8 % for P, stated.
+  // 4.5 % for phosphorus from 0.0002 to 4000 Ω·cm" — the standard's own stated
+  // accuracy, so the tolerances are exactly those figures. B stays within 2.95 %.
+  // P reaches 4.74 % at the 2e-4 Ω·cm end (4.5 % holds everywhere above
+  // 3e-4 Ω·cm): either the standard rounds its figure or a coefficient as
+  // transcribed is slightly off. Kept as a failing expectation (not loosened).
   const worstSelfConsistency = (species: F723Species, from: number, to: number): number => {
     let worst = 0;
     for (const rho of logSpaced(Math.log10(from), Math.log10(to), 50)) {
@@ -27,9 +29,11 @@ describe('ASTM F723-99 §1.2: self-consistency of the two conversions', () => {
   it('B: ρ → N → ρ within 3 % over 1e-4…1e4 Ω·cm', () => {
     expect(worstSelfConsistency('B', F723_VALIDITY.B.resistivity.min, F723_VALIDITY.B.resistivity.max)).toBeLessThan(0.03);
   });
-  it('P: ρ → N → ρ within 4.5 % over 3e-4…4e3 Ω·cm and 4.8 % down to 2e-4 Ω·cm', () => {
+  it('P: ρ → N → ρ within 4.5 % over 3e-4…4e3 Ω·cm', () => {
     expect(worstSelfConsistency('P', 3e-4, 4e3)).toBeLessThan(0.045);
-    expect(worstSelfConsistency('P', F723_VALIDITY.P.resistivity.min, 4e3)).toBeLessThan(0.048);
+  });
+  it.failing('KNOWN DISAGREEMENT (expected to fail): P: ρ → N → ρ within 4.5 % down to 2e-4 Ω·cm, as §1.2 states (we reach 4.74 %)', () => {
+    expect(worstSelfConsistency('P', F723_VALIDITY.P.resistivity.min, 4e3)).toBeLessThan(0.045);
   });
 });
 
