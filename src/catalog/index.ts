@@ -10,6 +10,7 @@ import { VSAT } from './functions/vsat';
 import { TCR } from './functions/tcr';
 import { DIFFUSIVITY } from './functions/diffusivity';
 import { DOPING } from './functions/doping';
+import { RESISTIVITYAT } from './functions/resistivityat';
 import { ELECTRONS } from './functions/electrons';
 import { FERMILEVEL } from './functions/fermilevel';
 import { HOLES } from './functions/holes';
@@ -62,6 +63,7 @@ export const CATALOG: readonly FunctionSpec[] = [
   VELOCITY,
   VSAT,
   TCR,
+  RESISTIVITYAT,
   SHEETRES,
   RESISTOR,
   LAYERSHEETRES,

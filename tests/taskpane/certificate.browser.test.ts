@@ -197,6 +197,44 @@ describe('the Certificate check in Chromium', () => {
     await page.close();
   });
 
+  it.each([
+    [350, 'light'],
+    [500, 'dark'],
+  ] as const)('readings measured at 25 °C (%i px, %s): the unit must be chosen, then readings are corrected to 23 °C before the check', async (width, scheme) => {
+    const { page, panel } = await openWithTable(harness, width, scheme);
+    await page.getByRole('tab', { name: 'Certificate check' }).click();
+    await panel.getByRole('button', { name: 'Read selected table' }).click();
+    await panel.locator('#certificate-mapping:not([hidden])').waitFor();
+    await panel.getByLabel('Min', { exact: true }).fill('1e15');
+    await panel.getByLabel('Max', { exact: true }).fill('2e15');
+    await panel.locator('summary', { hasText: 'More settings' }).click();
+    await panel.getByLabel('Readings measured at', { exact: true }).fill('25');
+    // The number alone never decides between °C and K.
+    await panel.getByRole('button', { name: 'Add check columns' }).click();
+    await page.waitForFunction(() => /Choose the unit of 'Readings measured at'/.test(document.querySelector('#messages')?.textContent ?? ''));
+    expect(await announced(page)).toBe("Choose the unit of 'Readings measured at' (°C or K): 25 could be either.");
+    await panel.getByLabel('Unit of readings measured at').selectOption('C');
+    await panel.getByRole('button', { name: 'Add check columns' }).click();
+    await page.waitForFunction(() => /new columns/.test(document.querySelector('#messages')?.textContent ?? ''));
+    expect(await announced(page)).toMatch(/^Checks 4 wafer rows: 12 new columns in Sheet1!L2:W6, parameters in Y2:Z7 \(change them there to re-check\)\.$/);
+    const written = await readBlock(page, cells({ row: TOP, column: FIRST_NEW, rowCount: CERTIFICATE_TABLE.length, columnCount: 12 }));
+    expect(written.values[0][4]).toBe('Rho centre at certificate temperature (Ω·cm)');
+    const parameters = await readBlock(page, cells({ row: TOP + 3, column: FIRST_NEW + 13, rowCount: 2, columnCount: 2 }));
+    expect(parameters.values).toEqual([['Temperature (K)', PANE_TEMPERATURE], ['Readings measured at (K)', 298.15]]);
+    CERTIFICATE_ROWS.forEach((row, index) => {
+      const shown = written.values[index + 1];
+      const code = codeOf(row[2]);
+      const corrected = [5, 6, 7, 8].map((k) => value('RESISTIVITYAT', row[k] as number, code, 298.15, PANE_TEMPERATURE));
+      corrected.forEach((expected, k) => expect(ratio(shown[4 + k], expected)).toBeCloseTo(1, 12));
+      const inside = Math.min(...corrected) >= (row[3] as number) && Math.max(...corrected) <= (row[4] as number);
+      expect(shown[8]).toBe(inside ? 'yes' : 'no');
+    });
+    await saveScreenshot(page, `certificate-measured-at-${width}-${scheme}`);
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await page.close();
+  });
+
   it('at 350 px dark, nothing overflows the pane sideways', async () => {
     const { page, panel } = await openWithTable(harness, 350, 'dark');
     await page.getByRole('tab', { name: 'Certificate check' }).click();

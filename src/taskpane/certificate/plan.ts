@@ -7,7 +7,12 @@
  * here touches a workbook.
  *
  * Layout, left to right, starting in the first column after the table:
- *   [dopant code] | doping at ρmax | doping at ρmin | window check | [readings check] | [Rs] | [radial variation] | pass/fail
+ *   [dopant code] | doping at ρmax | doping at ρmin | window check | [corrected readings] | [readings check] | [Rs] | [radial variation] | pass/fail
+ *
+ * Corrected readings: when the readings were measured at another temperature
+ * (settings.measuredAt), one column per reading column holds it converted to
+ * the certificate's temperature with DRIFT.RESISTIVITYAT (in Ω·cm), and the
+ * readings check, Rs and radial variation use those columns instead.
  *   (one empty column) | parameter label | parameter value
  *
  * Pass/fail: PASS when the window check says "yes", the readings check (if
@@ -21,10 +26,10 @@ import { READING_ROLES, type ColumnRole } from './roles';
 import type { CertificateSettings, CertificateTable } from './settings';
 import type { SheetPlan } from '../sheetPlan';
 import { dopantCodeFormula } from './typeCodes';
-import { RESISTIVITY_UNITS, THICKNESS_UNITS, unitByCode } from './units';
+import { RESISTIVITY_UNITS, THICKNESS_UNITS, kelvinOf, unitByCode } from './units';
 import { catalogEntry, rowWarnings, validateSettings } from './validate';
 
-export type { CertificateSettings, CertificateTable, WindowRule } from './settings';
+export type { CertificateSettings, CertificateTable, MeasuredAt, TemperatureUnit, WindowRule } from './settings';
 
 /** The plan plus what the pane tells the user. */
 export interface CertificatePlan extends SheetPlan {
@@ -49,7 +54,7 @@ export const VERDICT = { pass: 'PASS', fail: 'FAIL', yes: 'yes', no: 'no', none:
 const PASS_COLOURS = { fill: '#cdebd6', fontColor: '#0f4d26' } as const;
 const FAIL_COLOURS = { fill: '#f6d3cf', fontColor: '#7a1a10' } as const;
 
-const FORMATS = { density: '0.00E+00', sheetResistance: '0.0', percent: '0.00' } as const;
+const FORMATS = { density: '0.00E+00', sheetResistance: '0.0', percent: '0.00', resistivity: '0.0000' } as const;
 
 /** A1 references of several columns in one row, contiguous runs as ranges: 'F2:H2,J2'. */
 export function rowReferences(columns: readonly number[], row: number): string {
@@ -117,6 +122,12 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
 
   const rhoFactor = unitByCode(RESISTIVITY_UNITS, settings.resistivityUnit).factor;
   const readingColumns = columnsOf(READING_ROLES);
+  const resistivityAt = catalogEntry('RESISTIVITYAT');
+  const measuredAt = settings.measuredAt ?? null;
+  const correcting = measuredAt !== null && readingColumns.length > 0;
+  if (measuredAt !== null && readingColumns.length === 0) {
+    warnings.push('‘Readings measured at’ is not used: no column is mapped to a reading (centre, edge or other site).');
+  }
   const edgeColumns = columnsOf('rho-edge');
   const hasRadial = has('rho-center') && edgeColumns.length > 0;
   const radialLimit = hasRadial ? settings.radialLimitPercent : null;
@@ -131,6 +142,8 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     { key: 'neededMax', label: `Needed doping max (${densityUnit})`, value: settings.neededMax, numberFormat: FORMATS.density },
     ...(has('type') ? [] : [{ key: 'dopant', label: 'Dopant (no type column)', value: settings.dopant.trim() }]),
     { key: 'temperature', label: `Temperature (${parameterNamed(doping, 'temperature_K').unit ?? 'K'})`, value: settings.temperatureK },
+    // Written in K whatever unit was typed, so the formulas reference it without a conversion.
+    ...(correcting ? [{ key: 'measuredAt', label: `Readings measured at (${parameterNamed(resistivityAt, 'measured_temperature_K').unit ?? 'K'})`, value: kelvinOf(measuredAt!.value, measuredAt!.unit) }] : []),
     // A model or material left to its default gets no cell: the formulas then omit the argument, rather than
     // pass a reference to a blank cell (how Excel hands a blank cell to a custom function is not documented).
     ...(settings.model.trim() === '' ? [] : [{ key: 'model', label: 'Doping model', value: settings.model.trim() }]),
@@ -186,13 +199,46 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     },
   });
 
+  // The reading cells the checks use: the readings themselves, or their corrected columns.
+  const correctedOffset = new Map<number, number>();
+  if (correcting) {
+    for (const column of readingColumns) {
+      const header = headers[column - block.column] ?? '';
+      correctedOffset.set(column, columns.length);
+      columns.push({
+        header: `${header === '' ? `Column ${columnName(column)}` : header} at certificate temperature (${resistivityAt.result.unit ?? 'Ω·cm'})`,
+        numberFormat: FORMATS.resistivity,
+        formula: (row) => {
+          const reading = cellName(row, column);
+          // A blank reading stays blank (""), so COUNT/MIN/MAX skip it as they skip the blank cell.
+          const corrected = callText(resistivityAt, {
+            resistivity: scaled(reading, rhoFactor),
+            dopant: dopantArgument(row),
+            measured_temperature_K: parameterRef('measuredAt'),
+            target_temperature_K: parameterRef('temperature'),
+            model: optionalParameterRef('model'),
+            material: optionalParameterRef('material'),
+          });
+          return `IF(ISNUMBER(${reading}),${corrected},"")`;
+        },
+      });
+    }
+  }
+  /** References of reading cells in a row, corrected where correcting (then in Ω·cm). */
+  const readingRefs = (columnsWanted: readonly number[], row: number): string =>
+    correcting ? rowReferences(columnsWanted.map((column) => firstNew + correctedOffset.get(column)!), row) : rowReferences(columnsWanted, row);
+  const readingRef = (role: ColumnRole, row: number): string => readingRefs([sheetColumn(role)], row);
+
   const readingsColumn = readingColumns.length > 0 ? columns.length : -1;
   if (readingsColumn >= 0) {
     columns.push({
-      header: 'Readings inside ρ window',
+      header: correcting ? 'Corrected readings inside ρ window' : 'Readings inside ρ window',
       formula: (row) => {
-        const readings = rowReferences(readingColumns, row);
-        const window = `${ref('rho-min', row)},${ref('rho-max', row)}`;
+        const readings = readingRefs(readingColumns, row);
+        // Corrected readings are in Ω·cm; the window is then scaled to Ω·cm too.
+        const window = correcting
+          ? `${scaled(ref('rho-min', row), rhoFactor)},${scaled(ref('rho-max', row), rhoFactor)}`
+          : `${ref('rho-min', row)},${ref('rho-max', row)}`;
         return `IF(COUNT(${readings})=0,"${VERDICT.none}",IF(AND(MIN(${readings})>=MIN(${window}),MAX(${readings})<=MAX(${window})),"${VERDICT.yes}","${VERDICT.no}"))`;
       },
     });
@@ -202,25 +248,27 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     const thicknessFactor = unitByCode(THICKNESS_UNITS, settings.thicknessUnit ?? '').factor;
     const fromReadings = readingColumns.length > 0;
     columns.push({
-      header: `Rs at nominal thickness, ${fromReadings ? 'mean reading' : 'mid-window ρ'} (${sheetRes.result.unit ?? 'Ω/sq'})`,
+      header: `Rs at nominal thickness, ${fromReadings ? (correcting ? 'mean corrected reading' : 'mean reading') : 'mid-window ρ'} (${sheetRes.result.unit ?? 'Ω/sq'})`,
       numberFormat: FORMATS.sheetResistance,
       formula: (row) => {
-        const rho = fromReadings ? `AVERAGE(${rowReferences(readingColumns, row)})` : `AVERAGE(${ref('rho-min', row)},${ref('rho-max', row)})`;
-        return callText(sheetRes, { resistivity: scaled(rho, rhoFactor), thickness_um: scaled(ref('thickness', row), thicknessFactor) });
+        const rho = fromReadings ? `AVERAGE(${readingRefs(readingColumns, row)})` : `AVERAGE(${ref('rho-min', row)},${ref('rho-max', row)})`;
+        const inOhmCm = fromReadings && correcting ? rho : scaled(rho, rhoFactor);
+        return callText(sheetRes, { resistivity: inOhmCm, thickness_um: scaled(ref('thickness', row), thicknessFactor) });
       },
     });
   }
 
   const radialColumn = hasRadial ? columns.length : -1;
   if (hasRadial) {
-    const contiguous = edgeColumns.every((column, index) => index === 0 || column === edgeColumns[index - 1] + 1);
+    const edgeTargets = correcting ? edgeColumns.map((column) => firstNew + correctedOffset.get(column)!) : edgeColumns;
+    const contiguous = edgeTargets.every((column, index) => index === 0 || column === edgeTargets[index - 1] + 1);
     columns.push({
       header: `Radial variation (${radial.result.unit ?? '%'})`,
       numberFormat: FORMATS.percent,
       formula: (row) => {
-        const edges = rowReferences(edgeColumns, row);
+        const edges = readingRefs(edgeColumns, row);
         // edge_values takes one range; separate edge columns are averaged first, which is the same mean.
-        return callText(radial, { center: ref('rho-center', row), edge_values: contiguous ? edges : `AVERAGE(${edges})` });
+        return callText(radial, { center: readingRef('rho-center', row), edge_values: contiguous ? edges : `AVERAGE(${edges})` });
       },
     });
   }

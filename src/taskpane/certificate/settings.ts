@@ -6,6 +6,15 @@
 import type { BlockContents, CellBlock } from '../port';
 import type { ColumnRole } from './roles';
 
+/** Units the 'measured at' temperature may be typed in; the user chooses one (never guessed from the number). */
+export type TemperatureUnit = 'C' | 'K';
+
+/** Temperature the readings were taken at, as typed, with its chosen unit. */
+export interface MeasuredAt {
+  readonly value: number;
+  readonly unit: TemperatureUnit;
+}
+
 /** Which containment the window check asks for. */
 export type WindowRule = 'certified-inside-needed' | 'needed-inside-certified';
 
@@ -41,6 +50,12 @@ export interface CertificateSettings {
   readonly model: string;
   /** Material code; '' for the function's default material (no parameter cell, argument omitted). */
   readonly material: string;
+  /**
+   * Temperature the readings (centre, edge, other sites) were measured at, or null when they are taken
+   * at the certificate's temperature. When given, every reading is corrected to temperatureK with
+   * DRIFT.RESISTIVITYAT before the checks.
+   */
+  readonly measuredAt?: MeasuredAt | null;
   /** Largest allowed |radial variation| in %, or null for no limit. */
   readonly radialLimitPercent: number | null;
 }

@@ -115,3 +115,25 @@ export function unitByCode(units: readonly ColumnUnit[], code: string): ColumnUn
   if (!found) throw new Error(`unknown unit '${code}': allowed are ${units.map((unit) => unit.code).join(', ')}`);
   return found;
 }
+
+/** Kelvin at 0 °C (the definition of the Celsius scale: common practice, no source). */
+export const CELSIUS_ZERO_K = 273.15;
+
+/** Temperature units the 'measured at' field offers; the user picks one, the number never decides. */
+export const TEMPERATURE_UNITS: readonly { readonly code: 'C' | 'K'; readonly label: string }[] = [
+  { code: 'C', label: '°C' },
+  { code: 'K', label: 'K' },
+];
+
+/**
+ * A typed temperature in kelvin.
+ *
+ * @param value - the number typed
+ * @param unit - 'C' (°C) or 'K'
+ * @returns the temperature in K
+ * @example kelvinOf(25, 'C') // 298.15
+ */
+export function kelvinOf(value: number, unit: 'C' | 'K'): number {
+  // Rounded to 1e-9 K so 25 °C is written as 298.15, not 298.15000000000003.
+  return unit === 'K' ? value : Math.round((value + CELSIUS_ZERO_K) * 1e9) / 1e9;
+}

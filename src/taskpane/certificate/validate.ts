@@ -13,7 +13,7 @@ import { duplicateRole, ROLE_LABELS, type ColumnRole } from './roles';
 import type { CertificateSettings, CertificateTable } from './settings';
 import { PaneRefusal } from '../sheetPlan';
 import { dopantCodeFor, dopantCodeList, knownDopant } from './typeCodes';
-import { RESISTIVITY_UNITS, THICKNESS_UNITS } from './units';
+import { RESISTIVITY_UNITS, THICKNESS_UNITS, TEMPERATURE_UNITS, CELSIUS_ZERO_K, kelvinOf } from './units';
 
 /** A catalog entry the check is built on. */
 export function catalogEntry(name: string): FunctionSpec {
@@ -98,6 +98,23 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
   }
   if (!RESISTIVITY_UNITS.some((unit) => unit.code === settings.resistivityUnit)) {
     throw new PaneRefusal(`Choose the unit of the resistivity columns (${RESISTIVITY_UNITS.map((unit) => unit.label).join(' or ')}).`);
+  }
+  const measuredAt = settings.measuredAt ?? null;
+  if (measuredAt !== null) {
+    const unit = TEMPERATURE_UNITS.find((candidate) => candidate.code === measuredAt.unit);
+    if (unit === undefined) throw new PaneRefusal(`Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((u) => u.label).join(' or ')}).`);
+    const kelvin = kelvinOf(measuredAt.value, measuredAt.unit);
+    if (!Number.isFinite(kelvin) || kelvin < TEMPERATURE_RANGE_K.min || kelvin > TEMPERATURE_RANGE_K.max) {
+      throw new PaneRefusal(
+        `Readings measured at ${String(measuredAt.value)} ${unit.label} is outside ${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K` +
+          `${measuredAt.unit === 'C' ? ` (${(TEMPERATURE_RANGE_K.min - CELSIUS_ZERO_K).toFixed(2)} to ${(TEMPERATURE_RANGE_K.max - CELSIUS_ZERO_K).toFixed(2)} °C)` : ''}; is the unit right?`,
+      );
+    }
+    if (settings.model.trim().toLowerCase() === 'astm-f723') {
+      throw new PaneRefusal(
+        `The doping model astm-f723 has no temperature dependence, so readings measured at another temperature cannot be corrected with it; choose another model or clear 'Readings measured at'.`,
+      );
+    }
   }
   if (settings.radialLimitPercent !== null && (!Number.isFinite(settings.radialLimitPercent) || settings.radialLimitPercent < 0)) {
     throw new PaneRefusal(`The radial variation limit must be a number ≥ 0 (%), or left blank; got ${String(settings.radialLimitPercent)}.`);

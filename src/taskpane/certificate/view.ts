@@ -12,10 +12,10 @@ import type { ToolContext } from '../tool';
 import { parameterNamed } from '../reference/callText';
 import { element, labelledControl, parseNumberField, selectOf } from '../dom';
 import { PaneRefusal } from '../sheetPlan';
-import type { CertificateSettings, WindowRule } from './plan';
+import type { CertificateSettings, MeasuredAt, TemperatureUnit, WindowRule } from './plan';
 import { COLUMN_ROLES, ROLE_LABELS, type ColumnRole } from './roles';
 import { addCertificateCheck, guessUnits, readCertificateTable, type CertificateGuess } from './session';
-import { RESISTIVITY_UNITS, THICKNESS_UNITS } from './units';
+import { RESISTIVITY_UNITS, THICKNESS_UNITS, TEMPERATURE_UNITS } from './units';
 
 const ID = 'certificate';
 
@@ -78,6 +78,10 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   // there rather than at DRIFT.DOPING's blank 300 K; the default model then gives F723's own numbers.
   const defaultTemperature = String(F723_ANCHOR_TEMPERATURE);
   temperature.value = defaultTemperature;
+  // Readings taken at the lab's temperature: optional; its unit is chosen by the user, never read from the number.
+  const measuredAt = element(doc, 'input', { type: 'text', id: `${ID}-measured-at`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'blank: at the certificate temperature' });
+  const measuredUnit = selectOf(doc, `${ID}-measured-unit`, [[CHOOSE, 'choose…'], ...TEMPERATURE_UNITS.map((unit) => [unit.code, unit.label] as const)], CHOOSE);
+  measuredUnit.setAttribute('aria-label', 'Unit of readings measured at');
   const models = dopingChoices('model');
   const modelSelect = selectOf(doc, `${ID}-model`, [['', models.defaultCode], ...models.codes.map((code) => [code, code] as const)], '');
   const materials = dopingChoices('material');
@@ -157,6 +161,11 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     const max = parseNumberField(neededMax.value, 'Needed doping max');
     if (min === null || max === null) throw new PaneRefusal('Type the needed doping window: its min and max in cm⁻³, e.g. 1e15 and 2e15.');
     const temperatureK = parseNumberField(temperature.value, 'Temperature') ?? Number(defaultTemperature);
+    const measuredValue = parseNumberField(measuredAt.value, 'Readings measured at');
+    if (measuredValue !== null && measuredUnit.value === CHOOSE) {
+      throw new PaneRefusal(`Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((unit) => unit.label).join(' or ')}): ${measuredValue} could be either.`);
+    }
+    const measured: MeasuredAt | null = measuredValue === null ? null : { value: measuredValue, unit: measuredUnit.value as TemperatureUnit };
     return {
       mapping: currentMapping(),
       neededMin: min,
@@ -170,6 +179,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
       model: modelSelect.value,
       material: materialSelect.value,
       radialLimitPercent: parseNumberField(radialLimit.value, 'Max |radial variation|'),
+      measuredAt: measured,
     };
   }
 
@@ -225,6 +235,15 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const more = element(doc, 'details', { class: 'dc-group' }, [
     element(doc, 'summary', { text: 'More settings' }),
     labelledControl(doc, 'Temperature (K)', temperature, 'Temperature at which the certificate’s resistivity values hold; blank means the functions’ default.'),
+    element(doc, 'div', { class: 'dc-row' }, [
+      labelledControl(
+        doc,
+        'Readings measured at',
+        measuredAt,
+        'Temperature of the lab when the centre, edge and other readings were taken. Each reading is then corrected to the temperature above with DRIFT.RESISTIVITYAT before it is checked. Blank: readings are taken as they are.',
+      ),
+      labelledControl(doc, 'Unit', measuredUnit),
+    ]),
     labelledControl(doc, 'Doping model', modelSelect),
     labelledControl(doc, 'Material', materialSelect),
     labelledControl(doc, 'Max |radial variation| (%)', radialLimit, 'Blank: radial variation is shown but not part of pass/fail. Needs a centre and an edge column.'),
