@@ -8,7 +8,10 @@
  * result's range, the cached values in every cell of that range, and the
  * dynamic-array mark (see dynamicArrays.ts). The cells a spill covered when
  * the file was read hold its old results, not user data, and are cleared
- * before recalculating. A spill that would cover a user's cell is not
+ * before recalculating. A legacy array formula (no dynamic-array mark,
+ * arrayKinds.ts) keeps its whole declared range, which is its own: cells its
+ * new result does not reach get what Excel gives them (legacyArrayFill), so
+ * nothing in the range is deleted. A spill that would cover a user's cell is not
  * written over it: the anchor shows #SPILL! and the user's cell keeps its value.
  * DRIFT calls are written in the form Excel stores for add-in functions,
  * whatever form the file had (formulaText.ts).
@@ -20,6 +23,7 @@ import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, Simple
 import { areaName, cellName, columnName } from './a1';
 import { ResultTooLarge, createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
+import { dynamicArrayAnchors, type DynamicAnchors } from './arrayKinds';
 import { ForeignPackageRefused, preparePackage, type PreparedPackage } from './foreignPackages';
 import { unevaluableReason } from './unevaluable';
 import { fileErrorText } from './errorTypes';
@@ -150,11 +154,14 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
   if (workbook.worksheets.length === 0) throw new WorkbookReadError('not an .xlsx workbook (it has no worksheets)');
   giveTablesAStyle(workbook);
   NOTICES.set(workbook, notices);
+  DYNAMIC_ANCHORS.set(workbook, await dynamicArrayAnchors(prepared.bytes));
   return workbook;
 }
 
 /** What reading a workbook found the copy will lack (charts, pivot tables, macros), one line each. */
 const NOTICES = new WeakMap<ExcelJS.Workbook, string[]>();
+/** The dynamic-array anchors of a workbook as read; array formulas not listed are legacy ones. */
+const DYNAMIC_ANCHORS = new WeakMap<ExcelJS.Workbook, DynamicAnchors>();
 
 /**
  * The notices for a workbook read by loadWorkbook.
@@ -231,6 +238,8 @@ interface FormulaCell {
   /** Formula text as stored in the file (no `=`), kept as it was. */
   readonly stored: string;
   readonly wasArray: boolean;
+  /** The declared range of a legacy (not dynamic) array formula over more than one cell, which stays its own. */
+  legacyBox?: Box;
 }
 
 interface SheetInput {
@@ -244,7 +253,7 @@ interface SheetInput {
   readonly spillCellsOf: ReadonlyMap<FormulaCell, readonly ExcelJS.Cell[]>;
 }
 
-function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
+function readSheet(worksheet: ExcelJS.Worksheet, isDynamic: (address: string) => boolean): SheetInput {
   const content: RawCellContent[][] = [];
   const formulas: FormulaCell[] = [];
   const oldSpills: { formula: FormulaCell; anchorRow: number; anchorColumn: number; box: Box }[] = [];
@@ -261,7 +270,11 @@ function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
         const formula: FormulaCell = { row: r, column: c, cell, stored: cell.formula, wasArray };
         formulas.push(formula);
         const box = wasArray && stored.ref ? parseRange(stored.ref) : undefined;
-        if (box) oldSpills.push({ formula, anchorRow: r, anchorColumn: c, box });
+        if (box) {
+          oldSpills.push({ formula, anchorRow: r, anchorColumn: c, box });
+          const anchoredAtCorner = box.top === r && box.left === c;
+          if (anchoredAtCorner && (box.bottom > r || box.right > c) && !isDynamic(cellAddress(r, c))) formula.legacyBox = box;
+        }
       }
     });
   });
@@ -329,7 +342,11 @@ function mergedCellsSpillError(): DetailedCellError {
  * @example const summary = recalculateWorkbook(await readWorkbookFile('in.xlsx'))
  */
 export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
-  const inputs = workbook.worksheets.map(readSheet);
+  const dynamic = DYNAMIC_ANCHORS.get(workbook);
+  // A workbook not read by loadWorkbook: nothing says which arrays are legacy, so all count as spills.
+  const inputs = workbook.worksheets.map((worksheet) =>
+    readSheet(worksheet, dynamic === undefined ? () => true : (address) => dynamic.get(worksheet.name)?.has(address) ?? false),
+  );
   const { engine, kept } = buildWorkbookEngine(inputs, workbookNames(workbook));
   const keptCells = new Set([...kept.values()].map((k) => k.formula.cell));
   // A kept legacy array formula keeps the cached values of its whole range.
@@ -361,6 +378,11 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
         }
         let range = isArray ? arrayRange(engine, address) : { start: address, end: address };
         let values = engine.getRangeValues(range);
+        const legacy = formula.legacyBox === undefined ? undefined : legacyArrayRange(input, formula, formula.legacyBox, range);
+        if (legacy !== undefined) {
+          values = legacyArrayFill(values, legacy.end.row - legacy.start.row + 1, legacy.end.col - legacy.start.col + 1);
+          range = legacy;
+        }
         if (coversMergedCells(input.worksheet, range)) {
           // Excel does not spill into merged cells; the engine does not know about merges.
           range = { start: address, end: address };
@@ -495,6 +517,62 @@ function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: Sh
   } finally {
     probe.destroy();
   }
+}
+
+/**
+ * The range a legacy array formula's result is written over: its declared
+ * range, grown to the result when that is larger (a spill, as everything is
+ * written). Undefined when the spill was blocked (#SPILL!, written on the
+ * anchor alone as before) or when a cell of the declared range beyond the
+ * result is not the array's (a formula or a merge another writer put there):
+ * then that cell is left alone and the array is written over its result only.
+ */
+function legacyArrayRange(input: SheetInput, formula: FormulaCell, box: Box, result: SimpleCellRange): SimpleCellRange | undefined {
+  const top = formula.row - 1;
+  const left = formula.column - 1;
+  if (result.start.row !== top || result.start.col !== left) return undefined;
+  const bottom = Math.max(result.end.row, box.bottom - 1);
+  const right = Math.max(result.end.col, box.right - 1);
+  if (bottom === result.end.row && right === result.end.col) return undefined;
+  const own = new Set(input.spillCellsOf.get(formula) ?? []);
+  for (let r = top; r <= bottom; r++) {
+    for (let c = left; c <= right; c++) {
+      if (r <= result.end.row && c <= result.end.col) continue;
+      const cell = input.worksheet.findCell(r + 1, c + 1);
+      if (cell !== undefined && !own.has(cell) && cell.type !== ExcelJS.ValueType.Null) return undefined;
+    }
+  }
+  return { start: result.start, end: { sheet: result.start.sheet, row: bottom, col: right } };
+}
+
+/**
+ * A legacy array formula's result laid over its declared range as Excel lays
+ * it (ECMA-376 Part 1, §18.17.2 "Single- and Multi-Cell Formulas", read at
+ * webapp.docx4java.org/OnlineDemo/ecma376/SpreadsheetML/file_2.html): a single
+ * value fills every cell; a one-column result is cloned into the excess
+ * columns, and (the same rule for rows, by symmetry: the text read was cut
+ * off there) a one-row result into the excess rows. Every other excess cell
+ * shows #N/A, as Excel shows it ("CSE array formulas will truncate the return
+ * area if it's too small, or return #N/A's if too large", Microsoft,
+ * "Dynamic array formulas vs. legacy CSE array formulas", read as reproduced
+ * at slideshare.net/slideshow/new-dynamic-array-functions-excel-tutorial/250807025).
+ *
+ * @param values - the result, rows × columns
+ * @param rows - rows of the range written (≥ the result's)
+ * @param columns - columns of the range written (≥ the result's)
+ * @example legacyArrayFill([[1], [2]], 3, 2) // [[1, 1], [2, 2], [#N/A, #N/A]]
+ */
+export function legacyArrayFill(values: readonly (readonly CellValue[])[], rows: number, columns: number): CellValue[][] {
+  const resultRows = values.length;
+  const resultColumns = values[0]?.length ?? 0;
+  const notAvailable = new DetailedCellError(new CellError(ErrorType.NA, 'the legacy array formula’s range is larger than its result'), fileErrorText(ErrorType.NA));
+  return Array.from({ length: rows }, (_, r) =>
+    Array.from({ length: columns }, (_, c) => {
+      const sourceRow = resultRows === 1 ? 0 : r;
+      const sourceColumn = resultColumns === 1 ? 0 : c;
+      return sourceRow < resultRows && sourceColumn < resultColumns ? values[sourceRow][sourceColumn] : notAvailable;
+    }),
+  );
 }
 
 /** Whether a spill over more than one cell touches a merged cell (its anchor included). */
