@@ -338,10 +338,12 @@ function mergedCellsSpillError(): DetailedCellError {
  * spilled results fill their ranges, old spill results are cleared.
  *
  * @param workbook - as read by {@link loadWorkbook}; changed in place
+ * @param options.onPlaced - called after each formula's result is placed in its cells, with the
+ *   count placed and the total (the engine calculates in one call before; this is the loop that can count)
  * @returns sheets, formula count, where arrays were placed, and every cell that shows an error
  * @example const summary = recalculateWorkbook(await readWorkbookFile('in.xlsx'))
  */
-export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
+export function recalculateWorkbook(workbook: ExcelJS.Workbook, options: { onPlaced?: (placed: number, total: number) => void } = {}): RecalcSummary {
   const dynamic = DYNAMIC_ANCHORS.get(workbook);
   // A workbook not read by loadWorkbook: nothing says which arrays are legacy, so all count as spills.
   const inputs = workbook.worksheets.map((worksheet) =>
@@ -362,11 +364,14 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
     };
 
     for (const input of inputs) input.oldSpillCells.forEach((cell) => keptSpillCells.has(cell) || (cell.value = null));
+    const total = inputs.reduce((n, input) => n + input.formulas.length, 0);
+    let placed = 0;
 
     for (const input of inputs) {
       const sheetId = engine.getSheetId(input.name);
       if (sheetId === undefined) throw new Error(`sheet "${input.name}" did not reach the engine`);
       for (const formula of input.formulas) {
+        options.onPlaced?.(++placed, total);
         if (keptCells.has(formula.cell)) continue;
         const address = { sheet: sheetId, row: formula.row - 1, col: formula.column - 1 };
         const isArray = engine.getCellType(address) === CellType.ARRAYFORMULA;
