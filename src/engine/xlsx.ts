@@ -9,9 +9,9 @@
  * dynamic-array mark (see dynamicArrays.ts). The cells a spill covered when
  * the file was read hold its old results, not user data, and are cleared
  * before recalculating. A legacy array formula (no dynamic-array mark,
- * arrayKinds.ts) keeps its whole declared range, which is its own: cells its
- * new result does not reach get what Excel gives them (legacyArrayFill), so
- * nothing in the range is deleted. A spill that would cover a user's cell is not
+ * arrayKinds.ts) keeps its whole declared range, which is its own: the cells
+ * of it the file holds that its new result does not reach get what Excel
+ * gives them (legacyArrayFill), so nothing in the range is deleted. A spill that would cover a user's cell is not
  * written over it: the anchor shows #SPILL! and the user's cell keeps its value.
  * DRIFT calls are written in the form Excel stores for add-in functions,
  * whatever form the file had (formulaText.ts).
@@ -24,6 +24,7 @@ import { areaName, cellName, columnName } from './a1';
 import { ResultTooLarge, createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
 import { dynamicArrayAnchors, type DynamicAnchors } from './arrayKinds';
+import { lastColumnValidationsAsRanges } from './lastColumnValidations';
 import { ForeignPackageRefused, preparePackage, type PreparedPackage } from './foreignPackages';
 import { unevaluableReason } from './unevaluable';
 import { fileErrorText } from './errorTypes';
@@ -383,7 +384,12 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook, options: { onPla
         }
         let range = isArray ? arrayRange(engine, address) : { start: address, end: address };
         let values = engine.getRangeValues(range);
+        // The result proper; beyond it, in a legacy array's range, only the cells the file had are
+        // written, so memory follows the content rather than the declared range.
+        let resultRows = values.length;
+        let resultColumns = values[0].length;
         const legacy = formula.legacyBox === undefined ? undefined : legacyArrayRange(input, formula, formula.legacyBox, range);
+        const ownCells = new Set(legacy === undefined ? [] : input.spillCellsOf.get(formula) ?? []);
         if (legacy !== undefined) {
           values = legacyArrayFill(values, legacy.end.row - legacy.start.row + 1, legacy.end.col - legacy.start.col + 1);
           range = legacy;
@@ -392,6 +398,8 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook, options: { onPla
           // Excel does not spill into merged cells; the engine does not know about merges.
           range = { start: address, end: address };
           values = [[mergedCellsSpillError()]];
+          resultRows = 1;
+          resultColumns = 1;
         }
         const rows = values.length;
         const columns = values[0].length;
@@ -405,6 +413,7 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook, options: { onPla
           for (let c = 0; c < columns; c++) {
             const row = range.start.row + r + 1;
             const column = range.start.col + c + 1;
+            if ((r >= resultRows || c >= resultColumns) && !ownCells.has(input.worksheet.findCell(row, column) as ExcelJS.Cell)) continue;
             if (r > 0 || c > 0) input.worksheet.getCell(row, column).value = fileValue(values[r][c]) as ExcelJS.CellValue;
             note(input.name, row, column, values[r][c]);
           }
@@ -610,6 +619,7 @@ function formulaValue(stored: string, result: CellValue): ExcelJS.CellFormulaVal
  * @param summary - what that recalculation returned (for the array anchors)
  */
 export async function workbookBytes(workbook: ExcelJS.Workbook, summary: RecalcSummary): Promise<Buffer> {
+  lastColumnValidationsAsRanges(workbook);
   const written = Buffer.from(await workbook.xlsx.writeBuffer());
   const anchors = new Map<string, string[]>();
   for (const placement of summary.arrays) {
