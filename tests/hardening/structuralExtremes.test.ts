@@ -27,7 +27,7 @@ import fc from 'fast-check';
 import { FUZZ_SEED } from './support/seed';
 import { SHEET_HEAD, columnLetters, nativeZip, sheetPackageParts } from './support/rawWorkbook';
 
-const RUNS = Number(process.env.DRIFTCELL_STRUCTURE_RUNS ?? 24);
+const RUNS = Number(process.env.DRIFTCELL_STRUCTURE_RUNS ?? 16);
 /** Generous for a shared CI machine; a run that needs it has failed anyway (not a timing assertion). */
 const CHILD_TIMEOUT_MS = 60_000;
 const HEAP_MB = 1536;
