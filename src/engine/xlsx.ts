@@ -465,7 +465,7 @@ function buildWorkbookEngine(inputs: readonly SheetInput[], names: { name: strin
     }
     kept.set(formula, { sheet: input.name, formula, reason });
   };
-  let overflowHandled = false;
+  let overflowRounds = 0;
   // Each round keeps the cells that arise as the engine's shortcomings; their dependents then
   // calculate from the cached values. A kept cell fed by another kept cell shows up a round later.
   for (let round = 0; ; round++) {
@@ -478,10 +478,10 @@ function buildWorkbookEngine(inputs: readonly SheetInput[], names: { name: strin
         const sheet = inputs[e.address.sheet]?.name ?? '?';
         throw new WorkbookReadError(`too large to recalculate (sheet "${sheet}": ${e.message})`);
       }
-      if (!(e instanceof RangeError) || overflowHandled) throw e;
-      overflowHandled = true;
+      if (!(e instanceof RangeError) || overflowRounds >= STACK_RESERVES.length) throw e;
+      const reserve = STACK_RESERVES[overflowRounds++];
       const before = kept.size;
-      keepOverflowingFormulas(inputs, keep);
+      keepOverflowingFormulas(inputs, keep, reserve);
       if (kept.size === before) throw e;
       continue;
     }
@@ -511,10 +511,27 @@ function cachedIsSameError(cell: ExcelJS.Cell, value: CellValue): boolean {
 }
 
 /**
+ * Stack frames used up before each probe, one entry per round of keeping. How
+ * deep a formula may go before the stack runs out is not fixed: it depends on
+ * the frames below it (the whole build, in the engine; one formula, in the
+ * probe) and on whether V8 has optimised the parser's functions yet (an
+ * optimised frame is smaller). A formula near the limit can thus overflow the
+ * build and pass a bare probe, so each probe runs with part of the stack
+ * already used, more each round (a default Node stack holds roughly 10,000
+ * small frames): what passes it has room to spare.
+ */
+const STACK_RESERVES = [2_000, 4_000, 6_000];
+
+/** Runs `run` with `frames` small frames of stack used below it. */
+function withStackUsed<T>(frames: number, run: () => T): T {
+  return frames <= 0 ? run() : withStackUsed(frames - 1, run);
+}
+
+/**
  * Finds the formulas that overflow the engine's stack on their own (parsing
  * or evaluating them over empty sheets of the same names) and keeps them.
  */
-function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: SheetInput, formula: FormulaCell, reason: string) => void): void {
+function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: SheetInput, formula: FormulaCell, reason: string) => void, reserve: number): void {
   const probe = createEngine(Object.fromEntries(inputs.map((input) => [input.name, []])));
   try {
     for (const [index, input] of inputs.entries()) {
@@ -522,7 +539,7 @@ function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: Sh
         const text = input.content[formula.row - 1]?.[formula.column - 1];
         if (typeof text !== 'string' || !text.startsWith('=')) continue;
         try {
-          probe.calculateFormula(text, index);
+          withStackUsed(reserve, () => probe.calculateFormula(text, index));
         } catch (inner) {
           if (inner instanceof RangeError) keep(input, formula, 'the formula is too long or too deeply nested for the headless engine');
         }

@@ -146,6 +146,7 @@ function recalcSurvives(spec: SheetSpec): number {
   const env = { ...process.env };
   delete env.NODE_OPTIONS;
   const result = spawnSync(process.execPath, [`--max-old-space-size=${HEAP_MB}`, cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], { cwd: folder, encoding: 'utf8', timeout: CHILD_TIMEOUT_MS, env });
+  if (process.env.DRIFTCELL_STRUCTURE_LOG) writeFileSync(join(tmpdir(), 'driftcell-structure-last.xml'), sheetXml(spec));
   const context = `seed ${FUZZ_SEED}; status ${result.status}, signal ${result.signal}; stderr: ${result.stderr?.slice(0, 600)}; sheet: ${sheetXml(spec).slice(0, 600)}`;
   if (result.error !== undefined || result.signal !== null) throw new Error(`the child did not end by itself (${result.error?.message ?? result.signal}); ${context}`);
   if (![0, 1, 2].includes(result.status ?? -1)) throw new Error(`exit status outside 0, 1, 2; ${context}`);
@@ -184,6 +185,9 @@ describe('recalc on structures at the limits, in the same heap', () => {
     ['a legacy array formula of one value declared over 1,000,000 cells (the array-range limit)', { ...empty, cells: [formulaCell('A1', '<c r="A1"><f t="array" ref="A1:J100000">1+1</f><v>2</v></c>')] }],
     ['a merge over 1,000,000 cells (the merge limit)', { ...empty, cells: [formulaCell('A1', '<c r="A1"><f>DRIFT.SHEETRES(10,5)</f></c>')], merges: ['A1:J100000'] }],
     ['a column definition over the whole width and data validation over the whole first row', { ...empty, cells: [formulaCell('A1', '<c r="A1"><v>1</v></c>')], cols: [[1, 16_383]], validations: [['A1:XFD1']] }],
+    // Found with DRIFTCELL_FUZZ_SEED=12345: the build overflowed the stack but a bare probe of the
+    // same formula did not, now and then (V8's optimised frames are smaller); recalc failed outright.
+    ['a 4,096-term sum beside an array formula nested 137 deep, anchored outside its own ref', { ...empty, cells: [{ row: 8, column: 23, xml: () => `<c r="W8"><f>1${'+1'.repeat(4_095)}</f></c>` }, { row: 18, column: 18, xml: () => `<c r="R18"><f t="array" ref="G16:L43">${'('.repeat(137)}1${')'.repeat(137)}</f><v>0</v></c>` }] }],
     ['a formula nested past Excel’s 64 levels and one longer than its 8,192 characters', { ...empty, cells: [formulaCell('A1', `<c r="A1"><f>${'ABS('.repeat(2_000)}-1${')'.repeat(2_000)}</f></c>`), { row: 2, column: 1, xml: () => `<c r="A2"><f>1${'+1'.repeat(10_000)}</f></c>` }] }],
   ];
   it.each(cases)('%s', (_, spec) => {
