@@ -39,7 +39,7 @@ export async function writeWaferLog(file: string, rows: number): Promise<void> {
   await workbook.xlsx.writeFile(file);
 }
 
-interface ChildRun {
+export interface ChildRun {
   readonly wallMs: number;
   readonly peakKiB: number;
   readonly method: string;
@@ -48,7 +48,7 @@ interface ChildRun {
 }
 
 /** Runs the command, measuring wall time and peak RSS. */
-function runMeasured(command: string, args: readonly string[]): Promise<ChildRun> {
+export function runMeasured(command: string, args: readonly string[]): Promise<ChildRun> {
   const useTime = existsSync(GNU_TIME);
   const [exe, argv] = useTime ? [GNU_TIME, ['-v', command, ...args]] : [command, [...args]];
   return new Promise((resolve, reject) => {

@@ -127,20 +127,26 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   let values: ValuesForm | undefined;
   let workbook: ExcelJS.Workbook;
   let blockers: SpillBlockers = new Map();
-  // A bar on stderr only when it is a terminal: long workbooks take a while.
-  const progress = phaseProgress(process.stderr, `recalc ${input}`, ['reading', 'calculating', 'writing']);
+  // A bar on stderr only when it is a terminal: long workbooks take a while. Reading, calculating
+  // and writing are single calls (exceljs, HyperFormula); placing the results counts formulas.
+  const progress = phaseProgress(process.stderr, `recalc ${input}`, ['reading', 'calculating', 'placing results', 'writing']);
   progress.start(0);
   try {
     workbook = await readWorkbookFile(input);
     progress.start(1);
     try {
-      summary = recalculateWorkbook(workbook);
+      summary = recalculateWorkbook(workbook, {
+        onPlaced: (placed, total) => {
+          if (placed === 1) progress.start(2);
+          progress.advance(placed, total, 'formulas');
+        },
+      });
     } catch (e) {
       if (e instanceof WorkbookReadError) throw new WorkbookReadError(`${input}: ${e.message}`);
       throw e;
     }
     blockers = findSpillBlockers(workbook, summary.problems);
-    progress.start(2);
+    progress.start(3);
     if (options.values) {
       values = convertToValues(workbook);
       bytes = await valuesWorkbookBytes(workbook);

@@ -14,6 +14,7 @@ import ExcelJS from 'exceljs';
 import { cellAddress } from './xlsx';
 import { displayFormula } from './formulaText';
 import type { StoredFormula } from './workbookCells';
+import { lastColumnValidationsAsRanges } from './lastColumnValidations';
 
 /** The listing sheet's name; a number is added when the workbook has a sheet of that name already. */
 export const FORMULAS_SHEET = 'Formulas';
@@ -105,5 +106,6 @@ export function convertToValues(workbook: ExcelJS.Workbook): ValuesForm {
 
 /** The values form as .xlsx bytes (it has no formulas, so no array marks). */
 export async function valuesWorkbookBytes(workbook: ExcelJS.Workbook): Promise<Buffer> {
+  lastColumnValidationsAsRanges(workbook);
   return Buffer.from(await workbook.xlsx.writeBuffer());
 }

@@ -8,7 +8,10 @@
  * result's range, the cached values in every cell of that range, and the
  * dynamic-array mark (see dynamicArrays.ts). The cells a spill covered when
  * the file was read hold its old results, not user data, and are cleared
- * before recalculating. A spill that would cover a user's cell is not
+ * before recalculating. A legacy array formula (no dynamic-array mark,
+ * arrayKinds.ts) keeps its whole declared range, which is its own: the cells
+ * of it the file holds that its new result does not reach get what Excel
+ * gives them (legacyArrayFill), so nothing in the range is deleted. A spill that would cover a user's cell is not
  * written over it: the anchor shows #SPILL! and the user's cell keeps its value.
  * DRIFT calls are written in the form Excel stores for add-in functions,
  * whatever form the file had (formulaText.ts).
@@ -20,6 +23,8 @@ import type { CellValue, HyperFormula, RawCellContent, SimpleCellAddress, Simple
 import { areaName, cellName, columnName } from './a1';
 import { ResultTooLarge, createEngine } from './engine';
 import { markDynamicArrays } from './dynamicArrays';
+import { dynamicArrayAnchors, type DynamicAnchors } from './arrayKinds';
+import { lastColumnValidationsAsRanges } from './lastColumnValidations';
 import { ForeignPackageRefused, preparePackage, type PreparedPackage } from './foreignPackages';
 import { unevaluableReason } from './unevaluable';
 import { fileErrorText } from './errorTypes';
@@ -150,11 +155,14 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
   if (workbook.worksheets.length === 0) throw new WorkbookReadError('not an .xlsx workbook (it has no worksheets)');
   giveTablesAStyle(workbook);
   NOTICES.set(workbook, notices);
+  DYNAMIC_ANCHORS.set(workbook, await dynamicArrayAnchors(prepared.bytes));
   return workbook;
 }
 
 /** What reading a workbook found the copy will lack (charts, pivot tables, macros), one line each. */
 const NOTICES = new WeakMap<ExcelJS.Workbook, string[]>();
+/** The dynamic-array anchors of a workbook as read; array formulas not listed are legacy ones. */
+const DYNAMIC_ANCHORS = new WeakMap<ExcelJS.Workbook, DynamicAnchors>();
 
 /**
  * The notices for a workbook read by loadWorkbook.
@@ -231,6 +239,8 @@ interface FormulaCell {
   /** Formula text as stored in the file (no `=`), kept as it was. */
   readonly stored: string;
   readonly wasArray: boolean;
+  /** The declared range of a legacy (not dynamic) array formula over more than one cell, which stays its own. */
+  legacyBox?: Box;
 }
 
 interface SheetInput {
@@ -244,7 +254,7 @@ interface SheetInput {
   readonly spillCellsOf: ReadonlyMap<FormulaCell, readonly ExcelJS.Cell[]>;
 }
 
-function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
+function readSheet(worksheet: ExcelJS.Worksheet, isDynamic: (address: string) => boolean): SheetInput {
   const content: RawCellContent[][] = [];
   const formulas: FormulaCell[] = [];
   const oldSpills: { formula: FormulaCell; anchorRow: number; anchorColumn: number; box: Box }[] = [];
@@ -261,7 +271,11 @@ function readSheet(worksheet: ExcelJS.Worksheet): SheetInput {
         const formula: FormulaCell = { row: r, column: c, cell, stored: cell.formula, wasArray };
         formulas.push(formula);
         const box = wasArray && stored.ref ? parseRange(stored.ref) : undefined;
-        if (box) oldSpills.push({ formula, anchorRow: r, anchorColumn: c, box });
+        if (box) {
+          oldSpills.push({ formula, anchorRow: r, anchorColumn: c, box });
+          const anchoredAtCorner = box.top === r && box.left === c;
+          if (anchoredAtCorner && (box.bottom > r || box.right > c) && !isDynamic(cellAddress(r, c))) formula.legacyBox = box;
+        }
       }
     });
   });
@@ -325,11 +339,17 @@ function mergedCellsSpillError(): DetailedCellError {
  * spilled results fill their ranges, old spill results are cleared.
  *
  * @param workbook - as read by {@link loadWorkbook}; changed in place
+ * @param options.onPlaced - called after each formula's result is placed in its cells, with the
+ *   count placed and the total (the engine calculates in one call before; this is the loop that can count)
  * @returns sheets, formula count, where arrays were placed, and every cell that shows an error
  * @example const summary = recalculateWorkbook(await readWorkbookFile('in.xlsx'))
  */
-export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
-  const inputs = workbook.worksheets.map(readSheet);
+export function recalculateWorkbook(workbook: ExcelJS.Workbook, options: { onPlaced?: (placed: number, total: number) => void } = {}): RecalcSummary {
+  const dynamic = DYNAMIC_ANCHORS.get(workbook);
+  // A workbook not read by loadWorkbook: nothing says which arrays are legacy, so all count as spills.
+  const inputs = workbook.worksheets.map((worksheet) =>
+    readSheet(worksheet, dynamic === undefined ? () => true : (address) => dynamic.get(worksheet.name)?.has(address) ?? false),
+  );
   const { engine, kept } = buildWorkbookEngine(inputs, workbookNames(workbook));
   const keptCells = new Set([...kept.values()].map((k) => k.formula.cell));
   // A kept legacy array formula keeps the cached values of its whole range.
@@ -345,11 +365,14 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
     };
 
     for (const input of inputs) input.oldSpillCells.forEach((cell) => keptSpillCells.has(cell) || (cell.value = null));
+    const total = inputs.reduce((n, input) => n + input.formulas.length, 0);
+    let placed = 0;
 
     for (const input of inputs) {
       const sheetId = engine.getSheetId(input.name);
       if (sheetId === undefined) throw new Error(`sheet "${input.name}" did not reach the engine`);
       for (const formula of input.formulas) {
+        options.onPlaced?.(++placed, total);
         if (keptCells.has(formula.cell)) continue;
         const address = { sheet: sheetId, row: formula.row - 1, col: formula.column - 1 };
         const isArray = engine.getCellType(address) === CellType.ARRAYFORMULA;
@@ -361,10 +384,22 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
         }
         let range = isArray ? arrayRange(engine, address) : { start: address, end: address };
         let values = engine.getRangeValues(range);
+        // The result proper; beyond it, in a legacy array's range, only the cells the file had are
+        // written, so memory follows the content rather than the declared range.
+        let resultRows = values.length;
+        let resultColumns = values[0].length;
+        const legacy = formula.legacyBox === undefined ? undefined : legacyArrayRange(input, formula, formula.legacyBox, range);
+        const ownCells = new Set(legacy === undefined ? [] : input.spillCellsOf.get(formula) ?? []);
+        if (legacy !== undefined) {
+          values = legacyArrayFill(values, legacy.end.row - legacy.start.row + 1, legacy.end.col - legacy.start.col + 1);
+          range = legacy;
+        }
         if (coversMergedCells(input.worksheet, range)) {
           // Excel does not spill into merged cells; the engine does not know about merges.
           range = { start: address, end: address };
           values = [[mergedCellsSpillError()]];
+          resultRows = 1;
+          resultColumns = 1;
         }
         const rows = values.length;
         const columns = values[0].length;
@@ -378,6 +413,7 @@ export function recalculateWorkbook(workbook: ExcelJS.Workbook): RecalcSummary {
           for (let c = 0; c < columns; c++) {
             const row = range.start.row + r + 1;
             const column = range.start.col + c + 1;
+            if ((r >= resultRows || c >= resultColumns) && !ownCells.has(input.worksheet.findCell(row, column) as ExcelJS.Cell)) continue;
             if (r > 0 || c > 0) input.worksheet.getCell(row, column).value = fileValue(values[r][c]) as ExcelJS.CellValue;
             note(input.name, row, column, values[r][c]);
           }
@@ -429,7 +465,7 @@ function buildWorkbookEngine(inputs: readonly SheetInput[], names: { name: strin
     }
     kept.set(formula, { sheet: input.name, formula, reason });
   };
-  let overflowHandled = false;
+  let overflowRounds = 0;
   // Each round keeps the cells that arise as the engine's shortcomings; their dependents then
   // calculate from the cached values. A kept cell fed by another kept cell shows up a round later.
   for (let round = 0; ; round++) {
@@ -442,10 +478,10 @@ function buildWorkbookEngine(inputs: readonly SheetInput[], names: { name: strin
         const sheet = inputs[e.address.sheet]?.name ?? '?';
         throw new WorkbookReadError(`too large to recalculate (sheet "${sheet}": ${e.message})`);
       }
-      if (!(e instanceof RangeError) || overflowHandled) throw e;
-      overflowHandled = true;
+      if (!(e instanceof RangeError) || overflowRounds >= STACK_RESERVES.length) throw e;
+      const reserve = STACK_RESERVES[overflowRounds++];
       const before = kept.size;
-      keepOverflowingFormulas(inputs, keep);
+      keepOverflowingFormulas(inputs, keep, reserve);
       if (kept.size === before) throw e;
       continue;
     }
@@ -475,10 +511,27 @@ function cachedIsSameError(cell: ExcelJS.Cell, value: CellValue): boolean {
 }
 
 /**
+ * Stack frames used up before each probe, one entry per round of keeping. How
+ * deep a formula may go before the stack runs out is not fixed: it depends on
+ * the frames below it (the whole build, in the engine; one formula, in the
+ * probe) and on whether V8 has optimised the parser's functions yet (an
+ * optimised frame is smaller). A formula near the limit can thus overflow the
+ * build and pass a bare probe, so each probe runs with part of the stack
+ * already used, more each round (a default Node stack holds roughly 10,000
+ * small frames): what passes it has room to spare.
+ */
+const STACK_RESERVES = [2_000, 4_000, 6_000];
+
+/** Runs `run` with `frames` small frames of stack used below it. */
+function withStackUsed<T>(frames: number, run: () => T): T {
+  return frames <= 0 ? run() : withStackUsed(frames - 1, run);
+}
+
+/**
  * Finds the formulas that overflow the engine's stack on their own (parsing
  * or evaluating them over empty sheets of the same names) and keeps them.
  */
-function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: SheetInput, formula: FormulaCell, reason: string) => void): void {
+function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: SheetInput, formula: FormulaCell, reason: string) => void, reserve: number): void {
   const probe = createEngine(Object.fromEntries(inputs.map((input) => [input.name, []])));
   try {
     for (const [index, input] of inputs.entries()) {
@@ -486,7 +539,7 @@ function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: Sh
         const text = input.content[formula.row - 1]?.[formula.column - 1];
         if (typeof text !== 'string' || !text.startsWith('=')) continue;
         try {
-          probe.calculateFormula(text, index);
+          withStackUsed(reserve, () => probe.calculateFormula(text, index));
         } catch (inner) {
           if (inner instanceof RangeError) keep(input, formula, 'the formula is too long or too deeply nested for the headless engine');
         }
@@ -495,6 +548,62 @@ function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: Sh
   } finally {
     probe.destroy();
   }
+}
+
+/**
+ * The range a legacy array formula's result is written over: its declared
+ * range, grown to the result when that is larger (a spill, as everything is
+ * written). Undefined when the spill was blocked (#SPILL!, written on the
+ * anchor alone as before) or when a cell of the declared range beyond the
+ * result is not the array's (a formula or a merge another writer put there):
+ * then that cell is left alone and the array is written over its result only.
+ */
+function legacyArrayRange(input: SheetInput, formula: FormulaCell, box: Box, result: SimpleCellRange): SimpleCellRange | undefined {
+  const top = formula.row - 1;
+  const left = formula.column - 1;
+  if (result.start.row !== top || result.start.col !== left) return undefined;
+  const bottom = Math.max(result.end.row, box.bottom - 1);
+  const right = Math.max(result.end.col, box.right - 1);
+  if (bottom === result.end.row && right === result.end.col) return undefined;
+  const own = new Set(input.spillCellsOf.get(formula) ?? []);
+  for (let r = top; r <= bottom; r++) {
+    for (let c = left; c <= right; c++) {
+      if (r <= result.end.row && c <= result.end.col) continue;
+      const cell = input.worksheet.findCell(r + 1, c + 1);
+      if (cell !== undefined && !own.has(cell) && cell.type !== ExcelJS.ValueType.Null) return undefined;
+    }
+  }
+  return { start: result.start, end: { sheet: result.start.sheet, row: bottom, col: right } };
+}
+
+/**
+ * A legacy array formula's result laid over its declared range as Excel lays
+ * it (ECMA-376 Part 1, §18.17.2 "Single- and Multi-Cell Formulas", read at
+ * webapp.docx4java.org/OnlineDemo/ecma376/SpreadsheetML/file_2.html): a single
+ * value fills every cell; a one-column result is cloned into the excess
+ * columns, and (the same rule for rows, by symmetry: the text read was cut
+ * off there) a one-row result into the excess rows. Every other excess cell
+ * shows #N/A, as Excel shows it ("CSE array formulas will truncate the return
+ * area if it's too small, or return #N/A's if too large", Microsoft,
+ * "Dynamic array formulas vs. legacy CSE array formulas", read as reproduced
+ * at slideshare.net/slideshow/new-dynamic-array-functions-excel-tutorial/250807025).
+ *
+ * @param values - the result, rows × columns
+ * @param rows - rows of the range written (≥ the result's)
+ * @param columns - columns of the range written (≥ the result's)
+ * @example legacyArrayFill([[1], [2]], 3, 2) // [[1, 1], [2, 2], [#N/A, #N/A]]
+ */
+export function legacyArrayFill(values: readonly (readonly CellValue[])[], rows: number, columns: number): CellValue[][] {
+  const resultRows = values.length;
+  const resultColumns = values[0]?.length ?? 0;
+  const notAvailable = new DetailedCellError(new CellError(ErrorType.NA, 'the legacy array formula’s range is larger than its result'), fileErrorText(ErrorType.NA));
+  return Array.from({ length: rows }, (_, r) =>
+    Array.from({ length: columns }, (_, c) => {
+      const sourceRow = resultRows === 1 ? 0 : r;
+      const sourceColumn = resultColumns === 1 ? 0 : c;
+      return sourceRow < resultRows && sourceColumn < resultColumns ? values[sourceRow][sourceColumn] : notAvailable;
+    }),
+  );
 }
 
 /** Whether a spill over more than one cell touches a merged cell (its anchor included). */
@@ -527,6 +636,7 @@ function formulaValue(stored: string, result: CellValue): ExcelJS.CellFormulaVal
  * @param summary - what that recalculation returned (for the array anchors)
  */
 export async function workbookBytes(workbook: ExcelJS.Workbook, summary: RecalcSummary): Promise<Buffer> {
+  lastColumnValidationsAsRanges(workbook);
   const written = Buffer.from(await workbook.xlsx.writeBuffer());
   const anchors = new Map<string, string[]>();
   for (const placement of summary.arrays) {

@@ -12,7 +12,8 @@ import { findFunction } from '../../src/catalog';
 import { evaluate } from '../../src/catalog/broadcast';
 import type { ArgumentInput } from '../../src/catalog';
 import { engineFormula } from '../../src/engine/formulaText';
-import { WorkbookReadError, loadWorkbook, readWorkbookFile, recalculateWorkbook, workbookBytes, type RecalcSummary } from '../../src/engine/xlsx';
+import { markDynamicArrays } from '../../src/engine/dynamicArrays';
+import { WorkbookReadError, legacyArrayFill, loadWorkbook, readWorkbookFile, recalculateWorkbook, workbookBytes, type RecalcSummary } from '../../src/engine/xlsx';
 import { catalogGrid } from './support/compare';
 import { addressesOf, openPackage, partText, sheetCells, type XmlCell } from './support/sheetXml';
 
@@ -29,11 +30,13 @@ function direct(name: string, args: ArgumentInput[]) {
 }
 
 /** Writes a workbook with exceljs, reads it back from disk, recalculates it, and returns the written bytes. */
-async function roundTrip(fill: (workbook: ExcelJS.Workbook) => void): Promise<{ bytes: Buffer; summary: RecalcSummary }> {
+async function roundTrip(fill: (workbook: ExcelJS.Workbook) => void, dynamicAnchors?: ReadonlyMap<string, readonly string[]>): Promise<{ bytes: Buffer; summary: RecalcSummary }> {
   const source = new ExcelJS.Workbook();
   fill(source);
   const input = join(folder, 'input.xlsx');
   await source.xlsx.writeFile(input);
+  // An input whose array formulas are spills, as Excel 365 and Driftcell write them.
+  if (dynamicAnchors !== undefined) writeFileSync(input, await markDynamicArrays(Buffer.from(await source.xlsx.writeBuffer()), dynamicAnchors));
   const workbook = await readWorkbookFile(input);
   const summary = recalculateWorkbook(workbook);
   const bytes = await workbookBytes(workbook, summary);
@@ -169,7 +172,7 @@ describe('a spilled result', () => {
       // As a file from an earlier calculation has it: the anchor's range and stale values below.
       s.getCell('B1').value = { formula: 'DRIFT.SHEETRES(A1:A2,1)', shareType: 'array', ref: 'B1:B4', result: 1 } as ExcelJS.CellFormulaValue;
       for (const address of ['B2', 'B3', 'B4']) s.getCell(address).value = 99;
-    });
+    }, new Map([['S', ['B1']]]));
     const cells = await sheetCells(await openPackage(bytes), 'S');
     const expected = direct('SHEETRES', [[[5], [7]], 1]);
     expect(cells.get('B1')?.formula?.attributes.ref).toBe('B1:B2');
@@ -295,5 +298,67 @@ describe('errors stored in files', () => {
     });
     const cells = await sheetCells(await openPackage(bytes), 'S');
     expect(addressesOf('A1:C1').map((a) => cached(cells.get(a)))).toEqual(codesOnly(direct('SHEETRES', [[[1, 2, 3]], [[10, 20]]]))[0]);
+  });
+});
+
+describe('a legacy array formula (entered over a fixed range, no dynamic-array mark)', () => {
+  const na = { code: '#N/A' };
+  it('lays a result over its range as ECMA-376 §18.17.2 and Excel do: broadcast one value, row or column, #N/A elsewhere', () => {
+    // The rules are ECMA-376 Part 1 §18.17.2 (single value fills every cell; an N×1 result's excess
+    // columns clone its first column) and Microsoft's "return #N/A's if too large".
+    const codes = (grid: ReturnType<typeof legacyArrayFill>) => grid.map((row) => row.map((v) => (typeof v === 'object' && v !== null ? { code: (v as { value: string }).value } : v)));
+    expect(codes(legacyArrayFill([[7]], 2, 2))).toEqual([[7, 7], [7, 7]]);
+    expect(codes(legacyArrayFill([[1], [2]], 3, 2))).toEqual([[1, 1], [2, 2], [na, na]]);
+    expect(codes(legacyArrayFill([[1, 2]], 2, 3))).toEqual([[1, 2, na], [1, 2, na]]);
+    expect(codes(legacyArrayFill([[1, 2], [3, 4]], 3, 3))).toEqual([[1, 2, na], [3, 4, na], [na, na, na]]);
+  });
+
+  it('keeps its whole declared range when the result is smaller: nothing in it is deleted', async () => {
+    const { bytes, summary } = await roundTrip((wb) => {
+      const s = wb.addWorksheet('S');
+      s.getCell('A1').value = 5;
+      s.getCell('A2').value = 7;
+      s.getCell('B1').value = { formula: 'DRIFT.SHEETRES(A1:A2,1)', shareType: 'array', ref: 'B1:B4', result: 1 } as ExcelJS.CellFormulaValue;
+      s.getCell('B2').value = 99;
+      // Text another writer left inside the array's range: the range is the array's, so it gets the array's value.
+      s.getCell('B3').value = 'user note';
+      s.getCell('B4').value = 99;
+    });
+    const cells = await sheetCells(await openPackage(bytes), 'S');
+    const expected = direct('SHEETRES', [[[5], [7]], 1]);
+    expect(cells.get('B1')?.formula?.attributes).toEqual({ t: 'array', ref: 'B1:B4' });
+    expect(cached(cells.get('B1'))).toBe(expected[0][0]);
+    expect(cached(cells.get('B2'))).toBe(expected[1][0]);
+    expect(cached(cells.get('B3'))).toBe('#N/A');
+    expect(cached(cells.get('B4'))).toBe('#N/A');
+    expect(summary.arrays).toEqual([{ sheet: 'S', anchor: 'B1', ref: 'B1:B4', rows: 4, columns: 1 }]);
+    expect(summary.problems.map((p) => `${p.address} ${p.code}`)).toEqual(['B3 #N/A', 'B4 #N/A']);
+  });
+
+  it('clones a one-column result into the extra columns of its range', async () => {
+    const { bytes } = await roundTrip((wb) => {
+      const s = wb.addWorksheet('S');
+      s.getCell('A1').value = 5;
+      s.getCell('A2').value = 7;
+      s.getCell('B1').value = { formula: 'A1:A2*2', shareType: 'array', ref: 'B1:C2', result: 10 } as ExcelJS.CellFormulaValue;
+      for (const address of ['B2', 'C1', 'C2']) s.getCell(address).value = 0;
+    });
+    const cells = await sheetCells(await openPackage(bytes), 'S');
+    expect(cells.get('B1')?.formula?.attributes.ref).toBe('B1:C2');
+    expect(['B1', 'C1', 'B2', 'C2'].map((a) => cached(cells.get(a)))).toEqual([10, 10, 14, 14]);
+  });
+
+  it('leaves a formula another writer put inside its range alone, writing the array over its result only', async () => {
+    const { bytes } = await roundTrip((wb) => {
+      const s = wb.addWorksheet('S');
+      s.getCell('A1').value = 5;
+      s.getCell('A2').value = 7;
+      s.getCell('B1').value = { formula: 'A1:A2*2', shareType: 'array', ref: 'B1:B3', result: 10 } as ExcelJS.CellFormulaValue;
+      s.getCell('B3').value = { formula: 'A1+1', result: 6 } as ExcelJS.CellFormulaValue;
+    });
+    const cells = await sheetCells(await openPackage(bytes), 'S');
+    expect(cells.get('B1')?.formula?.attributes.ref).toBe('B1:B2');
+    expect(cells.get('B3')?.formula?.text).toBe('A1+1');
+    expect(cached(cells.get('B3'))).toBe(6);
   });
 });
