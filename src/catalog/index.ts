@@ -38,6 +38,7 @@ import { HALLMOBILITY } from './functions/hallmobility';
 import { RESISTORLENGTH } from './functions/resistorlength';
 import { RESISTORTEMP } from './functions/resistortemp';
 import { DOPINGRANGE } from './functions/dopingrange';
+import { DOPINGSPREAD, RESISTIVITYSPREAD } from './functions/modelspread';
 import { RADIALVARIATION } from './functions/radialvariation';
 import type { FunctionSpec } from './types';
 
@@ -77,6 +78,8 @@ export const CATALOG: readonly FunctionSpec[] = [
   RESISTORLENGTH,
   RESISTORTEMP,
   DOPINGRANGE,
+  RESISTIVITYSPREAD,
+  DOPINGSPREAD,
   RADIALVARIATION,
   MODELS,
 ] as readonly FunctionSpec[];

@@ -92,6 +92,7 @@ export { resistivityTemperatureCoefficient, temperatureDerivative, type Temperat
 export { dopingForResistivity, dopingSolutions, AmbiguousDopingError, type DensityWindow, type DensityWindowNames, type DopingSolution } from './inverse';
 export { f723Resistivity, f723Density, F723_VALIDITY, type F723Species } from './astmF723';
 export { F723_ANCHOR_TEMPERATURE } from './f723Anchored';
+export { resistivitySpread, dopingSpread, type ModelSpread } from './modelSpread';
 export { resistivityAtTemperature, conversionModel, CERTIFICATE_TEMPERATURE } from './temperatureConversion';
 
 // Geometry of uniform conductors.
