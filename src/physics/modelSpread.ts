@@ -19,7 +19,7 @@ import type { Sample } from './sample';
 import { PhysicsDomainError } from './errors';
 import { ASTM_F723_CODE, resistivity, resistivityModelCodes } from './transport';
 import { dopingForResistivity, type DensityWindow, type DensityWindowNames } from './inverse';
-import { F723_SPECIES, F723_TEMPERATURE_RANGE, F723_VALIDITY, type F723Species } from './astmF723';
+import { F723_VALIDITY, f723SpeciesFor, type F723Species } from './astmF723';
 import { SILICON } from './materials';
 
 /** The lowest and highest value over the models, and which models gave them. */
@@ -31,10 +31,15 @@ export interface ModelSpread {
   readonly models: readonly string[];
 }
 
+/** The F723 species of a sample where the standard applies (its own rule, f723SpeciesFor), else undefined. */
 function f723Species(sample: Omit<Sample, 'density'>): F723Species | undefined {
-  if (sample.material.code !== SILICON.code || sample.counterDensity !== 0) return undefined;
-  if (!(sample.temperature >= F723_TEMPERATURE_RANGE.min && sample.temperature <= F723_TEMPERATURE_RANGE.max)) return undefined;
-  return F723_SPECIES.find((s) => s === sample.dopant.symbol);
+  if (sample.material.code !== SILICON.code) return undefined;
+  try {
+    return f723SpeciesFor(sample.dopant.symbol, sample.counterDensity, sample.temperature);
+  } catch (error) {
+    if (error instanceof PhysicsDomainError) return undefined;
+    throw error;
+  }
 }
 
 function spreadOf(values: readonly { model: string; value: number }[]): ModelSpread {
