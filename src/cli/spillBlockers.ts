@@ -5,7 +5,7 @@
  */
 import type ExcelJS from 'exceljs';
 import { cellName } from '../engine/a1';
-import { createEngine } from '../engine/engine';
+import { createEngine, predictedResultSize } from '../engine/engine';
 import { engineFormula } from '../engine/formulaText';
 import type { CellProblem } from '../engine/xlsx';
 
@@ -24,15 +24,13 @@ function formulaText(cell: ExcelJS.Cell): string | undefined {
 }
 
 /**
- * The size of a formula's result in rows × columns, from the formula alone on
- * empty sheets of the same names (sizes of ranges and array constants do not
- * depend on the cells' values), or undefined when it cannot be told.
+ * The size of a formula's result in rows × columns, as the engine predicts it
+ * from the formula alone (sizes of ranges and array constants do not depend on
+ * the cells' values), or undefined when it cannot be told. Nothing is computed.
  */
 function resultSize(engine: ReturnType<typeof createEngine>, text: string, sheetId: number): { rows: number; columns: number } | undefined {
   try {
-    const value = engine.calculateFormula(engineFormula(text), sheetId);
-    if (!Array.isArray(value)) return undefined;
-    return { rows: value.length, columns: value[0]?.length ?? 0 };
+    return predictedResultSize(engine, engineFormula(text), sheetId);
   } catch {
     return undefined;
   }

@@ -88,18 +88,28 @@ function limitResultSizes(): void {
 }
 
 /**
- * calculateFormula does not predict a result's size before computing it, so
- * `calc` asks the (wrapped) predictor first: ResultTooLarge instead of
- * exhausting memory on SEQUENCE(1048576,1)*SEQUENCE(1,16384).
+ * The size HyperFormula's predictor gives a formula's result, from the
+ * formula alone (ranges, array constants and literal sizes; not cell values),
+ * without computing it. Throws ResultTooLarge past MAX_RESULT_CELLS (the
+ * predictor is wrapped by limitResultSizes). calculateFormula does not predict
+ * sizes itself, so `calc` asks this first instead of exhausting memory on
+ * SEQUENCE(1048576,1)*SEQUENCE(1,16384).
+ *
+ * @param engine - an engine from createEngine
+ * @param text - the formula, `=…`
+ * @param sheetId - the sheet it is read on
+ * @returns rows × columns, or undefined when the text is not a formula
  */
-function checkFormulaResultSize(engine: HyperFormula, text: string): void {
+export function predictedResultSize(engine: HyperFormula, text: string, sheetId = 0): { rows: number; columns: number } | undefined {
   // Internal like limitResultSizes: extractTemporaryFormula is how calculateFormula itself parses.
   const internals = engine as unknown as {
     extractTemporaryFormula(formula: string, sheetId: number): { ast?: Parameters<ArraySizePredictorClass['checkArraySize']>[0]; address: SimpleCellAddress };
     _crudOperations: { operations: { arraySizePredictor: ArraySizePredictorClass } };
   };
-  const { ast, address } = internals.extractTemporaryFormula(text, 0);
-  if (ast !== undefined) internals._crudOperations.operations.arraySizePredictor.checkArraySize(ast, address);
+  const { ast, address } = internals.extractTemporaryFormula(text, sheetId);
+  if (ast === undefined) return undefined;
+  const size = internals._crudOperations.operations.arraySizePredictor.checkArraySize(ast, address);
+  return size.isRef ? undefined : { rows: size.height, columns: size.width };
 }
 
 /**
@@ -214,7 +224,7 @@ export function evaluateFormula(formula: string): FormulaResult {
             '(a reference would read as a blank cell, 0). Write the value in its place, or put the formula in a workbook and run driftcell recalc',
         };
       }
-      checkFormulaResultSize(engine, text);
+      predictedResultSize(engine, text);
       value = engine.calculateFormula(text, 0);
     } catch (e) {
       if (e instanceof ResultTooLarge) return { kind: 'error', code: '#VALUE!', message: e.message.replace(/^the formula in \S+ gives/, 'the formula gives') };
