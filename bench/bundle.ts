@@ -10,7 +10,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
-import { startServer } from '../src/excel/devServer';
+import { startServer } from '../dev/devServer';
 import { CHROMIUM_ARGS, findChromium } from '../tests/support/chromium';
 import { median } from './lib/timing';
 import { figure, show, target, type Section } from './lib/results';
