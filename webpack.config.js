@@ -10,6 +10,8 @@
  *
  * The pane's test harness (engine-backed, HyperFormula inside) has its own
  * config, tests/taskpane/harness/webpack.config.js, and never lands in dist/addin.
+ * What the two share (TypeScript rule, target, stylesheets and icons) is in
+ * webpack.base.js.
  */
 'use strict';
 const fs = require('fs');
@@ -17,8 +19,7 @@ const path = require('path');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
 const { Compilation, sources } = require('webpack');
-
-const ROOT = __dirname;
+const { ROOT, baseConfig, paneStaticFiles } = require('./webpack.base');
 const OUTPUT = path.join(ROOT, 'dist', 'addin');
 const COMPILED = path.join(ROOT, 'dist', 'node');
 
@@ -79,8 +80,7 @@ module.exports = (env, argv) => {
   // Where dist/addin will be served: --env addinUrl=… or DRIFTCELL_ADDIN_URL, else https://localhost:3000.
   const baseUrl = deployment.addinBaseUrl((env && env[deployment.ADDIN_URL_ENV_KEY]) || process.env[deployment.ADDIN_URL_VARIABLE]);
   return {
-    mode: production ? 'production' : 'development',
-    context: ROOT,
+    ...baseConfig({ mode: production ? 'production' : 'development', sourceMap: !production }),
     entry: {
       // functions.js stays complete on its own (the manifest's Script); the pane reuses its modules
       // (catalog, physics) instead of carrying a second copy with second caches into the shared runtime.
@@ -95,27 +95,9 @@ module.exports = (env, argv) => {
       // Always write, so file times show when the build last ran (the tests compare them with src/).
       compareBeforeEmit: false,
     },
-    target: ['web', 'es2017'],
     // No source maps in the production add-in: it is what users' Excel loads, and maps would publish
     // the whole source tree next to it. Development builds keep them for debugging.
     devtool: production ? false : 'source-map',
-    resolve: { extensions: ['.ts', '.js'] },
-    module: {
-      rules: [
-        {
-          test: /\.ts$/,
-          exclude: /node_modules/,
-          loader: 'ts-loader',
-          options: {
-            configFile: path.join(ROOT, 'tsconfig.json'),
-            // tsc type-checks the whole project before webpack runs.
-            transpileOnly: true,
-            // ES2017 for older Office web views; ES modules so webpack can drop unused code.
-            compilerOptions: { target: 'ES2017', module: 'ES2020', sourceMap: !production },
-          },
-        },
-      ],
-    },
     // JavaScript only: the HTML and CSS stay as written (readable, and exactly what the tests check).
     optimization: { minimize: production, minimizeOptions: { html: false, css: false } },
     performance: { hints: production ? 'warning' : false },
@@ -130,14 +112,7 @@ module.exports = (env, argv) => {
         scriptLoading: 'blocking',
         minify: false,
       }),
-      new CopyWebpackPlugin({
-        patterns: [
-          { from: 'assets/*.png', to: 'assets/[name][ext]' },
-          { from: 'src/taskpane/taskpane.css', to: 'taskpane.css' },
-          // The tools' own stylesheet (certificate check, function reference).
-          { from: 'src/taskpane/tools.css', to: 'tools.css' },
-        ],
-      }),
+      new CopyWebpackPlugin({ patterns: paneStaticFiles() }),
       new CatalogFilesPlugin(baseUrl),
     ],
   };

@@ -1,6 +1,7 @@
 /**
  * Benchmark 6: size of the production functions bundle (minified by webpack,
- * gzip level 9 through zlib) and the time Debian's Chromium takes to run it
+ * gzip level 9 through zlib) and the time Chromium (tests/support/chromium.ts:
+ * DRIFTCELL_CHROMIUM, then the system locations) takes to run it
  * and bind every function to a stand-in CustomFunctions runtime (the same
  * stand-in idea as tests/excel/bundle.browser.test.ts). Target: ≤ 150 kB gzipped.
  */
@@ -9,11 +10,11 @@ import os from 'node:os';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
-import { startServer } from '../src/excel/devServer';
+import { startServer } from '../dev/devServer';
+import { CHROMIUM_ARGS, findChromium } from '../tests/support/chromium';
 import { median } from './lib/timing';
 import { figure, show, target, type Section } from './lib/results';
 
-const CHROMIUM = '/usr/bin/chromium';
 export const BUNDLE_MAX_GZIP_KB = 150;
 const HOST_PAGE = '/__bench__/host.html';
 /** Marks the time right before and after the bundle runs; the bundle is fetched first (it is a blocking script). */
@@ -45,7 +46,7 @@ export async function runBundle(projectRoot: string): Promise<Section> {
   const addin = path.join(projectRoot, 'dist', 'addin');
   const bundlePath = path.join(addin, 'functions.js');
   if (!existsSync(bundlePath)) throw new Error(`${bundlePath} is missing: run npm run build first`);
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium; the bench never downloads a browser`);
+  const chromiumPath = findChromium();
   const bytes = readFileSync(bundlePath);
   const gzipKB = gzipSync(bytes, { level: 9 }).length / 1000;
   const metadata = JSON.parse(readFileSync(path.join(addin, 'functions.json'), 'utf8')) as { functions: unknown[] };
@@ -69,9 +70,9 @@ export async function runBundle(projectRoot: string): Promise<Section> {
   }, { port: 0, host: '127.0.0.1' });
   const profile = mkdtempSync(path.join(os.tmpdir(), 'driftcell-bench-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
+    executablePath: chromiumPath,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+    args: CHROMIUM_ARGS,
   });
   const runMs: number[] = [];
   const bindMs: number[] = [];
@@ -103,7 +104,7 @@ export async function runBundle(projectRoot: string): Promise<Section> {
   const runMedian = median(runMs);
   return {
     title: 'Functions bundle',
-    description: `dist/addin/functions.js as built by webpack (production, minified), gzip level 9; run and bind time in headless ${CHROMIUM}, median of ${LOADS} loads after one warm-up (from the end of the download to the end of the script).`,
+    description: `dist/addin/functions.js as built by webpack (production, minified), gzip level 9; run and bind time in headless ${chromiumPath}, median of ${LOADS} loads after one warm-up (from the end of the download to the end of the script).`,
     figures: {
       bundle_bytes: figure(bytes.length / 1000, 'kB'),
       bundle_gzip_kb: figure(gzipKB, 'kB'),

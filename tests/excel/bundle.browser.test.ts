@@ -11,7 +11,7 @@
  * Needs `npm run build` first (npm test runs it). Never downloads a browser.
  */
 import type { Page } from 'playwright-core';
-import { startServer, staticRequestHandler, type RunningServer } from '../../src/excel/devServer';
+import { startServer, staticRequestHandler, type RunningServer } from '../../dev/devServer';
 import { ADDIN_DIR, requireAddinBuild } from './support/build';
 import { launchLocalBrowser, type LocalBrowser } from './support/localBrowser';
 

@@ -26,7 +26,7 @@ import type { Page } from 'playwright-core';
 import { CATALOG, evaluate } from '../../src/catalog';
 import type { FunctionSpec } from '../../src/catalog/types';
 import { isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog/values';
-import { startServer, staticRequestHandler, type RunningServer } from '../../src/excel/devServer';
+import { startServer, staticRequestHandler, type RunningServer } from '../../dev/devServer';
 import { ADDIN_DIR, PROJECT_ROOT, requireAddinBuild } from './support/build';
 import { ALLOW_ERRORS_FLAG, installExcelHostSide, sendInvocations, type InvocationResult } from './support/excelHostSide';
 import { launchLocalBrowser, type LocalBrowser } from './support/localBrowser';

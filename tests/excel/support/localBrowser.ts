@@ -1,5 +1,6 @@
 /**
- * Debian's Chromium, launched for tests that must see every request: a fresh
+ * Chromium (tests/support/chromium.ts finds it: DRIFTCELL_CHROMIUM, then the
+ * system locations, Debian's /usr/bin/chromium first), launched for tests that must see every request: a fresh
  * profile, the flags this machine's closed network needs, and a route that
  * lets through only the test's own localhost server and records (and blocks)
  * everything else. Never downloads a browser.
@@ -8,10 +9,12 @@ import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'fs';
 import os from 'os';
 import path from 'path';
 import { chromium, type BrowserContext } from 'playwright-core';
+import { CHROMIUM_ARGS, findChromium } from '../../support/chromium';
 
+export { CHROMIUM_ARGS, findChromium };
+
+/** Debian's Chromium, the first system location tried on Linux; the browser launched is findChromium()'s. */
 export const CHROMIUM = '/usr/bin/chromium';
-
-export const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
 
 export interface LocalBrowser {
   readonly context: BrowserContext;
@@ -52,9 +55,9 @@ function localFile(url: string, copies: readonly LocalCopy[]): string | undefine
 
 /** Launches Chromium allowing requests to `serverUrl` only (and answering `localCopies` from disk). */
 export async function launchLocalBrowser(serverUrl: string, localCopies: readonly LocalCopy[] = []): Promise<LocalBrowser> {
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium (sudo apt-get install chromium); this test never downloads a browser`);
+  const executablePath = findChromium();
   const profile = mkdtempSync(path.join(os.tmpdir(), 'driftcell-chromium-'));
-  const context = await chromium.launchPersistentContext(profile, { executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS });
+  const context = await chromium.launchPersistentContext(profile, { executablePath, headless: true, args: CHROMIUM_ARGS });
   const requested: string[] = [];
   const blocked: string[] = [];
   const servedLocally: string[] = [];

@@ -4,14 +4,15 @@
  * headless engine, HyperFormula included), harness.html (the pane page without
  * Office.js), the stylesheets and
  * icons. Run by tests/taskpane/support/harness.ts when the build is stale.
+ * Shares the TypeScript rule, target, stylesheets and icons with the add-in's
+ * build through webpack.base.js.
  */
 'use strict';
 const fs = require('fs');
 const path = require('path');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
-
-const ROOT = path.resolve(__dirname, '..', '..', '..');
+const { ROOT, baseConfig, paneStaticFiles } = require('../../../webpack.base');
 
 /** Office.js as the pane page loads it, and its CDN in the page's policy. */
 const OFFICE_SCRIPT = /<!--[^>]*Office\.js[^>]*-->\s*<script src="https:\/\/appsforoffice\.microsoft\.com[^"]*"><\/script>\s*/;
@@ -35,33 +36,14 @@ function harnessPage() {
 }
 
 module.exports = (env, argv) => ({
-  mode: argv.mode === 'production' ? 'production' : 'development',
-  context: ROOT,
+  ...baseConfig({ mode: argv.mode === 'production' ? 'production' : 'development', sourceMap: true }),
   entry: { harness: './src/taskpane/harness/entry.ts' },
   output: { path: path.join(ROOT, 'dist', 'harness'), filename: '[name].js', clean: true },
-  target: ['web', 'es2017'],
   // No eval-based source maps: the page's policy allows no eval.
   devtool: 'source-map',
-  resolve: { extensions: ['.ts', '.js'] },
-  module: {
-    rules: [
-      {
-        test: /\.ts$/,
-        exclude: /node_modules/,
-        loader: 'ts-loader',
-        options: { configFile: path.join(ROOT, 'tsconfig.json'), transpileOnly: true, compilerOptions: { target: 'ES2017', module: 'ES2020', sourceMap: true } },
-      },
-    ],
-  },
   performance: { hints: false },
   plugins: [
     new HtmlWebpackPlugin({ filename: 'harness.html', templateContent: harnessPage(), inject: 'body', scriptLoading: 'blocking', minify: false }),
-    new CopyWebpackPlugin({
-      patterns: [
-        { from: 'assets/*.png', to: 'assets/[name][ext]' },
-        { from: 'src/taskpane/taskpane.css', to: 'taskpane.css' },
-        { from: 'src/taskpane/tools.css', to: 'tools.css' },
-      ],
-    }),
+    new CopyWebpackPlugin({ patterns: paneStaticFiles() }),
   ],
 });

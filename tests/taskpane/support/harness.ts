@@ -17,7 +17,7 @@ import { execFileSync } from 'child_process';
 import { existsSync, mkdirSync, readdirSync, statSync } from 'fs';
 import path from 'path';
 import type { Page } from 'playwright-core';
-import { startServer, staticRequestHandler, type RunningServer } from '../../../src/excel/devServer';
+import { startServer, staticRequestHandler, type RunningServer } from '../../../dev/devServer';
 import type { BlockContents, CellBlock, CellInput, ChartPlan, HighlightPlan, StylePlan } from '../../../src/taskpane/port';
 import { PROJECT_ROOT } from '../../excel/support/build';
 import { launchLocalBrowser, type LocalBrowser } from '../../excel/support/localBrowser';

@@ -9,8 +9,8 @@ import https from 'https';
 import os from 'os';
 import path from 'path';
 import { spawnSync } from 'child_process';
-import { loadDevCertificate, whyUnusable } from '../../src/excel/devCerts';
-import { resolveInside, startStaticServer, type RunningServer } from '../../src/excel/devServer';
+import { loadDevCertificate, whyUnusable } from '../../dev/devCerts';
+import { resolveInside, startStaticServer, type RunningServer } from '../../dev/devServer';
 
 interface Reply {
   status: number;

@@ -2,7 +2,7 @@
 import { mkdtempSync, mkdirSync, rmSync, writeFileSync } from 'fs';
 import os from 'os';
 import path from 'path';
-import { hasExcelDesktop, main, missingBuildOutputs, projectPaths, sideloadInstructions } from '../../src/excel/start';
+import { hasExcelDesktop, main, missingBuildOutputs, projectPaths, sideloadInstructions } from '../../dev/start';
 
 describe('npm start', () => {
   it('sideloads only where Excel desktop exists', () => {

@@ -1,5 +1,7 @@
 /**
- * `npm start`: build the add-in if needed, then
+ * `npm start` (development tooling, outside the runtime folders: compiled by
+ * dev/tsconfig.json into dist/dev, never into dist/node or dist/addin): build
+ * the add-in if needed, then
  * - on Windows and macOS (where Excel desktop exists) sideload
  *   manifest/manifest.xml into Excel through office-addin-debugging, which
  *   runs this same program with --serve-only as its dev server. That tool is
@@ -15,7 +17,10 @@ import { existsSync } from 'fs';
 import path from 'path';
 import { loadDevCertificate, type DevCertificate } from './devCerts';
 import { startStaticServer, type RunningServer } from './devServer';
-import { ADDIN_ORIGIN, ADDIN_PORT } from './origin';
+import { ADDIN_ORIGIN, ADDIN_PORT } from '../src/excel/origin';
+
+/** The compiled `npm start` entry (dev/npmStart.ts through dev/tsconfig.json), relative to the project root. */
+export const START_ENTRY = path.join('dist', 'dev', 'dev', 'npmStart.js');
 
 export interface ProjectPaths {
   readonly root: string;
@@ -112,7 +117,7 @@ export function sideloadToolArgs(...toolArgs: string[]): string[] {
 }
 
 function sideloadIntoDesktop(paths: ProjectPaths): Promise<number> {
-  const serveCommand = `node "${path.join(paths.root, 'dist', 'node', 'cli', 'start.js')}" --serve-only`;
+  const serveCommand = `node "${path.join(paths.root, START_ENTRY)}" --serve-only`;
   const args = sideloadToolArgs('start', paths.manifest, 'desktop', '--app', 'excel', '--dev-server', serveCommand, '--dev-server-port', String(ADDIN_PORT));
   console.log(`Sideloading ${path.relative(paths.root, paths.manifest)} into Excel desktop …`);
   return new Promise((resolve) => {
