@@ -13,6 +13,7 @@ import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
 import type { ResultElement, ResultError } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
 import { MemoryPort, valueAt } from '../support/memoryPort';
+import { dopingOverModels } from './dopingOverModels';
 import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './fixture';
 
 const TOP = 1; // table at B2
@@ -57,22 +58,6 @@ function spread(...args: ArgumentInput[]): [number, number, number] {
   const row = evaluate(findFunction('DOPINGSPREAD')!, args)[0];
   if (!row.every((cell): cell is number => typeof cell === 'number')) throw new Error(`DOPINGSPREAD gave ${JSON.stringify(row)}`);
   return row as [number, number, number];
-}
-
-/**
- * Silicon's resistivity models, as DRIFT.DOPINGSPREAD's help lists them (src/catalog/functions/modelspread.ts):
- * f723-anchored, masetti, arora, caughey-thomas, klaassen, and astm-f723 where the standard applies. ASTM F723
- * gives doping from resistivity for boron and phosphorus only (arsenic forward only; DEVELOPERS.md), in
- * uncompensated silicon at 23 °C.
- */
-const SILICON_MODELS = ['f723-anchored', 'masetti', 'arora', 'caughey-thomas', 'klaassen'] as const;
-const F723_INVERSE_DOPANTS = new Set(['boron', 'phosphorus']);
-
-/** Lowest and highest DRIFT.DOPING over silicon's models at 23 °C, each model called by name. */
-function dopingOverModels(rho: number, code: string): { lowest: number; highest: number; models: string[] } {
-  const models = [...SILICON_MODELS, ...(F723_INVERSE_DOPANTS.has(code.toLowerCase()) ? ['astm-f723'] : [])];
-  const densities = models.map((model) => value('DOPING', rho, code, 296.15, model));
-  return { lowest: Math.min(...densities), highest: Math.max(...densities), models };
 }
 
 function rowOf(values: Map<string, ResultElement[][]>, sheetRow: number, from: number, count: number): ResultElement[] {
@@ -122,8 +107,8 @@ describe('model spread columns in the certificate check', () => {
       expectClose(rowOf(values, sheetRow, FIRST_NEW + AT_MIN, 3), atMin);
       // And, without DOPINGSPREAD: the lowest and highest of DRIFT.DOPING under each model by name.
       for (const [offset, rho] of [[AT_MAX, rhoMax], [AT_MIN, rhoMin]] as const) {
-        const { lowest, highest } = dopingOverModels(rho, code);
-        expectClose(rowOf(values, sheetRow, FIRST_NEW + offset, 3), [lowest, highest, highest / lowest - 1]);
+        const { lowest, highest, relative } = dopingOverModels(rho, code, 296.15);
+        expectClose(rowOf(values, sheetRow, FIRST_NEW + offset, 3), [lowest, highest, relative]);
       }
       // The default model (f723-anchored) is one of the models the spread covers, so its doping lies inside.
       for (const [end, range] of [[1, atMax], [2, atMin]] as const) {
