@@ -5,12 +5,14 @@
  * adds the check; the formulas written into the workbook are evaluated by the
  * engine in the page and compared with the catalog called directly here.
  * Once with the mouse, once with the keyboard alone; screenshots at 350 and
- * 500 px, light and dark.
+ * 500 px, light and dark. The model-spread option is checked against
+ * DRIFT.DOPING called once per resistivity model (certificate/dopingOverModels.ts).
  */
 import type { Locator, Page } from 'playwright-core';
 import { value } from '../catalog/support/call';
+import { dopingOverModels } from './certificate/dopingOverModels';
 import { CERTIFICATE_HEADERS, CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './certificate/fixture';
-import { announced, cells, highlightPlans, readBlock, saveScreenshot, selectBlock, startHarness, writeBlock, type PaneHarness } from './support/harness';
+import { announced, cells, highlightPlans, readBlock, saveScreenshot, selectBlock, startHarness, stylePlans, writeBlock, type PaneHarness } from './support/harness';
 import type { CellInput, CellShown } from '../../src/taskpane/port';
 
 const TOP = 1; // the table sits at B2
@@ -26,8 +28,7 @@ function codeOf(type: CellInput): string {
 }
 
 /** What the check must show for a fixture row, from the catalog called directly. */
-function expectedRow(row: readonly CellInput[], needed = NEEDED, readingColumns = [5, 6, 7, 8]) {
-  const code = codeOf(row[2]);
+function expectedRow(row: readonly CellInput[], needed = NEEDED, readingColumns = [5, 6, 7, 8], code = codeOf(row[2])) {
   const [rhoMin, rhoMax, thickness] = [row[3], row[4], row[9]] as number[];
   const readings = readingColumns.map((index) => row[index] as number);
   // The pane starts at 23 °C, the temperature certificates state resistivity at (view.ts).
@@ -232,6 +233,105 @@ describe('the Certificate check in Chromium', () => {
     await saveScreenshot(page, `certificate-measured-at-${width}-${scheme}`);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
+    await page.close();
+  });
+
+  it.each([
+    [350, 'light', 'mouse'],
+    [500, 'dark', 'mouse'],
+    [500, 'light', 'keyboard'],
+    [350, 'dark', 'keyboard'],
+  ] as const)('model spread (%i px, %s, %s): DOPINGSPREAD at ρmax and ρmin beside the doping window, equal to DOPING under each model, verdicts unchanged', async (width, scheme, input) => {
+    const { page, panel } = await openWithTable(harness, width, scheme);
+    const spreadSwitch = panel.getByLabel(/^Show the model spread/);
+    expect(await spreadSwitch.isChecked()).toBe(false);
+    // The pane says what the spread is before the user turns it on, tied to the box for screen readers.
+    expect(await spreadSwitch.getAttribute('aria-describedby')).toBe('certificate-model-spread-hint');
+    expect(await panel.locator('#certificate-model-spread-hint').textContent()).toMatch(
+      /^The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a measurement uncertainty[:.]/,
+    );
+    if (input === 'mouse') {
+      await page.getByRole('tab', { name: 'Certificate check' }).click();
+      await panel.getByRole('button', { name: 'Read selected table' }).click();
+      await panel.locator('#certificate-mapping:not([hidden])').waitFor();
+      await panel.getByLabel('Min', { exact: true }).fill('1e15');
+      await panel.getByLabel('Max', { exact: true }).fill('2e15');
+      await spreadSwitch.check();
+      await panel.getByRole('button', { name: 'Add check columns' }).click();
+    } else {
+      await page.getByRole('tab', { name: 'Sweep builder' }).focus();
+      await page.keyboard.press('ArrowRight');
+      await tabTo(page, 'certificate-read');
+      await page.keyboard.press('Enter');
+      await page.waitForFunction(() => document.activeElement?.id === 'certificate-role-0');
+      // Switch off: P becomes phosphorus (F723 applies to it) and N nitrogen, which silicon has no parameters for.
+      await tabTo(page, 'certificate-type-means-conductivity');
+      await page.keyboard.press('Space');
+      await tabTo(page, 'certificate-needed-min');
+      await page.keyboard.type('1e15');
+      await page.keyboard.press('Tab');
+      await page.keyboard.type('2e15');
+      await tabTo(page, 'certificate-model-spread');
+      await page.keyboard.press('Space');
+      expect(await spreadSwitch.isChecked()).toBe(true);
+      await tabTo(page, 'certificate-add');
+      await page.keyboard.press('Enter');
+    }
+    await page.waitForFunction(() => /new columns/.test(document.querySelector('#messages')?.textContent ?? ''));
+    // Parameters: title, needed min and max, temperature (AB5), material (AB6); the nitrogen row is warned about.
+    expect(await announced(page)).toBe(
+      `Checks 4 wafer rows: 14 new columns in Sheet1!L2:Y6, parameters in AA2:AB6 (change them there to re-check).${input === 'keyboard' ? ' 1 warning(s) below.' : ''}`,
+    );
+
+    const written = await readBlock(page, cells({ row: TOP, column: FIRST_NEW, rowCount: CERTIFICATE_TABLE.length, columnCount: 14 }));
+    const spreadHeaders = ['ρmax', 'ρmin'].flatMap((end) => [
+      `Doping at ${end} over models: lowest (cm⁻³)`,
+      `Doping at ${end} over models: highest (cm⁻³)`,
+      `Doping at ${end} over models: relative spread (highest/lowest − 1)`,
+    ]);
+    const dopantHeader = input === 'mouse' ? CHECK_HEADERS[0] : 'Dopant code (P/N read as elements)';
+    expect(written.values[0]).toEqual([dopantHeader, ...CHECK_HEADERS.slice(1, 4), ...spreadHeaders, ...CHECK_HEADERS.slice(4)]);
+    const verdicts: CellShown[] = [];
+    CERTIFICATE_ROWS.forEach((row, index) => {
+      const shown = written.values[index + 1];
+      const formulas = written.formulas[index + 1];
+      const sheetRow = TOP + 2 + index;
+      const code = input === 'mouse' ? codeOf(row[2]) : row[2] === 'P' ? 'phosphorus' : row[2] === 'N' ? 'nitrogen' : String(row[2]);
+      expect(shown[0]).toBe(code);
+      // One live formula per end, with the doping columns' ρ, dopant, temperature and material; the two cells right of it are its spill.
+      expect([formulas[4], formulas[7]]).toEqual([`=DRIFT.DOPINGSPREAD(F${sheetRow},L${sheetRow},$AB$5,$AB$6)`, `=DRIFT.DOPINGSPREAD(E${sheetRow},L${sheetRow},$AB$5,$AB$6)`]);
+      expect([formulas[5], formulas[6], formulas[8], formulas[9]]).toEqual([null, null, null, null]);
+      for (const [offset, dopingOffset, rho] of [[4, 1, row[4]], [7, 2, row[3]]] as const) {
+        const spilled = shown.slice(offset, offset + 3);
+        if (code === 'nitrogen') {
+          // As in the doping column beside it, every cell of the spill shows the error.
+          expect(shown[dopingOffset]).toEqual({ error: '#VALUE!' });
+          expect(spilled).toEqual([{ error: '#VALUE!' }, { error: '#VALUE!' }, { error: '#VALUE!' }]);
+          continue;
+        }
+        // The engine in the page against DRIFT.DOPING called here once per model.
+        const expected = dopingOverModels(rho as number, code, PANE_TEMPERATURE);
+        expect(ratio(spilled[0], expected.lowest)).toBeCloseTo(1, 12);
+        expect(ratio(spilled[1], expected.highest)).toBeCloseTo(1, 12);
+        expect(spilled[2]).toBeCloseTo(expected.relative, 12);
+        // The default model is one of them, so the doping column lies inside the spread.
+        expect(shown[dopingOffset] as number).toBeGreaterThanOrEqual(expected.lowest * (1 - 1e-12));
+        expect(shown[dopingOffset] as number).toBeLessThanOrEqual(expected.highest * (1 + 1e-12));
+      }
+      verdicts.push(shown[13]);
+      if (code === 'nitrogen') expect(shown[13]).toEqual({ error: '#VALUE!' });
+      else expect(shown[13]).toBe(expectedRow(row, NEEDED, [5, 6, 7, 8], code).verdict);
+    });
+    // Pass/fail is the check's own: PASS and FAIL as without the spread (mouse: the fixture gives both).
+    if (input === 'mouse') expect(new Set(verdicts)).toEqual(new Set(['PASS', 'FAIL']));
+    const highlights = await highlightPlans(page);
+    expect(highlights.map((h) => h.block)).toEqual([0, 1].map(() => cells({ row: TOP + 1, column: FIRST_NEW + 13, rowCount: CERTIFICATE_ROWS.length })));
+    const formats = await stylePlans(page);
+    const formatOf = (offset: number) => formats.find((style) => style.block.column === FIRST_NEW + offset && style.numberFormat !== undefined)?.numberFormat;
+    expect([4, 5, 6, 7, 8, 9].map(formatOf)).toEqual(['0.00E+00', '0.00E+00', '0.0%', '0.00E+00', '0.00E+00', '0.0%']);
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await saveScreenshot(page, `certificate-model-spread-${width}-${scheme}-${input}`);
     await page.close();
   });
 

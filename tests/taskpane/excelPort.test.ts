@@ -118,6 +118,16 @@ describe('createExcelPort', () => {
     expect(excel.context.workbook.worksheets.sheet.range.formulas).toEqual([['=DRIFT.INTRINSIC(300)', '', 7]]);
   });
 
+  it('write() of a row whose tuple formula spills right leaves the spill cells empty ("") and the formulas after them in place', async () => {
+    // The certificate check's model spread: one DOPINGSPREAD per end, two null cells for its spill, then the next column's formula.
+    const { excel, log } = mockExcel();
+    const header = ['Doping at ρmax over models: lowest (cm⁻³)', 'Doping at ρmax over models: highest (cm⁻³)', 'Doping at ρmax over models: relative spread (highest/lowest − 1)', 'Pass/fail'];
+    const row = ['=DRIFT.DOPINGSPREAD(F3,L3,$AB$5)', null, null, '=IF(O3="yes","PASS","FAIL")'];
+    await createExcelPort(excel).write(block(1, 15, 2, 4), [header, row]);
+    expect(log.getRange).toEqual(['P2:S3']);
+    expect(excel.context.workbook.worksheets.sheet.range.formulas).toEqual([header, ['=DRIFT.DOPINGSPREAD(F3,L3,$AB$5)', '', '', '=IF(O3="yes","PASS","FAIL")']]);
+  });
+
   it('write() of a spilled formula touches only its anchor cell', async () => {
     const { excel, log } = mockExcel();
     await createExcelPort(excel).write(block(2, 1), [['=DRIFT.RESISTIVITY(A3:A9,"B",B2:D2)']]);

@@ -7,13 +7,23 @@
  * here touches a workbook.
  *
  * Layout, left to right, starting in the first column after the table:
- *   [dopant code] | doping at ρmax | doping at ρmin | window check | [corrected readings] | [readings check] | [Rs] | [radial variation] | pass/fail
+ *   [dopant code] | doping at ρmax | doping at ρmin | window check | [model spread at ρmax, at ρmin] | [corrected readings] | [readings check] | [Rs] | [radial variation] | pass/fail
+ *   (one empty column) | parameter label | parameter value
+ *
+ * Model spread (settings.modelSpread, off by default): three columns for each
+ * end of the certificate's window, ρmax first as in the doping columns, filled
+ * by ONE DRIFT.DOPINGSPREAD formula per end and row that spills [lowest,
+ * highest, highest/lowest − 1] over every resistivity model of the material.
+ * Its arguments are the doping columns' own: the same ρ, dopant, certificate
+ * temperature and material, no counter-doping and no doping window (the
+ * doping columns pass neither). 'Readings measured at' does not enter it: like
+ * the doping columns it is the certificate's resistivity at the certificate's
+ * temperature; only readings are converted. Pass/fail does not use it.
  *
  * Corrected readings: when the readings were measured at another temperature
  * (settings.measuredAt), one column per reading column holds it converted to
  * the certificate's temperature with DRIFT.RESISTIVITYAT (in Ω·cm), and the
  * readings check, Rs and radial variation use those columns instead.
- *   (one empty column) | parameter label | parameter value
  *
  * Pass/fail: PASS when the window check says "yes", the readings check (if
  * readings are mapped) is not "no", and |radial variation| is within the
@@ -54,7 +64,7 @@ export const VERDICT = { pass: 'PASS', fail: 'FAIL', yes: 'yes', no: 'no', none:
 const PASS_COLOURS = { fill: '#cdebd6', fontColor: '#0f4d26' } as const;
 const FAIL_COLOURS = { fill: '#f6d3cf', fontColor: '#7a1a10' } as const;
 
-const FORMATS = { density: '0.00E+00', sheetResistance: '0.0', percent: '0.00', resistivity: '0.0000' } as const;
+const FORMATS = { density: '0.00E+00', sheetResistance: '0.0', percent: '0.00', resistivity: '0.0000', fraction: '0.0%' } as const;
 
 /** A1 references of several columns in one row, contiguous runs as ranges: 'F2:H2,J2'. */
 export function rowReferences(columns: readonly number[], row: number): string {
@@ -77,11 +87,14 @@ function absolute(row: number, column: number): string {
   return `$${columnName(column)}$${row + 1}`;
 }
 
-/** One new column: header, number format, and its formula for a sheet row. */
+/**
+ * One new column: header, number format, and its formula for a sheet row
+ * (null: the cell is left empty for the spill of a formula to its left).
+ */
 interface PlannedColumn {
   readonly header: string;
   readonly numberFormat?: string;
-  readonly formula: (sheetRow: number) => string;
+  readonly formula: (sheetRow: number) => string | null;
 }
 
 /** One labelled parameter cell. */
@@ -109,6 +122,7 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
 
   const doping = catalogEntry('DOPING');
   const sheetRes = catalogEntry('SHEETRES');
+  const dopingSpread = catalogEntry('DOPINGSPREAD');
   const radial = catalogEntry('RADIALVARIATION');
   const densityUnit = doping.result.unit ?? 'cm⁻³';
 
@@ -198,6 +212,30 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
       return `IF(${inside},"${VERDICT.yes}","${VERDICT.no}")`;
     },
   });
+
+  if (settings.modelSpread === true) {
+    // The spilled row's names come from the catalog entry; the relative spread has no unit (shown as %).
+    if (dopingSpread.kind !== 'tuple' || dopingSpread.columns.length !== 3) throw new Error(`${dopingSpread.name} is not a row of three values`);
+    const [lowest, highest, relative] = dopingSpread.columns;
+    const spreadUnit = dopingSpread.result.unit ?? densityUnit;
+    for (const [role, end] of [['rho-max', 'ρmax'], ['rho-min', 'ρmin']] as const) {
+      columns.push(
+        {
+          header: `Doping at ${end} over models: ${lowest} (${spreadUnit})`,
+          numberFormat: FORMATS.density,
+          formula: (row) =>
+            callText(dopingSpread, {
+              resistivity: scaled(ref(role, row), rhoFactor),
+              dopant: dopantArgument(row),
+              temperature_K: parameterRef('temperature'),
+              material: optionalParameterRef('material'),
+            }),
+        },
+        { header: `Doping at ${end} over models: ${highest} (${spreadUnit})`, numberFormat: FORMATS.density, formula: () => null },
+        { header: `Doping at ${end} over models: ${relative}`, numberFormat: FORMATS.fraction, formula: () => null },
+      );
+    }
+  }
 
   // The reading cells the checks use: the readings themselves, or their corrected columns.
   const correctedOffset = new Map<number, number>();
@@ -290,7 +328,12 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
   const parameterBlock: CellBlock = { sheet: block.sheet, row: block.row, column: parameterColumn, rowCount: parameters.length, columnCount: 2 };
   const cells: CellInput[][] = [
     columns.map((column) => column.header),
-    ...Array.from({ length: dataRows }, (_, index) => columns.map((column) => `=${column.formula(block.row + 1 + index)}`)),
+    ...Array.from({ length: dataRows }, (_, index) =>
+      columns.map((column): CellInput => {
+        const formula = column.formula(block.row + 1 + index);
+        return formula === null ? null : `=${formula}`;
+      }),
+    ),
   ];
   const passFailBlock: CellBlock = { sheet: block.sheet, row: block.row + 1, column: firstNew + passColumn, rowCount: dataRows, columnCount: 1 };
 

@@ -56,6 +56,12 @@ export interface CertificateSettings {
    * DRIFT.RESISTIVITYAT before the checks.
    */
   readonly measuredAt?: MeasuredAt | null;
+  /**
+   * True: beside the doping window, DRIFT.DOPINGSPREAD at ρmax and at ρmin (lowest and highest doping over
+   * every resistivity model of the material, and highest/lowest − 1), at the certificate's temperature.
+   * Shown only: pass/fail does not use it. Absent or false: no such columns (the check as before).
+   */
+  readonly modelSpread?: boolean;
   /** Largest allowed |radial variation| in %, or null for no limit. */
   readonly radialLimitPercent: number | null;
 }

@@ -86,6 +86,20 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const modelSelect = selectOf(doc, `${ID}-model`, [['', models.defaultCode], ...models.codes.map((code) => [code, code] as const)], '');
   const materials = dopingChoices('material');
   const materialSelect = selectOf(doc, `${ID}-material`, materials.codes.map((code) => [code, code] as const), materials.defaultCode);
+  // Model spread beside the doping window: off unless asked for, so the check is unchanged by default.
+  const spreadSwitch = element(doc, 'input', { type: 'checkbox', id: `${ID}-model-spread` });
+  const spreadField = element(doc, 'div', { class: 'dc-field dc-check' }, [
+    spreadSwitch,
+    element(doc, 'label', { for: spreadSwitch.id, text: 'Show the model spread: lowest and highest doping over the published models' }),
+    element(doc, 'p', {
+      class: 'dc-hint',
+      id: `${spreadSwitch.id}-hint`,
+      text:
+        'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
+        'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
+    }),
+  ]);
+  spreadSwitch.setAttribute('aria-describedby', `${spreadSwitch.id}-hint`);
   const radialLimit = element(doc, 'input', { type: 'text', id: `${ID}-radial-limit`, inputmode: 'decimal', autocomplete: 'off', placeholder: 'no limit' });
   const addButton = element(doc, 'button', { type: 'button', id: `${ID}-add`, class: 'dc-button dc-primary', text: 'Add check columns' });
 
@@ -180,6 +194,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
       material: materialSelect.value,
       radialLimitPercent: parseNumberField(radialLimit.value, 'Max |radial variation|'),
       measuredAt: measured,
+      modelSpread: spreadSwitch.checked,
     };
   }
 
@@ -231,6 +246,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
       windowRule,
       'Certified range inside needed window: every doping the certificate allows meets the design (higher ρ means lower doping). The other rule only asks that the certificate’s range covers the needed window.',
     ),
+    spreadField,
   ]);
   const more = element(doc, 'details', { class: 'dc-group' }, [
     element(doc, 'summary', { text: 'More settings' }),
