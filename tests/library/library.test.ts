@@ -6,7 +6,7 @@
  * and its printed lines compared with the comments beside them; a TypeScript
  * file importing 'driftcell' must compile against the shipped .d.ts (and a
  * wrongly typed call must not). Needs the tsc build (dist/node), which
- * `npm test` runs first.
+ * `npm test` runs first (@needs-build: `npm run test:unit` leaves it out).
  *
  * The numbers are the catalog's own (its physics is tested in tests/physics);
  * here they only show that the entry point passes options through.
