@@ -239,6 +239,7 @@ class ValueReader {
       if (c === undefined) throw new Error(`missing ${closing}`);
       entry();
       this.skipSpace();
+      if (this.position >= this.text.length) throw new Error(`missing ${closing}`);
       if (this.text[this.position] === ',') this.position++;
       else if (this.text[this.position] !== closing) throw new Error(`expected ',' or ${closing} at "${this.text.slice(this.position)}"`);
     }
