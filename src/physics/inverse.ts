@@ -505,7 +505,7 @@ function windowText(window: DensityWindow, names: DensityWindowNames): string {
  * @returns { density in cm⁻³, iterations }
  * @throws PhysicsDomainError when the target is out of the reachable range (the message gives the range) or
  *   no solution lies in the window (the message lists the solutions); AmbiguousDopingError when several do
- * @example dopingForResistivity(1, boronAt300K).density // ≈ 1.5e16 cm⁻³
+ * @example dopingForResistivity(1, boronAt300K).density // ≈ 1.50e16 cm⁻³
  * @example dopingForResistivity(resistivity(phosphorus1e17At77K, 'masetti'), phosphorusAt77K, 'masetti', { min: 1e16, max: 3e17 }).density // ≈ 1.000e17 cm⁻³ (the window picks one of three)
  */
 export function dopingForResistivity(

@@ -165,7 +165,7 @@ export function implantPeakDensity(dose: number, straggleCm: number): number {
  * @param peakDensity - Φ/(√(2π)ΔRp), cm⁻³
  * @param depth - x ≥ 0, same unit
  * @returns N(x), cm⁻³
- * @example implantDensity({ dose: 1e14, range: 0.1, straggle: 0.05 }, 8e18, 0.1) // ≈ 8e18
+ * @example implantDensity({ dose: 1e14, range: 0.1, straggle: 0.05 }, 8e18, 0.1) // → 8e18 (the peak, at the range)
  */
 export function implantDensity(implant: ImplantProfile, peakDensity: number, depth: number): number {
   const u = (depth - implant.range) / implant.straggle;
