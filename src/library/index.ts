@@ -10,7 +10,7 @@
  * @example
  *   import { resistivity, doping, DriftcellError } from 'driftcell';
  *   resistivity({ doping: 1e15, dopant: 'B', temperature: 296.15 }); // ≈ 13.3 Ω·cm (ASTM F723 at 23 °C)
- *   doping({ resistivity: 10, dopant: 'phosphorus' });               // cm⁻³
+ *   doping({ resistivity: 10, dopant: 'phosphorus' });               // ≈ 4.576e14 cm⁻³
  *   try { doping({ resistivity: 10, dopant: 'P' }); } catch (e) { (e as DriftcellError).message; } // names both readings
  */
 import { evaluate, findFunction, type FunctionSpec } from '../catalog';
@@ -112,7 +112,7 @@ export function resistivity(options: { readonly doping: number } & SampleOptions
  * @param options - resistivity in Ω·cm, the sample options and an optional density window
  * @returns N in cm⁻³
  * @throws DriftcellError for bad input, an unreachable resistivity or an ambiguous one
- * @example doping({ resistivity: 10, dopant: 'B', temperature: 296.15 }) // ASTM F723's N for 10 Ω·cm
+ * @example doping({ resistivity: 10, dopant: 'B', temperature: 296.15 }) // ≈ 1.340e15 cm⁻³ (ASTM F723's N for 10 Ω·cm)
  */
 export function doping(options: { readonly resistivity: number } & SampleOptions & DopingWindowOptions): number {
   return call(
@@ -138,7 +138,7 @@ export function conductivity(options: { readonly doping: number } & SampleOption
  *
  * @param options - doping in cm⁻³, carrier ('electron' or 'hole'; default: the majority carrier) and the sample options
  * @returns μ in cm²/(V·s)
- * @example mobility({ doping: 1e16, dopant: 'phosphorus', carrier: 'electron' }) // ≈ 1200
+ * @example mobility({ doping: 1e16, dopant: 'phosphorus', carrier: 'electron' }) // ≈ 1184
  */
 export function mobility(options: { readonly doping: number; readonly carrier?: string } & SampleOptions): number {
   return call('MOBILITY', { doping: options.doping, carrier: options.carrier, ...sampleArguments(options) }, SAMPLE_NAMES);
@@ -149,7 +149,7 @@ export function mobility(options: { readonly doping: number; readonly carrier?: 
  *
  * @param options - doping in cm⁻³ and the sample options (no counter-doping)
  * @returns (1/ρ)·dρ/dT in ppm/K
- * @example temperatureCoefficient({ doping: 1e15, dopant: 'phosphorus' }) // ≈ +7000 ppm/K
+ * @example temperatureCoefficient({ doping: 1e15, dopant: 'phosphorus' }) // ≈ 7.3e3 ppm/K
  */
 export function temperatureCoefficient(options: { readonly doping: number } & Omit<SampleOptions, 'counterDoping'>): number {
   return call('TCR', { doping: options.doping, dopant: options.dopant, temperature_K: options.temperature, model: options.model, material: options.material }, SAMPLE_NAMES);

@@ -24,7 +24,7 @@ export type { Dopant, DopantKind } from './materials/types';
  *
  * @param material host material
  * @returns e.g. ['B', 'Al', 'Ga', 'In', 'P', 'As', 'Sb', 'donor', 'acceptor'] for silicon
- * @example dopantCodes(SILICON).length // 9
+ * @example dopantCodes(SILICON).length // → 9
  */
 export function dopantCodes(material: Material): readonly string[] {
   return material.dopants.map((dopant) => dopant.symbol);
@@ -36,7 +36,7 @@ export function dopantCodes(material: Material): readonly string[] {
  *
  * @param material host material
  * @returns e.g. ['B', 'Al', 'Ga', 'In', 'phosphorus', 'As', 'Sb', 'donor', 'acceptor'] for silicon
- * @example typedDopantCodes(SILICON).includes('P') // false
+ * @example typedDopantCodes(SILICON).includes('P') // → false
  */
 export function typedDopantCodes(material: Material): readonly string[] {
   return material.dopants.map((dopant) => (dopantCodeProblem(dopant.symbol) ? dopant.name : dopant.symbol));
@@ -66,7 +66,7 @@ const AMBIGUOUS_LETTERS: Readonly<Record<string, { readonly element: string; rea
  *
  * @param code dopant text as typed
  * @returns a message naming both readings and what to type, for 'P', 'p', 'N', 'n'
- * @example dopantCodeProblem('p') // 'dopant "p" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"'
+ * @example dopantCodeProblem('p') // → 'dopant "p" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"'
  */
 export function dopantCodeProblem(code: string): string | null {
   const text = String(code).trim();
@@ -86,7 +86,7 @@ export function dopantCodeProblem(code: string): string | null {
  *   'donor'/'acceptor' (also 'n-type'/'p-type', 'generic donor')
  * @returns the dopant with its parameter tables
  * @throws PhysicsDomainError listing the allowed codes if unknown
- * @example resolveDopant(SILICON, 'as').name // 'arsenic'
+ * @example resolveDopant(SILICON, 'as').name // → 'arsenic'
  */
 export function resolveDopant(material: Material, code: string): Dopant {
   const lower = String(code).trim().toLowerCase();
@@ -110,7 +110,7 @@ export function resolveDopant(material: Material, code: string): Dopant {
  * @param code dopant text as typed
  * @returns the dopant
  * @throws PhysicsDomainError for an ambiguous or unknown code
- * @example readDopant(SILICON, 'Phosphorus').symbol // 'P'
+ * @example readDopant(SILICON, 'Phosphorus').symbol // → 'P'
  */
 export function readDopant(material: Material, code: string): Dopant {
   const problem = dopantCodeProblem(code);
@@ -125,7 +125,7 @@ export function readDopant(material: Material, code: string): Dopant {
  * @param kind 'donor' or 'acceptor'
  * @returns the generic dopant (silicon: parameters of P or B)
  * @throws PhysicsDomainError if kind is neither
- * @example genericDopant(SILICON, 'acceptor').symbol // 'acceptor'
+ * @example genericDopant(SILICON, 'acceptor').symbol // → 'acceptor'
  */
 export function genericDopant(material: Material, kind: DopantKind): Dopant {
   if (kind !== 'donor' && kind !== 'acceptor') {

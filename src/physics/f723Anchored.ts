@@ -120,7 +120,7 @@ function edge(sample: Sample, species: F723Species, direction: AnchorDirection, 
  * @param direction - 'forward' for ρ from N (RESISTIVITY), 'reverse' for N from ρ (DOPING)
  * @param physics - the physics resistivity (silicon's default mobility model)
  * @returns k, dimensionless
- * @example anchorFactor(boron1e18At300K, 'forward', rhoMasetti) // ≈ 1.1 (F723 is about 11 % above the physics at 1e18 B)
+ * @example anchorFactor(boron1e18At300K, 'forward', (sample) => resistivity(sample, 'masetti')) // ≈ 1.1 (F723 is about 11 % above the physics at 1e18 B)
  */
 export function anchorFactor(sample: Sample, direction: AnchorDirection, physics: PhysicsResistivity): number {
   const species = anchoredSpecies(sample);

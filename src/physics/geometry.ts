@@ -13,7 +13,7 @@ export const CM_PER_UM = 1e-4;
  * @param resistivity - ρ in Ω·cm
  * @param thicknessUm - layer thickness t in µm
  * @returns Rs in Ω/sq
- * @example sheetResistance(1, 10) // 1000 Ω/sq: 1 Ω·cm over 10 µm
+ * @example sheetResistance(1, 10) // ≈ 1000 Ω/sq (1 Ω·cm over 10 µm)
  */
 export function sheetResistance(resistivity: number, thicknessUm: number): number {
   return resistivity / (thicknessUm * CM_PER_UM);
@@ -27,7 +27,7 @@ export function sheetResistance(resistivity: number, thicknessUm: number): numbe
  * @param widthUm - W in µm
  * @param thicknessUm - t in µm
  * @returns R in Ω
- * @example resistorValue(1, 100, 10, 10) // 10 kΩ: ten squares of a 1000 Ω/sq layer
+ * @example resistorValue(1, 100, 10, 10) // ≈ 1.000e4 Ω (ten squares of a 1000 Ω/sq layer)
  */
 export function resistorValue(resistivity: number, lengthUm: number, widthUm: number, thicknessUm: number): number {
   return sheetResistance(resistivity, thicknessUm) * (lengthUm / widthUm);

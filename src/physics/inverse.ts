@@ -324,7 +324,7 @@ function scanConditions(logResistivityAt: (u: number) => number, lo: number, hi:
  * @param model - resistivity model code (default: the material's default)
  * @returns the solutions, ascending in density (cm⁻³)
  * @throws PhysicsDomainError for a bad target, model or counter-doping
- * @example dopingSolutions(resistivity(phosphorus1e17At77K), phosphorusAt77K).length // 3
+ * @example dopingSolutions(resistivity(phosphorus1e17At77K), phosphorusAt77K).length // → 3
  */
 export function dopingSolutions(target: number, sample: Omit<Sample, 'density'>, model?: string): readonly DopingSolution[] {
   return solve(target, sample, model).solutions;
@@ -337,7 +337,7 @@ export function dopingSolutions(target: number, sample: Omit<Sample, 'density'>,
  * @param sample - material, temperature, dopant and counterDensity
  * @param model - resistivity model code (not 'astm-f723', which is monotone and not scanned)
  * @returns the turning points, ascending: net density (cm⁻³), resistivity (Ω·cm) and kind
- * @example resistivityTurningPoints(phosphorusAt77K).map((t) => t.kind) // ['minimum', 'maximum']
+ * @example resistivityTurningPoints(phosphorusAt77K).map((t) => t.kind) // → ['minimum', 'maximum']
  */
 export function resistivityTurningPoints(
   sample: Omit<Sample, 'density'>,
@@ -359,7 +359,7 @@ export function resistivityTurningPoints(
  * @param sample - material, temperature, dopant and counterDensity
  * @param model - resistivity model code (not 'astm-f723', which is not scanned)
  * @returns forward evaluations, made once per conditions (cached)
- * @example scanEvaluations(phosphorusAt300K) // ≈ 160
+ * @example scanEvaluations(phosphorusAt300K) // → 153
  */
 export function scanEvaluations(sample: Omit<Sample, 'density'>, model?: string): number {
   const { scan } = scanFor(sample, resolveResistivityModel(model, sample.material));
@@ -505,8 +505,8 @@ function windowText(window: DensityWindow, names: DensityWindowNames): string {
  * @returns { density in cm⁻³, iterations }
  * @throws PhysicsDomainError when the target is out of the reachable range (the message gives the range) or
  *   no solution lies in the window (the message lists the solutions); AmbiguousDopingError when several do
- * @example dopingForResistivity(1, { material: SILICON, temperature: 300, dopant: boron, counterDensity: 0 }) // ≈ 1.5e16 cm⁻³
- * @example dopingForResistivity(0.4682, phosphorusAt77K, undefined, { min: 1e16, max: 1e18 }) // ≈ 1e17 cm⁻³
+ * @example dopingForResistivity(1, boronAt300K).density // ≈ 1.50e16 cm⁻³
+ * @example dopingForResistivity(resistivity(phosphorus1e17At77K, 'masetti'), phosphorusAt77K, 'masetti', { min: 1e16, max: 3e17 }).density // ≈ 1.000e17 cm⁻³ (the window picks one of three)
  */
 export function dopingForResistivity(
   target: number,

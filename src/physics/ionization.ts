@@ -61,7 +61,7 @@ export interface LocalizedSplit {
  * @param dopant dopant with its Altermatt parameters
  * @param density density of that dopant, cm⁻³
  * @returns b and 1 − b
- * @example localizedFraction(phosphorus, 6e18).localized // 0.5
+ * @example localizedFraction(phosphorus, 6e18).localized // → 0.5
  */
 export function localizedFraction(dopant: Dopant, density: number): LocalizedSplit {
   checkDopantDensity(density);

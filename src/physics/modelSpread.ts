@@ -64,7 +64,7 @@ function withModel<T>(model: string, run: () => T): T {
  * @param sample - the sample
  * @returns lowest and highest ρ in Ω·cm, their relative spread and the models used
  * @throws PhysicsDomainError naming the model when a covering model refuses the sample
- * @example resistivitySpread(boron1e16At300K).models // ['f723-anchored', 'masetti', 'arora', 'caughey-thomas', 'klaassen']
+ * @example resistivitySpread(boron1e16At300K).models // → ['f723-anchored', 'masetti', 'arora', 'caughey-thomas', 'klaassen', 'astm-f723']
  */
 export function resistivitySpread(sample: Sample): ModelSpread {
   const species = f723Species(sample);

@@ -122,7 +122,7 @@ export const MODEL_REGISTRY: readonly ModelInfo[] = [
  * @param code - e.g. 'Masetti'
  * @returns its registry entry
  * @throws PhysicsDomainError listing every code
- * @example modelInfo('astm-f723').quantity // 'resistivity ↔ dopant density'
+ * @example modelInfo('astm-f723').quantity // → 'resistivity ↔ dopant density'
  */
 export function modelInfo(code: string): ModelInfo {
   const wanted = String(code).trim().toLowerCase();

@@ -35,7 +35,7 @@ function checkEndSquares(value: number): void {
  * @param endSquares - Ne, squares added by both ends together, ≥ 0
  * @returns L in µm
  * @throws PhysicsDomainError if the ends alone already reach the target
- * @example resistorLength(10000, 100, 5, 1.3) // 493.5 µm
+ * @example resistorLength(10000, 100, 5, 1.3) // ≈ 493.5 µm
  */
 export function resistorLength(targetOhm: number, sheetResistance: number, widthUm: number, endSquares = 0): number {
   checkPositive('target', targetOhm, 'Ω');
@@ -73,7 +73,7 @@ export interface TemperatureCoefficients {
  * @param endSquares - Ne, ≥ 0
  * @returns R(T) in Ω
  * @throws PhysicsDomainError if the TCR polynomial is not positive at T
- * @example resistorAtTemperature(100, 500, 5, 400, { linearPpmPerK: 1000, quadraticPpmPerK2: 0, referenceTemperature: 300 }) // 11000 Ω
+ * @example resistorAtTemperature(100, 500, 5, 400, { linearPpmPerK: 1000, quadraticPpmPerK2: 0, referenceTemperature: 300 }) // ≈ 11000 Ω
  */
 export function resistorAtTemperature(
   sheetResistance: number,

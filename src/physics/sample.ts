@@ -37,7 +37,7 @@ export const CARRIER_ROLES: readonly CarrierRole[] = ['majority', 'minority', 'e
  *
  * @param sample - the sample
  * @returns one or two dopant densities, cm⁻³
- * @example sampleDopants({ ...s, dopant: boron, density: 1e16, counterDensity: 1e15 }) // [B 1e16, generic donor 1e15]
+ * @example sampleDopants({ ...boron1e16At300K, counterDensity: 1e15 }).map((d) => d.dopant.symbol) // → ['B', 'donor'] (boron and the generic donor)
  */
 export function sampleDopants(sample: Sample): DopantDensity[] {
   const dopants: DopantDensity[] = [{ dopant: sample.dopant, density: sample.density }];
@@ -66,7 +66,7 @@ export function otherCarrier(carrier: Carrier): Carrier {
  * @param dopant - the sample's named dopant
  * @param role - 'majority' | 'minority' | 'electron' | 'hole'
  * @returns 'electron' or 'hole'
- * @example carrierFor(boron, 'majority') // 'hole'
+ * @example carrierFor(boron, 'majority') // → 'hole'
  */
 export function carrierFor(dopant: Dopant, role: CarrierRole): Carrier {
   switch (role) {
@@ -87,7 +87,7 @@ export function carrierFor(dopant: Dopant, role: CarrierRole): Carrier {
  * @param code - e.g. 'Majority', 'hole'
  * @returns the role
  * @throws PhysicsDomainError listing the allowed roles
- * @example resolveCarrierRole('MINORITY') // 'minority'
+ * @example resolveCarrierRole('MINORITY') // → 'minority'
  */
 export function resolveCarrierRole(code: string): CarrierRole {
   const normalized = code.trim().toLowerCase();

@@ -55,7 +55,7 @@ function evaluate(f: (x: number) => number, x: number): number {
  * @returns the root and the number of iterations used
  * @throws PhysicsDomainError if the ends are not finite, f(lo) and f(hi) have the
  *   same sign, f returns NaN, or (never for a valid bracket) the iteration cap is hit
- * @example findRoot((x) => x * x - 2, 0, 2).root // ≈ 1.4142135623730951
+ * @example findRoot((x) => x * x - 2, 0, 2).root // ≈ 1.414213562373095
  */
 export function findRoot(
   f: (x: number) => number,

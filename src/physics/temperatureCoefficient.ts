@@ -45,7 +45,7 @@ export interface TemperatureBounds {
  * @param relativeStep - h/T of the outer central difference
  * @returns dg/dT at T
  * @throws PhysicsDomainError if T is outside bounds or the bounds are narrower than the stencil
- * @example temperatureDerivative((t) => Math.log(t), 300, { min: 20, max: 1000 }) // ≈ 1/300
+ * @example temperatureDerivative((t) => Math.log(t), 300, { min: 20, max: 1000 }) // ≈ 0.0033333 (1/300)
  */
 export function temperatureDerivative(
   g: (temperature: number) => number,

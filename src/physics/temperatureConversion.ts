@@ -44,7 +44,7 @@ export const CERTIFICATE_TEMPERATURE = F723_ANCHOR_TEMPERATURE;
  * @param sample - only its material is used
  * @returns the model code used for the inversion and the evaluation
  * @throws PhysicsDomainError for 'astm-f723' or an unknown model
- * @example conversionModel(undefined, boronSample) // 'masetti'
+ * @example conversionModel(undefined, boron1e16At300K) // → 'masetti'
  */
 export function conversionModel(model: string | undefined, sample: Pick<Sample, 'material'>): string {
   const code = resolveResistivityModel(model, sample.material);
@@ -70,7 +70,7 @@ export function conversionModel(model: string | undefined, sample: Pick<Sample, 
  * @returns the resistivity at targetTemperature, Ω·cm
  * @throws AmbiguousDopingError when several densities give the reading at the measurement temperature
  *   (the message lists them; a window picks one); PhysicsDomainError for an unreachable reading or a bad model
- * @example resistivityAtTemperature(10.2, { material: SILICON, temperature: 298.15, dopant: boron, counterDensity: 0 }) // ≈ 10.05 Ω·cm at 23 °C
+ * @example resistivityAtTemperature(10.2, { material: SILICON, temperature: 298.15, dopant: boron, counterDensity: 0 }) // ≈ 10.06 Ω·cm at 23 °C
  */
 export function resistivityAtTemperature(
   measured: number,

@@ -47,7 +47,7 @@ export const ALL_RESISTIVITY_MODEL_CODES: readonly string[] = [
  *
  * @param material - host material
  * @returns e.g. ['f723-anchored', 'masetti', 'arora', 'caughey-thomas', 'klaassen', 'astm-f723'] for silicon, ['hilsum'] for germanium
- * @example resistivityModelCodes(GERMANIUM) // ['hilsum']
+ * @example resistivityModelCodes(GERMANIUM) // → ['hilsum']
  */
 export function resistivityModelCodes(material: Material): readonly string[] {
   const codes = mobilityModelCodes(material);
@@ -62,7 +62,7 @@ export function resistivityModelCodes(material: Material): readonly string[] {
  * @returns the normalized code
  * @throws PhysicsDomainError listing the codes the material supports, for an
  *   unknown code or one without parameters for the material
- * @example resolveResistivityModel('ASTM-F723') // 'astm-f723'
+ * @example resolveResistivityModel('ASTM-F723') // → 'astm-f723'
  */
 export function resolveResistivityModel(code?: string, material: Material = SILICON): string {
   if (code === undefined || code.trim() === '') return resistivityModelCodes(material)[0];
@@ -135,7 +135,7 @@ export function conductivity(sample: Sample, model?: string): number {
  * @param sample - the sample
  * @param model - resistivity model code (silicon's default 'f723-anchored')
  * @returns ρ in Ω·cm
- * @example resistivity(phosphorus1e16At300K) // ≈ 0.527 Ω·cm
+ * @example resistivity(phosphorus1e16At300K) // ≈ 0.537 Ω·cm
  */
 export function resistivity(sample: Sample, model?: string): number {
   const code = resolveResistivityModel(model, sample.material);
@@ -173,7 +173,7 @@ export type FieldDependence = (typeof FIELD_DEPENDENCE_CODES)[number];
  *   mobilities divided by its factor k), not 'astm-f723'
  * @param fieldDependence - 'saturating' (default) or 'ohmic'
  * @returns J in A/cm²
- * @example currentDensity(100, phosphorus1e16At300K) // ≈ 188.5 A/cm² (σE ≈ 189.7: saturation lowers it by 0.6 %)
+ * @example currentDensity(100, phosphorus1e16At300K) // ≈ 185.1 A/cm² (σE ≈ 186.3: saturation lowers it by 0.6 %)
  */
 export function currentDensity(
   field: number,

@@ -103,7 +103,7 @@ export const BANDGAP_NARROWING_MODEL_CODES: readonly string[] = BANDGAP_NARROWIN
  * @param code model code such as 'Klaassen-BGN', or undefined
  * @returns the parameter set
  * @throws PhysicsDomainError for a material without BGN parameters (naming silicon) or an unknown code
- * @example resolveBandgapNarrowingModel(SILICON, 'slotboom-1976').energy // 0.009
+ * @example resolveBandgapNarrowingModel(SILICON, 'slotboom-1976').energy // → 0.009
  */
 export function resolveBandgapNarrowingModel(material: Material, code?: string): ApparentBandgapNarrowingModel {
   const own = BANDGAP_NARROWING_MODELS.filter((model) => model.materialCode === material.code);
@@ -133,7 +133,7 @@ export function resolveBandgapNarrowingModel(material: Material, code?: string):
  * @param density dopant density N, cm⁻³, ≥ 0 (0 gives 0)
  * @returns ΔEg in eV, ≥ 0
  * @throws PhysicsDomainError for a negative or non-finite density
- * @example apparentBandgapNarrowing(KLAASSEN_BGN, 1e19) // ≈ 0.0601 eV
+ * @example apparentBandgapNarrowing(KLAASSEN_BGN, 1e19) // ≈ 0.0605 eV
  */
 export function apparentBandgapNarrowing(model: ApparentBandgapNarrowingModel, density: number): number {
   checkDopantDensity(density);

@@ -14,7 +14,7 @@ function logPowerLaw(law: PowerLawDensity, temperature: number): number {
  * @param material host material
  * @param temperature K, inside the material's temperature domain
  * @returns natural log of Nc in cm⁻³
- * @example Math.exp(logConductionBandDensity(SILICON, 300)) // 2.86e19
+ * @example Math.exp(logConductionBandDensity(SILICON, 300)) // ≈ 2.86e19
  */
 export function logConductionBandDensity(material: Material, temperature: number): number {
   checkTemperature(material, temperature);
@@ -26,7 +26,7 @@ export function logConductionBandDensity(material: Material, temperature: number
  * @param material host material
  * @param temperature K, inside the material's temperature domain
  * @returns natural log of Nv in cm⁻³
- * @example Math.exp(logValenceBandDensity(SILICON, 300)) // 3.10e19
+ * @example Math.exp(logValenceBandDensity(SILICON, 300)) // ≈ 3.10e19
  */
 export function logValenceBandDensity(material: Material, temperature: number): number {
   checkTemperature(material, temperature);
@@ -41,7 +41,7 @@ export function logValenceBandDensity(material: Material, temperature: number): 
  * @param temperature K, inside the material's temperature domain
  * @returns Nc in cm⁻³
  * @throws PhysicsDomainError for a temperature outside the domain
- * @example conductionBandDensity(SILICON, 300) // 2.86e19
+ * @example conductionBandDensity(SILICON, 300) // ≈ 2.86e19
  */
 export function conductionBandDensity(material: Material, temperature: number): number {
   return Math.exp(logConductionBandDensity(material, temperature));
@@ -55,7 +55,7 @@ export function conductionBandDensity(material: Material, temperature: number): 
  * @param temperature K, inside the material's temperature domain
  * @returns Nv in cm⁻³
  * @throws PhysicsDomainError for a temperature outside the domain
- * @example valenceBandDensity(SILICON, 300) // 3.10e19
+ * @example valenceBandDensity(SILICON, 300) // ≈ 3.10e19
  */
 export function valenceBandDensity(material: Material, temperature: number): number {
   return Math.exp(logValenceBandDensity(material, temperature));

@@ -237,7 +237,7 @@ function tabulated(order: FermiDiracOrder, eta: number): number {
  * @param order j: 0.5 or -0.5
  * @param eta reduced Fermi level, −2 < η < 35 (the range where the module note bounds its error)
  * @returns F_j(η)
- * @example fermiDiracByQuadrature(0.5, 0) // ≈ 0.7651470246254079
+ * @example fermiDiracByQuadrature(0.5, 0) // ≈ 0.765147024625408
  */
 export function fermiDiracByQuadrature(order: FermiDiracOrder, eta: number): number {
   constantsOf(order); // refuses an order other than ±1/2, as fermiDiracIntegral does
@@ -273,7 +273,7 @@ function constantsOf(order: FermiDiracOrder): OrderConstants {
  * @param eta reduced Fermi level η (dimensionless), any number
  * @returns F_j(η) > 0 (0 only where it underflows), relative error ≤ 1e-13
  * @throws RangeError for an order other than ±0.5
- * @example fermiDiracIntegral(0.5, 0) // 0.7651470246254079
+ * @example fermiDiracIntegral(0.5, 0) // ≈ 0.76514702462541
  */
 export function fermiDiracIntegral(order: FermiDiracOrder, eta: number): number {
   const constants = constantsOf(order);
@@ -292,7 +292,7 @@ export function fermiDiracIntegral(order: FermiDiracOrder, eta: number): number 
  * @param eta reduced Fermi level η; meant for η ≤ 0 (for large η the ratio underflows: use fermiDiracIntegral)
  * @returns F_j(η)/e^η in (0, 1]
  * @throws RangeError for an order other than ±0.5
- * @example fermiDiracOverBoltzmann(0.5, -40) // 1
+ * @example fermiDiracOverBoltzmann(0.5, -40) // ≈ 1.0000000000
  */
 export function fermiDiracOverBoltzmann(order: FermiDiracOrder, eta: number): number {
   const constants = constantsOf(order);
@@ -306,7 +306,7 @@ export function fermiDiracOverBoltzmann(order: FermiDiracOrder, eta: number): nu
  *
  * @param eta reduced Fermi level η = (Ef − Ec)/kT (electrons) or (Ev − Ef)/kT (holes)
  * @returns F½(η)
- * @example fermiDiracHalf(-10) // ≈ 4.5397e-5 (≈ e^{−10})
+ * @example fermiDiracHalf(-10) // ≈ 4.5399e-5 (≈ e^{−10})
  */
 export function fermiDiracHalf(eta: number): number {
   return fermiDiracIntegral(0.5, eta);
@@ -317,7 +317,7 @@ export function fermiDiracHalf(eta: number): number {
  *
  * @param eta reduced Fermi level η
  * @returns F−½(η)
- * @example fermiDiracMinusHalf(0) // 0.6048986434216304
+ * @example fermiDiracMinusHalf(0) // ≈ 0.60489864342163
  */
 export function fermiDiracMinusHalf(eta: number): number {
   return fermiDiracIntegral(-0.5, eta);

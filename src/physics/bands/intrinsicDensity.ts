@@ -29,7 +29,7 @@ export const DOS_INTRINSIC_MODEL = 'dos';
  *
  * @param material host material
  * @returns lower-case codes; the first is the material's default
- * @example intrinsicModelCodes(SILICON) // ['misiakos', 'sproul-green', 'dos']
+ * @example intrinsicModelCodes(SILICON) // → ['misiakos', 'sproul-green', 'dos']
  */
 export function intrinsicModelCodes(material: Material): readonly string[] {
   return [...material.intrinsicFits.map((fit) => fit.code), DOS_INTRINSIC_MODEL];
@@ -46,7 +46,7 @@ export const INTRINSIC_MODEL_CODES: readonly string[] = intrinsicModelCodes(SILI
  * @param model code such as 'Misiakos', 'dos', or undefined
  * @returns the canonical lower-case code
  * @throws PhysicsDomainError listing the allowed codes if unknown
- * @example resolveIntrinsicModel(SILICON, 'SPROUL-GREEN') // 'sproul-green'
+ * @example resolveIntrinsicModel(SILICON, 'SPROUL-GREEN') // → 'sproul-green'
  */
 export function resolveIntrinsicModel(material: Material, model?: string): string {
   const codes = intrinsicModelCodes(material);

@@ -105,7 +105,7 @@ export interface LevelOccupancy {
  * @param levelAboveFermi x, dimensionless (any real number, ±Infinity allowed)
  * @param degeneracy g > 0 (2 for donors, 4 for acceptors)
  * @returns occupied and empty probabilities, each accurate even when tiny
- * @example levelOccupancy(0, 2).occupied // 2/3
+ * @example levelOccupancy(0, 2).occupied // ≈ 0.6667 (2/3)
  */
 export function levelOccupancy(levelAboveFermi: number, degeneracy: number): LevelOccupancy {
   const x = levelAboveFermi - Math.log(degeneracy);

@@ -35,7 +35,7 @@ import { missingSaturationVelocity } from './tables';
  * @param mobilityScale - factor on both μ0 (f723-anchored's 1/k; 1 for a mobility model)
  * @returns J in A/cm²
  * @throws PhysicsDomainError where a saturation velocity needed for the result is not tabulated (material or temperature)
- * @example saturatedCurrentDensity(1e4, phosphorus1e16At300K) // ≈ 9.6e3 A/cm² (σE would be ≈ 1.9e4)
+ * @example saturatedCurrentDensity(1e4, phosphorus1e16At300K) // ≈ 9.3e3 A/cm² (σE would be ≈ 1.9e4)
  */
 export function saturatedCurrentDensity(field: number, sample: Sample, model = '', mobilityScale = 1): number {
   if (!Number.isFinite(field)) throw new PhysicsDomainError(`the field must be a finite number in V/cm; got ${field}`);

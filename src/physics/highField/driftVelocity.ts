@@ -21,7 +21,7 @@ import { highFieldParameters } from './saturationVelocity';
  * @param model - mobility model code for μ0; '' or undefined is the carrier's default (mobility/index.ts defaultMobilityModelFor)
  * @returns v in cm/s, with the sign of E (carriers' charge sign not applied)
  * @throws PhysicsDomainError where the material has no saturation velocity for the carrier or temperature
- * @example driftVelocity(1e4, 'electron', phosphorus1e16At300K) // ≈ 6.0e6 cm/s
+ * @example driftVelocity(1e4, 'electron', phosphorus1e16At300K) // ≈ 5.8e6 cm/s
  */
 export function driftVelocity(field: number, carrier: Carrier, sample: Sample, model = ''): number {
   return velocityAtMobility(field, carrier, sample, mobility(model, carrier, sample));
@@ -37,7 +37,7 @@ export function driftVelocity(field: number, carrier: Carrier, sample: Sample, m
  * @param lowFieldMobility - μ0, cm²/(V·s)
  * @returns v in cm/s, with the sign of E
  * @throws PhysicsDomainError where the material has no saturation velocity for the carrier or temperature
- * @example velocityAtMobility(1e4, 'electron', phosphorus1e16At300K, 1180) // ≈ 6.0e6 cm/s
+ * @example velocityAtMobility(1e4, 'electron', phosphorus1e16At300K, 1180) // ≈ 5.8e6 cm/s
  */
 export function velocityAtMobility(field: number, carrier: Carrier, sample: Sample, lowFieldMobility: number): number {
   const { saturationVelocity, fieldExponent } = highFieldParameters(sample.material.code, carrier, sample.temperature);

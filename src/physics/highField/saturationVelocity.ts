@@ -46,7 +46,7 @@ function exponentFromLaw(law: FieldExponentLaw): number {
  * @param temperature - T, K, inside the table's evaluation range (Si electrons 77–1000 K, holes 102–1000 K; Ge/GaAs 20–1000 K; 4H-SiC 300 K)
  * @returns v_sat in cm/s
  * @throws PhysicsDomainError for an unknown material, a carrier without data, or a temperature outside the range
- * @example saturationVelocity('Si', 'electron', 300) // 1.0e7 cm/s (Quay et al. 2000)
+ * @example saturationVelocity('Si', 'electron', 300) // ≈ 1.0e7 cm/s (Quay et al. 2000)
  */
 export function saturationVelocity(materialCode: string, carrier: Carrier, temperature: number): number {
   const table = carrierHighFieldTable(materialCode, carrier);
@@ -84,7 +84,7 @@ export interface HighFieldParameters {
  * @param temperature - T, K, inside the table's evaluation range
  * @returns v_sat (cm/s) and β
  * @throws PhysicsDomainError as saturationVelocity
- * @example highFieldParameters('Si', 'electron', 300).saturationVelocity // 1.0e7 cm/s
+ * @example highFieldParameters('Si', 'electron', 300).saturationVelocity // ≈ 1.0e7 cm/s
  */
 export function highFieldParameters(materialCode: string, carrier: Carrier, temperature: number): HighFieldParameters {
   const table = carrierHighFieldTable(materialCode, carrier);

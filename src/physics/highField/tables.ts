@@ -29,7 +29,7 @@ function isMissing(entry: CarrierHighFieldTable | MissingHighFieldTable): entry 
  * @param materialCode - e.g. 'Si', 'gaas'
  * @returns the material's tables
  * @throws PhysicsDomainError naming the materials that have tables
- * @example materialHighFieldTables('GaAs').limitations // 'GaAs electrons show negative differential mobility …'
+ * @example materialHighFieldTables('GaAs').limitations // → 'GaAs electrons show negative differential mobility …'
  */
 export function materialHighFieldTables(materialCode: string): MaterialHighFieldTables {
   const wanted = String(materialCode).trim().toLowerCase();
@@ -49,7 +49,7 @@ export function materialHighFieldTables(materialCode: string): MaterialHighField
  * @param carrier - 'electron' or 'hole'
  * @returns the carrier's table
  * @throws PhysicsDomainError for an unknown material or a carrier without published data (4H-SiC holes)
- * @example carrierHighFieldTable('Si', 'hole').modelCode // 'quay-2000'
+ * @example carrierHighFieldTable('Si', 'hole').modelCode // → 'quay-2000'
  */
 export function carrierHighFieldTable(materialCode: string, carrier: Carrier): CarrierHighFieldTable {
   const entry = materialHighFieldTables(materialCode)[carrier];
@@ -64,7 +64,7 @@ export function carrierHighFieldTable(materialCode: string, carrier: Carrier): C
  * @param materialCode - 'Si', 'Ge', 'GaAs' or '4H-SiC' (case-insensitive)
  * @param carrier - 'electron' or 'hole'
  * @returns the reason, or undefined
- * @example missingSaturationVelocity('4H-SiC', 'hole') // 'no published hole saturation velocity for 4H-SiC in this release: …'
+ * @example missingSaturationVelocity('4H-SiC', 'hole') // → 'no published hole saturation velocity for 4H-SiC in this release: …'
  */
 export function missingSaturationVelocity(materialCode: string, carrier: Carrier): string | undefined {
   const entry = materialHighFieldTables(materialCode)[carrier];

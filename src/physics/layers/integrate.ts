@@ -104,7 +104,7 @@ function kronrodPiece(f: (x: number) => number, lo: number, hi: number): Piece {
  * @returns the integral, its error estimate and the work done
  * @throws PhysicsDomainError for bad breakpoints or options, a non-finite integrand, or a
  *   tolerance not met within maxPieces (the message gives the estimate reached)
- * @example integrate(Math.sin, [0, Math.PI]).value // 2 (to about 1e-15)
+ * @example integrate(Math.sin, [0, Math.PI]).value // ≈ 2.00000000000000 (to about 1e-15)
  */
 export function integrate(
   f: (x: number) => number,

@@ -48,7 +48,7 @@ const PROFILE_SHAPES: Record<ProfileCode, { shape: (u: number) => number; invers
  * @param code - 'gaussian' or 'erfc'; undefined or '' selects 'gaussian'
  * @returns the code
  * @throws PhysicsDomainError listing the allowed codes
- * @example resolveProfile('ERFC') // 'erfc'
+ * @example resolveProfile('ERFC') // → 'erfc'
  */
 export function resolveProfile(code?: string): ProfileCode {
   if (code === undefined || code.trim() === '') return DEFAULT_PROFILE;
@@ -75,7 +75,7 @@ export interface DiffusedProfile {
  * @param layer - profile, Ns (cm⁻³) and L
  * @param depth - x ≥ 0, same unit as L
  * @returns N(x) = Ns·f(x/L), cm⁻³
- * @example diffusedDensity({ profile: 'gaussian', surfaceConcentration: 1e19, characteristicLength: 1 }, 1) // 1e19/e
+ * @example diffusedDensity({ profile: 'gaussian', surfaceConcentration: 1e19, characteristicLength: 1 }, 1) // ≈ 3.679e18 (1e19/e)
  */
 export function diffusedDensity(layer: DiffusedProfile, depth: number): number {
   return layer.surfaceConcentration * PROFILE_SHAPES[layer.profile].shape(depth / layer.characteristicLength);
@@ -165,7 +165,7 @@ export function implantPeakDensity(dose: number, straggleCm: number): number {
  * @param peakDensity - Φ/(√(2π)ΔRp), cm⁻³
  * @param depth - x ≥ 0, same unit
  * @returns N(x), cm⁻³
- * @example implantDensity({ dose: 1e14, range: 0.1, straggle: 0.05 }, 8e18, 0.1) // 8e18
+ * @example implantDensity({ dose: 1e14, range: 0.1, straggle: 0.05 }, 8e18, 0.1) // → 8e18 (the peak, at the range)
  */
 export function implantDensity(implant: ImplantProfile, peakDensity: number, depth: number): number {
   const u = (depth - implant.range) / implant.straggle;
@@ -191,7 +191,7 @@ export interface ImplantSpan {
  * @param background - NB, cm⁻³, > 0
  * @returns the conducting span
  * @throws PhysicsDomainError when the peak does not exceed the background
- * @example implantSpan({ dose: 1e14, range: 0.1, straggle: 0.05 }, 8e18, 1e15) // top 0, bottom ≈ 0.31
+ * @example implantSpan({ dose: 1e14, range: 0.1, straggle: 0.05 }, 8e18, 1e15) // → { top: 0, bottom: ≈ 0.31, buried: false } (µm)
  */
 export function implantSpan(implant: ImplantProfile, peakDensity: number, background: number): ImplantSpan {
   if (!(background > 0) || !Number.isFinite(background)) {

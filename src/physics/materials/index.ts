@@ -40,7 +40,7 @@ export const MATERIAL_CODES: readonly string[] = MATERIALS.map((material) => mat
  * @param code material code, e.g. 'Si' or 'si'
  * @returns the material with its parameter tables
  * @throws PhysicsDomainError listing the allowed codes if the code is unknown
- * @example resolveMaterial('si').name // 'silicon'
+ * @example resolveMaterial('si').name // → 'silicon'
  */
 export function resolveMaterial(code: string): Material {
   const wanted = String(code).trim().toLowerCase();

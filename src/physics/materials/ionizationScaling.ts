@@ -150,7 +150,7 @@ export interface MottScaledHost {
  * @param isolatedEnergy ΔE0, eV
  * @param energySource citation of ΔE0
  * @returns the dopant's table row
- * @example mottScaledDopant({ relativePermittivity: 16, mobilitySpeciesNote: '…' }, 'P', 'phosphorus', 'donor', 0.012, 'Sze & Ng 2007').degeneracy // 2
+ * @example mottScaledDopant({ relativePermittivity: 16, mobilitySpeciesNote: '…' }, 'P', 'phosphorus', 'donor', 0.012, 'Sze & Ng 2007').degeneracy // → 2
  */
 export function mottScaledDopant(
   host: MottScaledHost,

@@ -15,7 +15,7 @@ export const LOWEST_NUMERIC_TEMPERATURE = 1; // K
  * @param temperature K
  * @returns the temperature, unchanged
  * @throws PhysicsDomainError naming the value and the allowed range
- * @example checkTemperature(SILICON, 300) // 300
+ * @example checkTemperature(SILICON, 300) // → 300
  */
 export function checkTemperature(material: Material, temperature: number): number {
   const { min, max } = material.temperatureDomain;

@@ -18,7 +18,7 @@ import type { Sample } from '../sample';
  * @param names - how messages name the window's ends
  * @returns [N at ρmax, N at ρmin] in cm⁻³
  * @throws PhysicsDomainError (AmbiguousDopingError) as dopingForResistivity, for either end
- * @example dopingWindow(8, 12, siliconBoronAt300K) // ≈ [1.1e15, 1.7e15]
+ * @example dopingWindow(8, 12, boronAt300K) // ≈ [1.1e15, 1.7e15]
  */
 export function dopingWindow(
   resistivityMin: number,

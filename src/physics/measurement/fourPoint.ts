@@ -89,7 +89,7 @@ export function valdesDivisor(thicknessOverSpacing: number): number {
  *
  * @param thicknessOverSpacing - t/s, > 0
  * @returns F, 1 for t/s → 0
- * @example thicknessFactor(1) // ≈ 0.9214 (Smits 1958 table, from memory)
+ * @example thicknessFactor(1) // ≈ 0.9215 (Smits 1958 tabulates 0.9214, from memory)
  */
 export function thicknessFactor(thicknessOverSpacing: number): number {
   checkRatio('thickness/spacing', thicknessOverSpacing);
@@ -159,7 +159,7 @@ export interface ProbeGeometry {
  * @param current - I through the outer probes, A (same sign as V)
  * @param geometry - spacing, optional thickness and diameter, µm
  * @returns ρ in Ω·cm
- * @example fourPointResistivity(1e-3, 1e-3, { spacingUm: 1000 }) // 2π·0.1 cm·1 Ω ≈ 0.628 Ω·cm
+ * @example fourPointResistivity(1e-3, 1e-3, { spacingUm: 1000 }) // ≈ 0.628 Ω·cm (2π·0.1 cm·1 Ω)
  */
 export function fourPointResistivity(voltage: number, current: number, geometry: ProbeGeometry): number {
   const resistance = checkReading(voltage, current);

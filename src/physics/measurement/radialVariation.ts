@@ -23,7 +23,7 @@ function checkPositive(name: string, value: number): void {
  * @param centre - the centre reading (any positive quantity, e.g. Ω·cm)
  * @param edgeValues - one or more edge readings in the same unit
  * @returns (mean(edge) − centre)/centre × 100, in %
- * @example radialVariation(10, [10.5, 10.3, 10.4, 10.6]) // 4.5 %
+ * @example radialVariation(10, [10.5, 10.3, 10.4, 10.6]) // ≈ 4.5 %
  */
 export function radialVariation(centre: number, edgeValues: readonly number[]): number {
   checkPositive('center', centre);

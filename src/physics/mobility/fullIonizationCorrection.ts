@@ -53,7 +53,7 @@ export const FIT_REFERENCE_TEMPERATURE = 300;
  *
  * @param sample - the sample
  * @returns 'electron', 'hole' or undefined
- * @example netMajorityCarrier(phosphorusCounterDopedWithMoreBoron) // 'hole'
+ * @example netMajorityCarrier(phosphorus1e16CounterDoped2e16At300K) // → 'hole'
  */
 export function netMajorityCarrier(sample: Sample): Carrier | undefined {
   if (sample.density > sample.counterDensity) return suppliedCarrier(sample.dopant);
@@ -69,7 +69,7 @@ export function netMajorityCarrier(sample: Sample): Carrier | undefined {
  * @returns dimensionless factor: ≈ 1/(ionized fraction at 300 K) for extrinsic samples
  *   (≥ 1, up to about 1.3 near 1e18 cm⁻³), → 1 for samples intrinsic at 300 K, exactly 1
  *   for undoped or exactly compensated samples
- * @example fullIonizationCorrection(phosphorus1e18) // ≈ 1.24
+ * @example fullIonizationCorrection(phosphorus1e18At300K) // ≈ 1.24
  */
 export function fullIonizationCorrection(sample: Sample): number {
   const majority = netMajorityCarrier(sample);

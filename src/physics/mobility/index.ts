@@ -69,7 +69,7 @@ export const ALL_MOBILITY_MODEL_CODES: readonly string[] = [...MOBILITY_MODEL_CO
  *
  * @param material - host material
  * @returns silicon: MOBILITY_MODEL_CODES; other hosts: their own fits
- * @example mobilityModelCodes(GALLIUM_ARSENIDE) // ['sotoodeh']
+ * @example mobilityModelCodes(GALLIUM_ARSENIDE) // → ['sotoodeh']
  */
 export function mobilityModelCodes(material: Material): readonly string[] {
   const own = mobilityFitsFor(material.code).map((fit) => fit.code);
@@ -82,7 +82,7 @@ export function mobilityModelCodes(material: Material): readonly string[] {
  *
  * @param material - host material
  * @returns its default model code
- * @example defaultMobilityModel(SILICON) // 'masetti'
+ * @example defaultMobilityModel(SILICON) // → 'masetti'
  */
 export function defaultMobilityModel(material: Material): string {
   return mobilityModelCodes(material)[0];
@@ -108,8 +108,8 @@ export function materialsWithMobilityModel(code: string): string {
  * @returns the model code
  * @throws PhysicsDomainError listing the codes the material supports, for an
  *   unknown code or one without parameters for the material
- * @example resolveMobilityModel('ARORA') // 'arora'
- * @example resolveMobilityModel('', GALLIUM_ARSENIDE) // 'sotoodeh'
+ * @example resolveMobilityModel('ARORA') // → 'arora'
+ * @example resolveMobilityModel('', GALLIUM_ARSENIDE) // → 'sotoodeh'
  */
 export function resolveMobilityModel(code?: string, material: Material = SILICON): string {
   if (code === undefined || code.trim() === '') return defaultMobilityModel(material);
@@ -203,8 +203,8 @@ export function fitMobility(model: string, carrier: Carrier, sample: Sample): nu
  * @param carrier - 'electron' or 'hole'
  * @param sample - the sample
  * @returns the model code a blank model means for this carrier
- * @example defaultMobilityModelFor('electron', boron1e19At300K) // 'klaassen'
- * @example defaultMobilityModelFor('hole', boron1e19At300K) // 'masetti'
+ * @example defaultMobilityModelFor('electron', boron1e19At300K) // → 'klaassen'
+ * @example defaultMobilityModelFor('hole', boron1e19At300K) // → 'masetti'
  */
 export function defaultMobilityModelFor(carrier: Carrier, sample: Sample): string {
   const majority = netMajorityCarrier(sample);
@@ -221,7 +221,7 @@ export const SILICON_MINORITY_MOBILITY_MODEL: MobilityModelCode = 'klaassen';
  *
  * @param material - host material
  * @returns a model code of that material
- * @example defaultMinorityMobilityModel(SILICON) // 'klaassen'
+ * @example defaultMinorityMobilityModel(SILICON) // → 'klaassen'
  */
 export function defaultMinorityMobilityModel(material: Material): string {
   return material.code === SILICON.code ? SILICON_MINORITY_MOBILITY_MODEL : defaultMobilityModel(material);
@@ -256,7 +256,7 @@ function freeCarrierFactor(code: string, carrier: Carrier, sample: Sample): numb
  * @param sample - the sample
  * @returns μ in cm²/(V·s)
  * @example mobility('masetti', 'electron', arsenic1e18At300K) // ≈ 284 (Masetti et al. 1983, eq. 1)
- * @example mobility('', 'electron', boron1e19At300K) // ≈ 210 (klaassen, minority electrons)
+ * @example mobility('', 'electron', boron1e19At300K) // ≈ 211 (klaassen, minority electrons)
  */
 export function mobility(model: string, carrier: Carrier, sample: Sample): number {
   const code = modelFor(model, carrier, sample);
@@ -299,7 +299,7 @@ export interface DriftMobilities {
  * @param model - mobility model code (case-insensitive); '' for the material's default
  * @param sample - the sample
  * @returns { electron, hole } in cm²/(V·s)
- * @example driftMobilities('masetti', phosphorus1e18At300K) // { electron: ≈ 343 (277 × 1.24), hole: ≈ 160 }
+ * @example driftMobilities('masetti', phosphorus1e18At300K) // → { electron: ≈ 343, hole: ≈ 160 } (electrons: Masetti 277 × 1.24)
  */
 export function driftMobilities(model: string, sample: Sample): DriftMobilities {
   const code = resolveMobilityModel(model, sample.material);

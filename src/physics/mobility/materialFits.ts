@@ -82,7 +82,7 @@ export const MATERIAL_MOBILITY_FIT_CODES: readonly string[] = MATERIAL_MOBILITY_
  *
  * @param code - e.g. 'sotoodeh'
  * @returns the fit, or undefined for other codes
- * @example materialMobilityFit('sotoodeh')?.materialCode // 'GaAs'
+ * @example materialMobilityFit('sotoodeh')?.materialCode // → 'GaAs'
  */
 export function materialMobilityFit(code: string): MaterialMobilityFit | undefined {
   return MATERIAL_MOBILITY_FITS.find((fit) => fit.code === code);
@@ -93,7 +93,7 @@ export function materialMobilityFit(code: string): MaterialMobilityFit | undefin
  *
  * @param materialCode - e.g. 'GaAs'
  * @returns the fits whose parameters belong to that material (none for Si)
- * @example mobilityFitsFor('4H-SiC')[0].code // 'roschke-schwierz'
+ * @example mobilityFitsFor('4H-SiC')[0].code // → 'roschke-schwierz'
  */
 export function mobilityFitsFor(materialCode: string): readonly MaterialMobilityFit[] {
   return MATERIAL_MOBILITY_FITS.filter((fit) => fit.materialCode === materialCode);
@@ -111,7 +111,7 @@ function scaled(coefficient: ScaledCoefficient, reducedTemperature: number): num
  * @param totalDensity - total impurity density N ≥ 0, cm⁻³
  * @param temperature - T > 0, K
  * @returns μ in cm²/(V·s)
- * @example materialFitMobility(GALLIUM_ARSENIDE_SOTOODEH_FIT, 'electron', 0, 300) // 9400
+ * @example materialFitMobility(materialMobilityFit('sotoodeh')!, 'electron', 0, 300) // ≈ 9400
  */
 export function materialFitMobility(fit: MaterialMobilityFit, carrier: Carrier, totalDensity: number, temperature: number): number {
   const p = fit.parameters[carrier];
