@@ -39,6 +39,8 @@ interface QuantityEntry {
   readonly parameter: ParameterSpec;
   /** What the codes are, for help. */
   readonly what: string;
+  /** The functions whose model argument takes them, for help (tests/catalog/modelCodes.test.ts holds these to the catalog). */
+  readonly takenBy: readonly string[];
   /** The codes for a host, and a dopant when one is given; default first. */
   readonly codes: (host: Material, dopant: Dopant | undefined) => readonly string[];
 }
@@ -72,23 +74,27 @@ function bandgapNarrowingCodes(host: Material): readonly string[] {
 const QUANTITIES: Readonly<Record<ModelQuantity, QuantityEntry>> = {
   resistivity: {
     parameter: resistivityModel,
-    what: 'resistivity models (the `model` argument of RESISTIVITY, CONDUCTIVITY, DOPING, DOPINGRANGE, RESISTIVITYAT, TCR)',
+    what: 'resistivity models',
+    takenBy: ['RESISTIVITY', 'CONDUCTIVITY', 'DOPING', 'DOPINGRANGE', 'RESISTIVITYAT', 'TCR'],
     codes: (host, dopant) =>
       resistivityModelCodes(host).filter((code) => code !== ASTM_F723_CODE || dopant === undefined || f723CoversDopant(dopant)),
   },
   mobility: {
     parameter: mobilityModel,
-    what: 'mobility models (MOBILITY, FREEMOBILITY, DIFFUSIVITY)',
+    what: 'mobility models',
+    takenBy: ['MOBILITY', 'FREEMOBILITY', 'DIFFUSIVITY'],
     codes: (host) => mobilityModelCodes(host),
   },
   intrinsic: {
     parameter: intrinsicModel,
-    what: 'intrinsic-density models (INTRINSIC)',
+    what: 'intrinsic-density (ni) models',
+    takenBy: ['INTRINSIC'],
     codes: (host) => intrinsicModelCodes(host),
   },
   'bandgap-narrowing': {
     parameter: bandgapNarrowingModel,
-    what: 'apparent bandgap-narrowing models (NIEFF; silicon only)',
+    what: 'apparent bandgap-narrowing models, silicon only',
+    takenBy: ['NIEFF'],
     codes: (host) => bandgapNarrowingCodes(host),
   },
 };
@@ -96,8 +102,13 @@ const QUANTITIES: Readonly<Record<ModelQuantity, QuantityEntry>> = {
 /** The quantity words, in the order help lists them. */
 export const MODEL_QUANTITIES = Object.keys(QUANTITIES) as readonly ModelQuantity[];
 
-/** "resistivity: resistivity models (…); mobility: …", for help. */
-export const MODEL_QUANTITY_LIST = MODEL_QUANTITIES.map((quantity) => `${quantity}: ${QUANTITIES[quantity].what}`).join('; ');
+/** "resistivity: resistivity models (RESISTIVITY, …); mobility: …", for help. */
+export const MODEL_QUANTITY_LIST = MODEL_QUANTITIES.map((quantity) => `${quantity}: ${QUANTITIES[quantity].what} (${QUANTITIES[quantity].takenBy.join(', ')})`).join('; ');
+
+/** The functions whose model argument takes a quantity's codes, as help names them. */
+export function functionsTaking(quantity: ModelQuantity): readonly string[] {
+  return QUANTITIES[quantity].takenBy;
+}
 
 /** DRIFT.MODELCODES' first argument: a quantity word, any case. */
 export const modelQuantity = codeParameter<ModelQuantity>({

@@ -189,10 +189,10 @@ function literalArguments(args: readonly Ast[]): ArgumentInput[] | undefined {
 function rowNeedsLiteralsMessage(spec: FunctionSpec): string {
   const example = spec.examples[0]?.formula.replace(/^=/, '');
   return (
-    `${qualifiedName(spec)} needs its arguments typed in the formula here (text in quotes, or left out)` +
+    `${qualifiedName(spec)} needs its arguments typed into the formula in this engine (driftcell calc, recalc)` +
     `${example ? `, e.g. ${example}` : ''}: the length of its row depends on their values, and this engine fixes ` +
-    'a result\'s size from the formula text before any cell is read, so a cell reference or computed argument cannot be used. ' +
-    'Excel spills a row of any length.'
+    "a result's size from the formula text before reading any cell, so a cell reference or a computed argument cannot be used here. " +
+    'Excel also takes them from cells.'
   );
 }
 
