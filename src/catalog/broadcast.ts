@@ -7,11 +7,13 @@
  * gives the full grid. Where an argument is neither 1 nor the full size, the
  * elements it cannot supply are #N/A, as Excel's own array arithmetic does.
  *
- * Two extensions: a reducing argument (ParameterSpec.reduce) is consumed whole
+ * Three extensions: a reducing argument (ParameterSpec.reduce) is consumed whole
  * and takes no part in the shape; a tuple function (TupleSpec) gives one row
- * of fixed width per element of its single-value or column arguments.
+ * of fixed width per element of its single-value or column arguments; a row
+ * function (RowSpec) gives one row whose length its single-value arguments'
+ * values decide, and refuses a multi-cell argument.
  */
-import type { ElementwiseSpec, FunctionSpec, ParameterSpec, TupleSpec } from './types';
+import type { ElementwiseSpec, FunctionSpec, ParameterSpec, RowSpec, TupleSpec } from './types';
 import { InputError, failure, isFailure, type ArgumentInput, type CellFailure, type CellInput, type CellOutput, type Grid } from './values';
 import { PhysicsDomainError } from '../physics/errors';
 import { qualifiedName } from './naming';
@@ -36,6 +38,7 @@ export function evaluate(spec: FunctionSpec, args: readonly ArgumentInput[]): Gr
   }
   if (spec.kind === 'table') return spec.table();
   if (spec.kind === 'tuple') return evaluateTuple(spec, args, qualified);
+  if (spec.kind === 'row') return evaluateRow(spec, args, qualified);
   return evaluateElementwise(spec, args, qualified);
 }
 
@@ -195,6 +198,33 @@ function computeTuple(spec: TupleSpec, values: readonly unknown[], qualified: st
     return [...result];
   } catch (e) {
     return toFailure(e, qualified);
+  }
+}
+
+/**
+ * A row function: every argument one value (a multi-cell one is refused,
+ * since rows of different lengths cannot be stacked), then the one row, or
+ * one error for the whole call.
+ */
+function evaluateRow(spec: RowSpec, args: readonly ArgumentInput[], qualified: string): Grid<CellOutput> {
+  const values = new Array<unknown>(spec.parameters.length);
+  for (let i = 0; i < spec.parameters.length; i++) {
+    const grid = toGrid(args[i]);
+    if (grid.length > 1 || grid[0].length > 1) {
+      return [[failure('#VALUE!', `${qualified} gives one row whose length depends on its arguments, so ${spec.parameters[i].name} must be a single value, not ${grid.length}×${grid[0].length} values; call it once per value instead`)]];
+    }
+    const value = parseElement(spec.parameters[i], grid[0][0]);
+    if (isFailure(value)) return [[value]];
+    values[i] = value;
+  }
+  try {
+    const row = (spec.compute as (...a: unknown[]) => readonly (string | number)[])(...values);
+    if (row.length === 0) return [[failure('#VALUE!', `internal error in ${qualified}: an empty row`)]];
+    const bad = row.find((x) => typeof x === 'number' && !Number.isFinite(x));
+    if (bad !== undefined) return [[failure('#NUM!', `${qualified} has no finite result for these inputs (got ${bad})`)]];
+    return [[...row]];
+  } catch (e) {
+    return [[toFailure(e, qualified)]];
   }
 }
 

@@ -20,6 +20,7 @@ import { MINORITY } from './functions/minority';
 import { MOBILITY } from './functions/mobility';
 import { FREEMOBILITY } from './functions/freemobility';
 import { MODELS } from './functions/models';
+import { MODELCODES } from './functions/modelcodes';
 import { CONDUCTIONDOS } from './functions/conductiondos';
 import { INTRINSIC } from './functions/intrinsic';
 import { NIEFF } from './functions/nieff';
@@ -82,6 +83,7 @@ export const CATALOG: readonly FunctionSpec[] = [
   DOPINGSPREAD,
   RADIALVARIATION,
   MODELS,
+  MODELCODES,
 ] as readonly FunctionSpec[];
 
 const BY_NAME = new Map(CATALOG.map((spec) => [spec.name, spec]));
@@ -94,5 +96,5 @@ export function findFunction(name: string): FunctionSpec | undefined {
 
 export { evaluate, toFailure, unwrapSingle } from './broadcast';
 export { NAMESPACE, qualifiedName } from './naming';
-export type { FunctionSpec, ParameterSpec, ElementwiseSpec, TableSpec, TupleSpec } from './types';
+export type { FunctionSpec, ParameterSpec, ElementwiseSpec, TableSpec, TupleSpec, RowSpec } from './types';
 export * from './values';

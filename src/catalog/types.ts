@@ -104,7 +104,21 @@ export interface TupleSpec<P extends readonly ParameterSpec[] = AnyParameters> e
   readonly compute: (...args: ParsedArguments<P>) => readonly number[];
 }
 
-export type FunctionSpec = ElementwiseSpec<AnyParameters> | TableSpec | TupleSpec<AnyParameters>;
+/**
+ * A function whose every call gives one row whose length depends on the
+ * values of its arguments, not on their shapes (DRIFT.MODELCODES: the codes
+ * that apply to a quantity and material). Every argument is a single value:
+ * a multi-cell argument is refused with one error, because rows of different
+ * lengths cannot be stacked into one result. No argument reduces.
+ */
+export interface RowSpec<P extends readonly ParameterSpec[] = AnyParameters> extends SpecCommon {
+  readonly kind: 'row';
+  readonly parameters: P;
+  /** The row, at least one value long; an InputError or PhysicsDomainError it throws becomes the call's one error. */
+  readonly compute: (...args: ParsedArguments<P>) => readonly (string | number)[];
+}
+
+export type FunctionSpec = ElementwiseSpec<AnyParameters> | TableSpec | TupleSpec<AnyParameters> | RowSpec<AnyParameters>;
 
 /** Declares an elementwise function with its argument types inferred. */
 export function elementwise<const P extends readonly ParameterSpec[]>(
@@ -120,4 +134,9 @@ export function tableFunction(spec: Omit<TableSpec, 'kind' | 'parameters'>): Tab
 /** Declares a function that returns a fixed-length row per call, argument types inferred. */
 export function tupleFunction<const P extends readonly ParameterSpec[]>(spec: Omit<TupleSpec<P>, 'kind'>): TupleSpec<P> {
   return { kind: 'tuple', ...spec };
+}
+
+/** Declares a function whose row's length follows its arguments' values, argument types inferred. */
+export function rowFunction<const P extends readonly ParameterSpec[]>(spec: Omit<RowSpec<P>, 'kind'>): RowSpec<P> {
+  return { kind: 'row', ...spec };
 }

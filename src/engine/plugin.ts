@@ -10,6 +10,15 @@
  * widest, where an argument's shape comes from the formula text (a range, an
  * inline array {1,2,3}, array arithmetic such as A2:A9*1e15, or a nested call,
  * DRIFT or built-in, whose own size is predicted the same way).
+ *
+ * A row function (DRIFT.MODELCODES) is the exception: its length follows its
+ * arguments' values. When they are literals in the formula text (text,
+ * numbers, TRUE/FALSE, blanks, left out) the prediction computes the row from
+ * them, so it is exact, also nested inside another DRIFT function's argument.
+ * HyperFormula fixes the size once, when it reads the formula, and keeps it
+ * when a referenced cell changes (a larger result would not fit, a smaller
+ * one would leave blank cells in its area), so a cell reference or computed
+ * argument makes the call an error that says to type the arguments instead.
  */
 import { ArraySize, CellError, ErrorType, FunctionArgumentType, FunctionPlugin, HyperFormula } from 'hyperformula';
 import type { FunctionArgument, ImplementedFunctions } from 'hyperformula';
@@ -17,6 +26,7 @@ import type { InterpreterState } from 'hyperformula/typings/interpreter/Interpre
 import type { InterpreterValue } from 'hyperformula/typings/interpreter/InterpreterValue';
 import type { Ast, ProcedureAst } from 'hyperformula/typings/parser';
 import { CATALOG } from '../catalog';
+import type { ArgumentInput, CellInput } from '../catalog/values';
 import { evaluate } from '../catalog/broadcast';
 import { qualifiedName } from '../catalog/naming';
 import type { FunctionSpec } from '../catalog/types';
@@ -69,6 +79,10 @@ export class DriftFunctionPlugin extends FunctionPlugin {
   /** Evaluates any DRIFT function: arguments to catalog inputs, catalog evaluate(), result back. */
   evaluateDriftFunction(ast: ProcedureAst, state: InterpreterState): InterpreterValue {
     const spec = specFor(ast.procedureName);
+    if (spec.kind === 'row' && ast.args.length <= spec.parameters.length && literalArguments(ast.args) === undefined) {
+      // The row's length could not be known when the formula was read (see the module note).
+      return new CellError(ErrorType.VALUE, rowNeedsLiteralsMessage(spec));
+    }
     const argumentState = arrayState(state);
     const args = ast.args.map((argument) => toArgumentInput(this.evaluateAst(argument, argumentState)));
     const grid = evaluate(spec, args);
@@ -97,6 +111,13 @@ export class DriftFunctionPlugin extends FunctionPlugin {
       const table = spec.table();
       return new ArraySize(table[0]?.length ?? 1, table.length || 1);
     }
+    if (spec.kind === 'row') {
+      // Exact from literal arguments; otherwise evaluation gives one error (rowNeedsLiteralsMessage).
+      const literal = literalArguments(ast.args);
+      if (literal === undefined) return ArraySize.scalar();
+      const row = evaluate(spec, literal);
+      return new ArraySize(row[0].length, row.length);
+    }
     const argumentState = arrayState(state);
     let width = 1;
     let height = 1;
@@ -113,6 +134,66 @@ export class DriftFunctionPlugin extends FunctionPlugin {
     }
     return new ArraySize(width, height);
   }
+}
+
+/** One literal scalar of a formula (text, number, signed number, TRUE/FALSE, an empty argument), or undefined. */
+function literalScalar(ast: Ast): CellInput | undefined {
+  switch (ast.type as string) {
+    case 'EMPTY':
+      return null;
+    case 'NUMBER':
+    case 'STRING':
+      return (ast as { value: number | string }).value;
+    case 'MINUS_UNARY_OP':
+    case 'PLUS_UNARY_OP': {
+      const inner = literalScalar((ast as { value: Ast }).value);
+      if (typeof inner !== 'number') return undefined;
+      return (ast.type as string) === 'MINUS_UNARY_OP' ? -inner : inner;
+    }
+    case 'PARENTHESIS':
+      return literalScalar((ast as { expression: Ast }).expression);
+    case 'FUNCTION_CALL': {
+      const call = ast as ProcedureAst;
+      if (call.args.length !== 0) return undefined;
+      if (call.procedureName.toUpperCase() === 'TRUE') return true;
+      if (call.procedureName.toUpperCase() === 'FALSE') return false;
+      return undefined;
+    }
+    default:
+      return undefined;
+  }
+}
+
+/**
+ * A call's arguments as the catalog would receive them, when every one is a
+ * literal or an inline array of literals; undefined when any is a reference,
+ * a name or computed, whose value the formula text does not hold.
+ */
+function literalArguments(args: readonly Ast[]): ArgumentInput[] | undefined {
+  const values: ArgumentInput[] = [];
+  for (const argument of args) {
+    if ((argument.type as string) === 'ARRAY') {
+      const rows = (argument as { args: Ast[][] }).args.map((row) => row.map(literalScalar));
+      if (rows.some((row) => row.some((value) => value === undefined))) return undefined;
+      values.push(rows as CellInput[][]);
+      continue;
+    }
+    const value = literalScalar(argument);
+    if (value === undefined) return undefined;
+    values.push(value);
+  }
+  return values;
+}
+
+/** What a row function says when an argument is not typed in the formula. */
+function rowNeedsLiteralsMessage(spec: FunctionSpec): string {
+  const example = spec.examples[0]?.formula.replace(/^=/, '');
+  return (
+    `${qualifiedName(spec)} needs its arguments typed into the formula in this engine (driftcell calc, recalc)` +
+    `${example ? `, e.g. ${example}` : ''}: the length of its row depends on their values, and this engine fixes ` +
+    "a result's size from the formula text before reading any cell, so a cell reference or a computed argument cannot be used here. " +
+    'Excel also takes them from cells.'
+  );
 }
 
 /** Function names in every registered language: DRIFT names are not translated. */

@@ -94,3 +94,37 @@ describe('parseDigits and formulasOfText', () => {
     expect(formulasOfText('\n#c\nA\n', 'f')).toEqual([{ text: 'A', label: 'f line 3' }]);
   });
 });
+
+describe('DRIFT.MODELCODES, a row whose length its arguments decide', () => {
+  const codes = ['f723-anchored', 'masetti', 'arora', 'caughey-thomas', 'klaassen', 'astm-f723'];
+
+  it('prints the codes as one tab-separated row, and as an array constant in a batch', () => {
+    expect(calc(['DRIFT.MODELCODES("resistivity","Si","B")'])).toEqual({ status: 0, out: [codes.join('\t')], err: [] });
+    expect(calc(['DRIFT.MODELCODES("resistivity",,"Ga")', 'DRIFT.MODELCODES("intrinsic","Ge")'])).toEqual({
+      status: 0,
+      out: [`{${codes.slice(0, 5).map((code) => `"${code}"`).join(',')}}`, '"dos"'],
+      err: [],
+    });
+  });
+
+  it('spills a model-taking function across every model: one value per code', () => {
+    const result = calc(['DRIFT.RESISTIVITY({1e15;1e16},"B",300,DRIFT.MODELCODES("resistivity","Si","B"))']);
+    expect(result.status).toBe(0);
+    expect(result.out).toHaveLength(2);
+    for (const line of result.out) expect(line.split('\t')).toHaveLength(codes.length);
+    expect(result.out).toEqual(calc([`DRIFT.RESISTIVITY({1e15;1e16},"B",300,{${codes.map((code) => `"${code}"`).join(',')}})`]).out);
+  });
+
+  it('exits 1 with the engine’s reason when an argument is computed rather than typed', () => {
+    const result = calc(['DRIFT.MODELCODES("resist"&"ivity")']);
+    expect(result.status).toBe(1);
+    expect(result.out).toEqual([expect.stringMatching(/^#VALUE! DRIFT\.MODELCODES needs its arguments typed into the formula in this engine \(driftcell calc, recalc\)/)]);
+  });
+
+  it('exits 1 naming what is allowed for an unknown quantity', () => {
+    expect(calc(['DRIFT.MODELCODES("conductance")'])).toMatchObject({
+      status: 1,
+      out: ['#VALUE! quantity "conductance" is not known; allowed: resistivity, mobility, intrinsic, bandgap-narrowing'],
+    });
+  });
+});

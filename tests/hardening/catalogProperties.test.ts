@@ -5,13 +5,16 @@
  *
  * For any arguments, evaluate():
  * - returns (never throws) a non-empty rectangular grid;
- * - holds only finite numbers, text (table functions only) and failures;
+ * - holds only finite numbers, text (table and row functions only) and failures;
  * - gives every failure it makes itself a known code and a non-empty message
  *   that names the argument or the function, and never an "internal error";
  *   an upstream error passes through as the very same value;
  * - gives an error to every element fed by an element its parameter's
  *   contract rejects (blank required argument, upstream error, boolean,
  *   non-numeric text, code not in choices());
+ * - for a row function (one row whose length its values decide): gives one
+ *   row, or one error for the whole call when an argument is bad or holds
+ *   more than one cell, that error naming the argument;
  * - terminates (bounded number of runs; jest's timeout is generous, not a timed assertion).
  */
 import fc from 'fast-check';
@@ -45,7 +48,7 @@ function inputFailures(args: readonly ArgumentInput[]): Set<CellFailure> {
 /** A problem with one output element, or null when it is well-formed. */
 function elementProblem(spec: FunctionSpec, value: CellOutput, upstream: Set<CellFailure>): string | null {
   if (typeof value === 'number') return Number.isFinite(value) ? null : `non-finite number ${value}`;
-  if (typeof value === 'string') return spec.kind === 'table' ? null : `text "${value}" from a function that is not a table`;
+  if (typeof value === 'string') return spec.kind === 'table' || spec.kind === 'row' ? null : `text "${value}" from a function that is neither a table nor a row`;
   if (!isFailure(value)) return `neither number, text nor failure: ${JSON.stringify(value)}`;
   if (!KNOWN_CODES.has(value.code)) return `unknown error code ${String(value.code)}`;
   if (upstream.has(value)) return null;
@@ -119,6 +122,26 @@ function checkBadElementsGetErrors(spec: FunctionSpec, args: readonly ArgumentIn
   }
 }
 
+/**
+ * For row functions: one row, or one error for the whole call where the
+ * first argument that is bad or holds several cells says so.
+ */
+function checkRowShape(spec: FunctionSpec, args: readonly ArgumentInput[], grid: Grid<CellOutput>): void {
+  const params = parametersOf(spec);
+  if (spec.kind !== 'row' || args.length > params.length) return;
+  const fail = (why: string) => new Error(`${qualifiedName(spec)}(${JSON.stringify(args)}): ${why}, got ${JSON.stringify(grid)}`);
+  if (grid.length !== 1) throw fail('a row function gave more than one row');
+  for (let i = 0; i < params.length; i++) {
+    const argument = asGrid(args[i]);
+    const several = argument.length > 1 || argument[0].length > 1;
+    if (!several && !plainlyBad(params[i], argument[0][0])) continue;
+    if (grid[0].length !== 1 || !isFailure(grid[0][0])) throw fail(`argument ${params[i].name} is ${several ? 'several cells' : 'bad'} but the call gave no single error`);
+    const failed = grid[0][0];
+    if (several && !inputFailures([args[i]]).has(failed) && !failed.message.includes(`${params[i].name} must be a single value`)) throw fail(`the error does not name ${params[i].name}`);
+    return;
+  }
+}
+
 describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s under random and adversarial arguments', (_name, spec) => {
   const params = parametersOf(spec);
 
@@ -129,6 +152,7 @@ describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s u
         fc.property(argumentsFor(params), (args) => {
           const grid = checkedEvaluate(spec, args);
           checkBadElementsGetErrors(spec, args, grid);
+          checkRowShape(spec, args, grid);
         }),
         { numRuns: RUNS },
       );
@@ -180,6 +204,7 @@ describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s u
             });
             const grid = checkedEvaluate(spec, args);
             checkBadElementsGetErrors(spec, args, grid);
+            checkRowShape(spec, args, grid);
           },
         ),
         { numRuns: 3 },

@@ -148,7 +148,9 @@ function resultBlock(spec: FunctionSpec): string {
       ? 'It spills a table.'
       : spec.kind === 'tuple'
         ? `It spills one row of ${spec.columns.length} values: ${spec.columns.join(', ')}. Given columns instead of single values, it spills one such row per element; a bad element gets an error with a message across its row, and the other rows still compute.`
-        : 'Given ranges or arrays, it spills one result per element, broadcasting as Excel’s own functions do; a bad element gets an error with a message, and the other elements still compute.';
+        : spec.kind === 'row'
+          ? 'It spills one row, as long as its arguments’ values make it; every argument is one value, and a range is refused with an error.'
+          : 'Given ranges or arrays, it spills one result per element, broadcasting as Excel’s own functions do; a bad element gets an error with a message, and the other elements still compute.';
   const reducing = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.reduce).map((p) => p.name);
   const whole = reducing.length === 0 ? '' : ` ${reducing.join(', ')} is taken whole, as one argument: a range there is reduced to one value, not broadcast.`;
   return `<p>${escapeHtml(spec.result.description)}${unit}. ${escapeHtml(shape + whole)}</p>`;

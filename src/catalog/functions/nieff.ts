@@ -10,7 +10,7 @@ import { elementwise } from '../types';
 import { BANDGAP_NARROWING_MODELS } from '../citedModels';
 
 /** The apparent bandgap-narrowing model; blank means the default, klaassen-bgn. */
-const bandgapNarrowingModel = codeParameter<string>({
+export const bandgapNarrowingModel = codeParameter<string>({
   name: 'model',
   description: `Apparent bandgap-narrowing model (silicon): ${BANDGAP_NARROWING_MODEL_CODES.join(', ')}; blank means ${BANDGAP_NARROWING_MODEL_CODES[0]}.`,
   choices: () => BANDGAP_NARROWING_MODEL_CODES,

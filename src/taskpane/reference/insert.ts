@@ -5,6 +5,7 @@
  * are prefilled from the entry's first example made of plain values; the
  * rest stay blank (an optional argument left blank takes its default).
  */
+import { evaluate } from '../../catalog/broadcast';
 import { readCall } from '../../catalog/literalCall';
 import { qualifiedName } from '../../catalog/naming';
 import type { FunctionSpec, ParameterSpec } from '../../catalog/types';
@@ -60,9 +61,17 @@ export function prefillValues(spec: FunctionSpec): Prefill[] {
   return spec.parameters.map((parameter, index) => usable(chosen[index], parameter) ?? [null]);
 }
 
-/** Rows × columns a call of the entry with one value per argument shows. */
+/**
+ * Rows × columns a call of the entry with one value per argument shows; for a
+ * row entry (DRIFT.MODELCODES), whose length follows its arguments' values,
+ * the row its prefilled values give.
+ */
 export function resultSize(spec: FunctionSpec): { rows: number; columns: number } {
   if (spec.kind === 'tuple') return { rows: 1, columns: spec.columns.length };
+  if (spec.kind === 'row') {
+    const row = evaluate(spec, prefillValues(spec).map((cells) => cells[0]));
+    return { rows: 1, columns: Math.max(1, row[0]?.length ?? 1) };
+  }
   if (spec.kind === 'table') {
     const table = spec.table();
     return { rows: Math.max(1, table.length), columns: Math.max(1, table[0]?.length ?? 1) };
