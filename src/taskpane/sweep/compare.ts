@@ -24,7 +24,8 @@ export const COMPARE_MODELS_HELP =
   'Draws every model that applies to this material and dopant (as DRIFT.MODELCODES lists them), the default model emphasised, ' +
   'and shades the band from the lowest to the highest. The band is how far published fits disagree with one another, ' +
   'not a measurement uncertainty: a real sample can lie outside it. Insert writes the model codes as a header row above one ' +
-  'spilled formula with a column per model, and a chart with one series per model.';
+  'spilled formula with a column per model, and a chart with one series per model. The default is the first code listed: for ' +
+  'mobility the material’s default fit, although a blank mobility model gives silicon minority carriers klaassen.';
 
 /** The model setting of a quantity that compare-models replaces. */
 export interface ModelSetting {
