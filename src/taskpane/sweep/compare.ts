@@ -21,11 +21,9 @@ const MODEL_CODES_FUNCTION = 'MODELCODES';
 
 /** Help shown beside the option: what the band is and is not. */
 export const COMPARE_MODELS_HELP =
-  'Draws every model that applies to this material and dopant (as DRIFT.MODELCODES lists them), the default model emphasised, ' +
-  'and shades the band from the lowest to the highest. The band is how far published fits disagree with one another, ' +
-  'not a measurement uncertainty: a real sample can lie outside it. Insert writes the model codes as a header row above one ' +
-  'spilled formula with a column per model, and a chart with one series per model. The default is the first code listed: for ' +
-  'mobility the material’s default fit, although a blank mobility model gives silicon minority carriers klaassen.';
+  'Draws every model that applies to this material and dopant (DRIFT.MODELCODES), the default heavier, over a band from the ' +
+  'lowest to the highest. The band is how far published fits disagree with one another, not a measurement uncertainty. ' +
+  'Inserts the codes as a header row over one formula, a column and a chart series per model.';
 
 /** The model setting of a quantity that compare-models replaces. */
 export interface ModelSetting {

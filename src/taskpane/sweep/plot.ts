@@ -36,6 +36,16 @@ interface Scale {
   readonly label: (value: number) => string;
 }
 
+/** About four round (1-2-5) values from lo to hi. */
+function linearTicks(lo: number, hi: number): number[] {
+  const rough = (hi - lo) / 4;
+  const power = 10 ** Math.floor(Math.log10(rough));
+  const step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= rough) ?? rough;
+  const ticks: number[] = [];
+  for (let t = Math.ceil(lo / step) * step; t <= hi + step * 1e-9; t += step) ticks.push(Number(t.toPrecision(10)));
+  return ticks;
+}
+
 /** A scale over [min, max] onto [start, end] pixels, log10 or linear. */
 export function makeScale(min: number, max: number, start: number, end: number, logarithmic: boolean): Scale {
   const f = logarithmic ? Math.log10 : (v: number) => v;
@@ -53,14 +63,29 @@ export function makeScale(min: number, max: number, start: number, end: number, 
     const every = Math.max(1, Math.ceil((last - first + 1) / 6));
     ticks = [];
     for (let e = first; e <= last; e += every) ticks.push(10 ** e);
-  } else {
-    const rough = (hi - lo) / 4;
-    const power = 10 ** Math.floor(Math.log10(rough));
-    const step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= rough) ?? rough;
-    ticks = [];
-    for (let t = Math.ceil(lo / step) * step; t <= hi + step * 1e-9; t += step) ticks.push(Number(t.toPrecision(10)));
-  }
-  const label = (value: number) => (logarithmic ? `1e${Math.round(Math.log10(value))}` : Number(value.toPrecision(4)).toString());
+    // Less than a decade shown (models compared at one doping, a narrow temperature range): 1-2-5, then every
+    // mantissa, so the axis still carries at least two labelled values.
+    for (const mantissas of [[1, 2, 5], [1, 2, 3, 4, 5, 6, 7, 8, 9]]) {
+      if (ticks.length >= 2) break;
+      ticks = [];
+      for (let e = Math.floor(lo); e <= Math.ceil(hi); e++) {
+        for (const m of mantissas) {
+          const exponent = Math.log10(m) + e;
+          if (exponent >= lo - 1e-9 && exponent <= hi + 1e-9) ticks.push(Number((m * 10 ** e).toPrecision(12)));
+        }
+      }
+    }
+    // Narrower still (11 to 17): round values as on a linear axis.
+    if (ticks.length < 2) ticks = linearTicks(10 ** lo, 10 ** hi);
+  } else ticks = linearTicks(lo, hi);
+  const label = (value: number) => {
+    if (!logarithmic) return Number(value.toPrecision(4)).toString();
+    const exponent = Math.floor(Math.log10(value) + 1e-9);
+    const mantissa = value / 10 ** exponent;
+    // 1e16, 2e1 on decades and 1-2-5 ticks; a round value between (12) as it is.
+    if (Math.abs(mantissa - Math.round(mantissa)) < 1e-9) return `${Math.round(mantissa)}e${exponent}`;
+    return exponent >= 4 || exponent < -2 ? `${Number(mantissa.toPrecision(3))}e${exponent}` : Number(value.toPrecision(4)).toString();
+  };
   return { toPixel, ticks, label };
 }
 
@@ -101,9 +126,14 @@ function ends(series: PreviewSeries): string {
   return `${short(first[1])} at ${short(first[0])} to ${short(last[1])} at ${short(last[0])}`;
 }
 
+/** A message without its closing full stop, for use inside parentheses. */
+function withoutFullStop(message: string): string {
+  return message.replace(/\.\s*$/, '');
+}
+
 /** What each model refused, e.g. 'astm-f723 refused 3 of 4 values (#VALUE! …)'. */
 export function refusalText(series: PreviewSeries): string | null {
-  return series.refused === undefined ? null : `${series.name} refused ${series.refused.count} of ${series.refused.of} values (${series.refused.message})`;
+  return series.refused === undefined ? null : `${series.name} refused ${series.refused.count} of ${series.refused.of} values (${withoutFullStop(series.refused.message)})`;
 }
 
 /** The compare-models text: the models, the default's ends, how wide the band gets, and each model's refusals. */
@@ -150,7 +180,7 @@ export function drawLegend(doc: Document, preview: Preview, id: string): HTMLULi
     if (refused !== null) {
       const note = doc.createElement('span');
       note.className = 'sw-legend-note';
-      note.textContent = series.points.length === 0 ? ` no values: ${series.refused!.message}` : ` gaps: refused ${series.refused!.count} of ${series.refused!.of} values (${series.refused!.message})`;
+      note.textContent = series.points.length === 0 ? ` no values: ${series.refused!.message}` : ` gaps: refused ${series.refused!.count} of ${series.refused!.of} values (${withoutFullStop(series.refused!.message)})`;
       item.append(note);
     }
     list.append(item);
