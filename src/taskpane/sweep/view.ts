@@ -1,8 +1,8 @@
 /**
  * The Sweep builder's controls: quantity, its settings (read from the
- * catalog), the doping and temperature axes, the formula it will write, a
- * live preview plot and the Insert button. Logic lives in settings.ts,
- * plan.ts, preview.ts and insert.ts; this module builds elements and reads
+ * catalog), compare models, the doping and temperature axes, the formula it
+ * will write, a live preview plot and the Insert button. Logic lives in
+ * settings.ts, compare.ts, plan.ts, preview.ts and insert.ts; this module builds elements and reads
  * them back.
  */
 import { parseDecimalText } from '../../catalog/parameters';
