@@ -40,6 +40,8 @@ export interface ChartSeries {
   readonly name: string;
   readonly x: CellBlock;
   readonly y: CellBlock;
+  /** Drawn with a heavier line (the default model among compared ones); absent means a normal line. */
+  readonly emphasised?: boolean;
 }
 
 /** A native XY (scatter with lines) chart. */

@@ -8,7 +8,7 @@ import { OfficeMockObject } from 'office-addin-mock';
 // office-addin-mock needs only the OfficeApp enum from office-addin-manifest, whose main entry loads
 // ES-module-only packages jest cannot require; hand it the enum's own module.
 jest.mock('office-addin-manifest', () => jest.requireActual('office-addin-manifest/lib/officeApp'));
-import { createExcelPort, type ExcelHost } from '../../src/taskpane/excelPort';
+import { EMPHASISED_LINE_POINTS, createExcelPort, type ExcelHost } from '../../src/taskpane/excelPort';
 import type { CellBlock } from '../../src/taskpane/port';
 
 /** Builds a mock Excel whose worksheets/ranges/charts record every call into `log`. */
@@ -21,7 +21,7 @@ function mockExcel(rangeData: Record<string, unknown> = {}) {
     position: [],
     conditional: [],
   };
-  const makeSeries = () => ({ name: '', x: null as unknown, y: null as unknown, setXAxisValues(r: unknown) { this.x = r; }, setValues(r: unknown) { this.y = r; } });
+  const makeSeries = () => ({ name: '', x: null as unknown, y: null as unknown, format: { line: { weight: 0 } }, setXAxisValues(r: unknown) { this.x = r; }, setValues(r: unknown) { this.y = r; } });
   const firstSeries = makeSeries();
   const addedSeries: ReturnType<typeof makeSeries>[] = [];
   const conditionalFormat = { cellValue: { rule: null as unknown, format: { fill: { color: '' }, font: { color: '' } } } };
@@ -178,6 +178,23 @@ describe('createExcelPort', () => {
     expect(chart.axes.categoryAxis.title.text).toBe('doping (cm⁻³)');
     expect(chart.axes.valueAxis.title.text).toBe('ρ (Ω·cm)');
     expect(log.position).toEqual(['F1']);
+  });
+
+  it('addChart() draws an emphasised series (the default model among compared ones) with a heavier line, the others as Excel draws them', async () => {
+    const { excel, firstSeries, addedSeries } = mockExcel();
+    await createExcelPort(excel).addChart({
+      sheet: 'Lots',
+      title: 'Resistivity, 3 models',
+      series: [
+        { name: 'f723-anchored', x: block(2, 0, 5, 1), y: block(2, 1, 5, 1), emphasised: true },
+        { name: 'masetti', x: block(2, 0, 5, 1), y: block(2, 2, 5, 1) },
+        { name: 'arora', x: block(2, 0, 5, 1), y: block(2, 3, 5, 1) },
+      ],
+      xTitle: 'doping (cm⁻³)', yTitle: 'ρ (Ω·cm)', xLogarithmic: true, yLogarithmic: true, anchor: block(0, 5),
+    });
+    expect(firstSeries.name).toBe('f723-anchored');
+    expect(firstSeries.format.line.weight).toBe(EMPHASISED_LINE_POINTS);
+    expect(addedSeries.map((s) => [s.name, s.format.line.weight])).toEqual([['masetti', 0], ['arora', 0]]);
   });
 
   it('addChart() keeps a linear axis linear', async () => {

@@ -16,7 +16,12 @@ export type SweepArgument =
   | { readonly kind: 'text'; readonly value: string }
   | { readonly kind: 'inner' }
   /** An optional argument left out before a given one (`f(a,,c)`): the function's default. */
-  | { readonly kind: 'blank' };
+  | { readonly kind: 'blank' }
+  /**
+   * Every applicable model at once (the sweep's "compare models"): in the formula the DRIFT.MODELCODES call
+   * (`call`, without '='), in the preview the row of codes it returns.
+   */
+  | { readonly kind: 'models'; readonly codes: readonly string[]; readonly call: string };
 
 /** Key of a setting control: owner and parameter name, e.g. 'inner:dopant'. */
 export function settingKey(owner: 'inner' | 'outer', name: string): string {
@@ -47,11 +52,13 @@ function argumentsFor(
   values: SettingValues,
   fixed: { doping: number | null; temperatureK: number | null },
   feeds: string | null,
+  models: ModelsArgument | null,
   problems: string[],
   invalid: string[],
 ): SweepArgument[] {
   const given: (SweepArgument | null)[] = parameters.map((spec) => {
     if (feeds !== null && spec.name === feeds) return { kind: 'inner' };
+    if (models !== null && models.key === settingKey(owner, spec.name)) return models.argument;
     if (owner === 'inner' && spec.name === DOPING_PARAMETER) return fixed.doping === null ? { kind: 'doping-axis' } : { kind: 'number', value: fixed.doping };
     if (owner === 'inner' && spec.name === TEMPERATURE_PARAMETER) return fixed.temperatureK === null ? { kind: 'temperature-axis' } : { kind: 'number', value: fixed.temperatureK };
     const entered = enteredArgument(spec, values[settingKey(owner, spec.name)]);
@@ -71,6 +78,12 @@ function argumentsFor(
   return given.slice(0, last + 1).map((argument) => argument ?? { kind: 'blank' });
 }
 
+/** The setting (by settingKey) whose single model is replaced by every applicable model, and the argument that does it. */
+export interface ModelsArgument {
+  readonly key: string;
+  readonly argument: Extract<SweepArgument, { kind: 'models' }>;
+}
+
 /** The sweep's call: outer function name and arguments, plus inner's when it feeds outer. */
 export interface SweepCall {
   readonly outerName: string;
@@ -85,20 +98,22 @@ export interface SweepCall {
  * @param quantity - what is swept
  * @param values - entered setting values by settingKey
  * @param fixed - doping (cm⁻³) and temperature (K) when that axis is not swept, else null
+ * @param models - when comparing models: the model setting and the every-model argument that replaces it
  * @returns the call, any problems with the entered values, and the settingKeys of the values at fault
  */
 export function buildCall(
   quantity: SweepQuantity,
   values: SettingValues,
   fixed: { doping: number | null; temperatureK: number | null },
+  models: ModelsArgument | null = null,
 ): { call: SweepCall; problems: string[]; invalid: string[] } {
   const problems: string[] = [];
   const invalid: string[] = [];
-  const innerArguments = argumentsFor(quantity.inner.parameters, 'inner', values, fixed, null, problems, invalid);
+  const innerArguments = argumentsFor(quantity.inner.parameters, 'inner', values, fixed, null, models, problems, invalid);
   if (quantity.throughParameter === null) {
     return { call: { outerName: qualifiedName(quantity.outer), outerArguments: innerArguments, innerName: null, innerArguments: [] }, problems, invalid };
   }
-  const outerArguments = argumentsFor(quantity.outer.parameters, 'outer', values, fixed, quantity.throughParameter, problems, invalid);
+  const outerArguments = argumentsFor(quantity.outer.parameters, 'outer', values, fixed, quantity.throughParameter, models, problems, invalid);
   return { call: { outerName: qualifiedName(quantity.outer), outerArguments, innerName: qualifiedName(quantity.inner), innerArguments }, problems, invalid };
 }
 
@@ -107,6 +122,11 @@ export function numberText(value: number): string {
   const size = Math.abs(value);
   const exponent = size >= 1e5 || (size > 0 && size < 1e-3);
   return (exponent ? value.toExponential() : String(value)).replace('e', 'E');
+}
+
+/** Text as a formula string literal, quotes doubled: `"B"`. */
+export function textLiteral(value: string): string {
+  return `"${value.replace(/"/g, '""')}"`;
 }
 
 /**
@@ -126,9 +146,11 @@ export function formulaText(call: SweepCall, references: { doping: string | null
       case 'number':
         return numberText(argument.value);
       case 'text':
-        return `"${argument.value.replace(/"/g, '""')}"`;
+        return textLiteral(argument.value);
       case 'blank':
         return '';
+      case 'models':
+        return argument.call;
       case 'inner':
         return `${call.innerName}(${call.innerArguments.map(text).join(',')})`;
     }

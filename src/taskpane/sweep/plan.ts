@@ -13,6 +13,7 @@ import { blockAddress, cellName } from '../port';
 import type { BlockWrite, SheetPlan } from '../sheetPlan';
 import { formulaText, type SweepCall } from './arguments';
 import type { TemperatureUnit } from './axes';
+import type { ModelComparison } from './compare';
 import type { SweepQuantity } from './quantities';
 
 /** Rows and columns of an Excel worksheet (Microsoft, "Excel specifications and limits"). */
@@ -34,6 +35,8 @@ export interface SweepLayoutInput {
   readonly temperature: { readonly kelvin: readonly number[]; readonly entered: readonly number[]; readonly unit: TemperatureUnit } | null;
   /** Words for the fixed settings, for the title (e.g. 'B, Si, 300 K'). */
   readonly description: string;
+  /** Every applicable model, one column each, when comparing models (one swept axis); else null or absent. */
+  readonly models?: ModelComparison | null;
 }
 
 /** The whole insertion: the table as a sheet plan (no highlights), its footprint and the chart. */
@@ -46,6 +49,8 @@ export interface SweepPlan extends SheetPlan {
   /** Where the results spill. */
   readonly results: CellBlock;
   readonly chart: ChartPlan;
+  /** When comparing models: the header cell of the DRIFT.MODELCODES formula (it spills one code per result column) and its text. */
+  readonly modelCodes: { readonly cell: CellBlock; readonly formula: string } | null;
 }
 
 /** Header text of a value with its unit, e.g. 'Resistivity ρ (Ω·cm)'. */
@@ -72,6 +77,7 @@ function kelvinName(kelvin: number): string {
 export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan {
   const { quantity, call, doping, temperature } = input;
   if (doping === null && temperature === null) throw new RangeError('Sweep doping, temperature or both: with both fixed there is nothing to tabulate.');
+  if (input.models !== undefined && input.models !== null) return planModelComparison(input, input.models, anchor);
   const sheet = anchor.sheet;
   const top = anchor.row;
   const left = anchor.column;
@@ -137,9 +143,7 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
     xTitle = 'Temperature (K)';
     styles.push({ block: block(sheet, top + 1, left, 1, columns), bold: true });
   }
-  if (footprint.row + footprint.rowCount > SHEET_ROWS || footprint.column + footprint.columnCount + 1 > SHEET_COLUMNS) {
-    throw new RangeError(`The table needs ${footprint.rowCount} rows × ${footprint.columnCount} columns from ${cellName(top, left)}, which runs off the sheet; select a cell further up or left.`);
-  }
+  checkFits(footprint);
   styles.unshift({ block: block(sheet, top, left), bold: true });
   styles.push({ block: results, numberFormat: resultFormat });
   const formula = formulaText(call, references);
@@ -154,5 +158,74 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
     yLogarithmic: quantity.logValues,
     anchor: block(sheet, top, left + footprint.columnCount + 1),
   };
-  return { footprint, writes, formulaCell, formula, results, styles, highlights: [], chart };
+  return { footprint, writes, formulaCell, formula, results, styles, highlights: [], chart, modelCodes: null };
+}
+
+/** Refuses a table that would run off the sheet (one spare column for the chart beside it). */
+function checkFits(footprint: CellBlock): void {
+  if (footprint.row + footprint.rowCount > SHEET_ROWS || footprint.column + footprint.columnCount + 1 > SHEET_COLUMNS) {
+    throw new RangeError(`The table needs ${footprint.rowCount} rows × ${footprint.columnCount} columns from ${cellName(footprint.row, footprint.column)}, which runs off the sheet; select a cell further up or left.`);
+  }
+}
+
+/**
+ * Compare models, one swept axis: title; a header row whose last cells are =DRIFT.MODELCODES(…) spilling one code per
+ * column; the axis down the first column(s) (°C, K for temperature); ONE formula at the first data cell whose model
+ * argument is the same DRIFT.MODELCODES call, spilling axis × models. The chart has one series per model, the default
+ * (first code) emphasised.
+ *
+ * doping:      title | ;  'Doping (cm⁻³) ↓ · Model →' | =DRIFT.MODELCODES(…) → ;  doping values | formula
+ * temperature: title | ;  ['Temperature (°C)'] | 'Temperature (K) ↓ · Model →' | =DRIFT.MODELCODES(…) → ;  [°C] | K | formula
+ */
+function planModelComparison(input: SweepLayoutInput, models: ModelComparison, anchor: CellBlock): SweepPlan {
+  const { quantity, call, doping, temperature } = input;
+  if (doping !== null && temperature !== null) throw new RangeError('Compare models sweeps one axis: doping or temperature, not both.');
+  const sheet = anchor.sheet;
+  const top = anchor.row;
+  const left = anchor.column;
+  const count = models.codes.length;
+  const resultHeader = withUnit(quantity.label, quantity.unit);
+  const title = `${resultHeader}: ${call.outerName}, ${input.description}`;
+  const celsius = temperature !== null && temperature.unit === '°C';
+  const axisColumns = celsius ? 2 : 1;
+  const rows = doping?.length ?? temperature!.kelvin.length;
+  const dataTop = top + 2;
+  const footprint = block(sheet, top, left, 2 + rows, axisColumns + count);
+  checkFits(footprint);
+  const valueLeft = left + axisColumns;
+  const writes: BlockWrite[] = [];
+  const styles: StylePlan[] = [{ block: block(sheet, top, left), bold: true }];
+  const labels: CellInput[] = doping !== null ? ['Doping (cm⁻³) ↓ · Model →'] : celsius ? ['Temperature (°C)', 'Temperature (K) ↓ · Model →'] : ['Temperature (K) ↓ · Model →'];
+  writes.push({ block: block(sheet, top, left, 2, axisColumns), cells: [[title, ...Array<CellInput>(axisColumns - 1).fill(null)], labels] });
+  let axisCells: CellBlock;
+  let references: { doping: string | null; temperature: string | null };
+  if (doping !== null) {
+    axisCells = block(sheet, dataTop, left, rows, 1);
+    writes.push({ block: axisCells, cells: doping.map((d) => [d]) });
+    references = { doping: blockAddress(axisCells), temperature: null };
+    styles.push({ block: axisCells, numberFormat: DOPING_FORMAT });
+  } else {
+    const axis = temperature!;
+    writes.push({ block: block(sheet, dataTop, left, rows, axisColumns), cells: axis.kelvin.map((k, i) => (celsius ? [axis.entered[i], k] : [k])) });
+    axisCells = block(sheet, dataTop, valueLeft - 1, rows, 1);
+    references = { doping: null, temperature: blockAddress(axisCells) };
+  }
+  const modelCodes = { cell: block(sheet, top + 1, valueLeft), formula: `=${models.call}` };
+  writes.push({ block: modelCodes.cell, cells: [[modelCodes.formula]] });
+  const formulaCell = block(sheet, dataTop, valueLeft);
+  const formula = formulaText(call, references);
+  writes.push({ block: formulaCell, cells: [[formula]] });
+  const results = block(sheet, dataTop, valueLeft, rows, count);
+  styles.push({ block: block(sheet, top + 1, left, 1, axisColumns + count), bold: true }, { block: results, numberFormat: quantity.logValues ? LOG_RESULT_FORMAT : LINEAR_RESULT_FORMAT });
+  const chart: ChartPlan = {
+    sheet,
+    title: `${resultHeader}, ${count} models`,
+    series: models.codes.map((code, j) => ({ name: code, x: axisCells, y: block(sheet, dataTop, valueLeft + j, rows, 1), ...(j === 0 ? { emphasised: true } : {}) })),
+    xTitle: doping !== null ? 'Doping (cm⁻³)' : 'Temperature (K)',
+    yTitle: resultHeader,
+    xLogarithmic: doping !== null,
+    yLogarithmic: quantity.logValues,
+    anchor: block(sheet, top, left + footprint.columnCount + 1),
+  };
+  return { footprint, writes, formulaCell, formula, results, styles, highlights: [], chart, modelCodes };
 }

@@ -5,6 +5,7 @@
  */
 import { parseDecimalText } from '../../catalog/parameters';
 import { buildCall, numberText, settingKey, type SettingValues } from './arguments';
+import { compareModels, type ModelComparison } from './compare';
 import { MAX_TEMPERATURE_COLUMNS, MAX_TEMPERATURE_POINTS, dopingAxis, dopingAxisProblems, temperatureAxis, temperatureAxisProblems, toKelvin, type TemperatureUnit } from './axes';
 import type { SweepLayoutInput } from './plan';
 import { settingParameters, type SweepQuantity } from './quantities';
@@ -25,7 +26,12 @@ export interface SweepForm {
   readonly fixedTemperature: string;
   /** Setting values by settingKey ('inner:dopant', 'outer:thickness_um', …). */
   readonly values: SettingValues;
+  /** Every applicable model instead of the one chosen (one swept axis only); absent means no. */
+  readonly compareModels?: boolean;
 }
+
+/** The form field a compare-models problem marks invalid. */
+export const COMPARE_MODELS_FIELD = 'compareModels';
 
 /**
  * A resolved sweep, or what is wrong: messages, and the fields at fault (SweepForm field names for the axes,
@@ -97,18 +103,33 @@ export function resolveSweep(form: SweepForm, quantities: readonly SweepQuantity
     }
   }
 
-  const { call, problems: callProblems, invalid: callInvalid } = buildCall(quantity, form.values, { doping: fixedDoping, temperatureK: fixedKelvin });
+  let models: ModelComparison | null = null;
+  if (form.compareModels === true) {
+    const compared = compareModels(quantity, form.values);
+    if (!compared.ok) {
+      problems.push(compared.problem);
+      invalid.push(COMPARE_MODELS_FIELD);
+    } else if (dopingSwept && temperatureSwept) {
+      // Models × doping × temperature would need a table per model; one axis keeps one spilled formula and one chart.
+      problems.push('Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature (with both, each model would need a table of its own).');
+      invalid.push(COMPARE_MODELS_FIELD);
+    } else models = compared.comparison;
+  }
+
+  const { call, problems: callProblems, invalid: callInvalid } = buildCall(quantity, form.values, { doping: fixedDoping, temperatureK: fixedKelvin }, models?.argument ?? null);
   problems.push(...callProblems);
   invalid.push(...callInvalid);
   if (problems.length > 0) return { ok: false, problems, invalid };
 
   const words: string[] = [];
   for (const { owner, spec } of settingParameters(quantity)) {
-    const text = (form.values[settingKey(owner, spec.name)] ?? '').trim();
-    if (text === '') continue;
+    const key = settingKey(owner, spec.name);
+    const text = (form.values[key] ?? '').trim();
+    if (text === '' || key === models?.setting.key) continue;
     words.push(spec.type === 'text' ? text : `${spec.name} ${text}${spec.unit ? ` ${spec.unit}` : ''}`);
   }
   if (fixedDoping !== null) words.push(`${numberText(fixedDoping)} cm⁻³`);
   if (fixedKelvin !== null) words.push(`${fixedKelvin} K`);
-  return { ok: true, input: { quantity, call, doping, temperature, description: words.join(', ') } };
+  if (models !== null) words.push(`${models.codes.length} ${models.setting.modelQuantity} models`);
+  return { ok: true, input: { quantity, call, doping, temperature, description: words.join(', '), models } };
 }

@@ -1,8 +1,8 @@
 /**
  * The Sweep builder's controls: quantity, its settings (read from the
- * catalog), the doping and temperature axes, the formula it will write, a
- * live preview plot and the Insert button. Logic lives in settings.ts,
- * plan.ts, preview.ts and insert.ts; this module builds elements and reads
+ * catalog), compare models, the doping and temperature axes, the formula it
+ * will write, a live preview plot and the Insert button. Logic lives in
+ * settings.ts, compare.ts, plan.ts, preview.ts and insert.ts; this module builds elements and reads
  * them back.
  */
 import { parseDecimalText } from '../../catalog/parameters';
@@ -13,11 +13,12 @@ import type { ToolContext } from '../tool';
 import { settingKey } from './arguments';
 import { fromKelvin, toKelvin, type TemperatureUnit } from './axes';
 import { insertSweep } from './insert';
+import { COMPARE_MODELS_HELP, modelSettingOf } from './compare';
 import { planSweep, withUnit } from './plan';
-import { describePreview, drawPreview } from './plot';
+import { describePreview, drawLegend, drawPreview } from './plot';
 import { previewSweep } from './preview';
 import { availableQuantities, settingParameters, TEMPERATURE_PARAMETER, type SweepQuantity } from './quantities';
-import { resolveSweep, type SweepForm } from './settings';
+import { COMPARE_MODELS_FIELD, resolveSweep, type SweepForm } from './settings';
 
 /** Starting values of the axis controls (a typical wafer range; common practice, no source). */
 const START = { dopingFrom: '1e14', dopingTo: '1e20', pointsPerDecade: '5', fixedDoping: '1e15', temperatureFrom: '250', temperatureTo: '400', temperatureStep: '50' };
@@ -139,14 +140,22 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
   const fixedTemperature = field(doc, 'sw-temperature-fixed', 'Temperature', '');
   temperatureBox.append(temperatureSweep.wrap, unit.wrap, temperatureRange, fixedTemperature.wrap);
 
+  // Shown for quantities whose function takes a model argument: every applicable model instead of one.
+  const compareBox = make(doc, 'div', { id: 'sw-compare', className: 'sw-compare' });
+  const compare = checkbox(doc, 'sw-compare-models', 'Compare models', false);
+  const compareHint = make(doc, 'p', { id: 'sw-compare-models-hint', className: 'sw-hint', textContent: COMPARE_MODELS_HELP });
+  compare.input.setAttribute('aria-describedby', compareHint.id);
+  compareBox.append(compare.wrap, compareHint);
+
   const problems = make(doc, 'ul', { id: 'sw-problems', className: 'sw-problems' });
   const formulaLabel = make(doc, 'p', { className: 'sw-hint', textContent: 'Formula (as written if inserted at A1):' });
+  const modelCodesFormula = make(doc, 'p', { id: 'sw-formula-models', className: 'sw-formula' });
   const formula = make(doc, 'p', { id: 'sw-formula', className: 'sw-formula' });
   const plotHolder = make(doc, 'figure', { id: 'sw-plot' });
   const caption = make(doc, 'figcaption', { id: 'sw-plot-summary', className: 'sw-plot-summary' });
   const insert = make(doc, 'button', { id: 'sw-insert', className: 'sw-insert', textContent: 'Insert table and chart' });
   insert.type = 'button';
-  panel.append(intro, quantity.wrap, settingsBox, dopingBox, temperatureBox, problems, formulaLabel, formula, plotHolder, insert);
+  panel.append(intro, quantity.wrap, settingsBox, compareBox, dopingBox, temperatureBox, problems, formulaLabel, modelCodesFormula, formula, plotHolder, insert);
 
   let settingControls = new Map<string, Control>();
   /** Whether the user wants the temperature swept (kept while a quantity without doping forces it on). */
@@ -169,6 +178,7 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
       settingControls.set(settingKey(owner, spec.name), control);
       settingsBox.append(wrap);
     }
+    compareBox.hidden = modelSettingOf(q) === null;
     dopingBox.hidden = !q.hasDoping;
     temperatureBox.hidden = !q.hasTemperature;
     // A function without doping can only sweep temperature; the user's own choice returns with the next one that has doping.
@@ -198,6 +208,7 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
       temperatureStep: temperatureStep.input.value,
       fixedTemperature: fixedTemperature.input.value,
       values,
+      compareModels: !compareBox.hidden && compare.input.checked,
     };
   }
 
@@ -207,7 +218,14 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
     temperatureRange.hidden = !temperatureSweep.input.checked;
     fixedTemperature.wrap.hidden = temperatureSweep.input.checked;
     const q = current();
-    const resolved = resolveSweep(readForm(), quantities);
+    const form = readForm();
+    // Comparing, the single-model list does not apply: every model is drawn.
+    const modelSetting = q === undefined ? null : modelSettingOf(q);
+    if (modelSetting !== null) {
+      const control = settingControls.get(modelSetting.key);
+      if (control !== undefined) control.disabled = form.compareModels === true;
+    }
+    const resolved = resolveSweep(form, quantities);
     problems.replaceChildren();
     const fields: Record<string, Control> = {
       dopingFrom: dopingFrom.input,
@@ -218,6 +236,7 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
       temperatureTo: temperatureTo.input,
       temperatureStep: temperatureStep.input,
       fixedTemperature: fixedTemperature.input,
+      [COMPARE_MODELS_FIELD]: compare.input,
       ...Object.fromEntries(settingControls),
     };
     const invalid = new Set(resolved.ok ? [] : resolved.invalid);
@@ -233,16 +252,21 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
     if (!resolved.ok) {
       for (const problem of resolved.problems) problems.append(make(doc, 'li', { textContent: problem }));
       formula.textContent = '—';
+      modelCodesFormula.hidden = true;
       plotHolder.replaceChildren(caption);
       caption.textContent = 'No preview until the settings above are fixed.';
       return;
     }
     const plan = planSweep(resolved.input, { sheet: 'Sheet1', row: 0, column: 0, rowCount: 1, columnCount: 1 });
     formula.textContent = plan.formula;
+    modelCodesFormula.hidden = plan.modelCodes === null;
+    modelCodesFormula.textContent = plan.modelCodes === null ? '' : `${plan.modelCodes.formula} (header row, one code per column)`;
     const preview = previewSweep(resolved.input);
     const yLabel = q === undefined ? '' : withUnit(q.label, q.unit);
     caption.textContent = describePreview(preview, yLabel);
-    plotHolder.replaceChildren(drawPreview(doc, preview, yLabel, 'sw-plot-svg'), caption);
+    const svg = drawPreview(doc, preview, yLabel, 'sw-plot-svg');
+    if (preview.band === undefined || preview.band === null) plotHolder.replaceChildren(svg, caption);
+    else plotHolder.replaceChildren(svg, drawLegend(doc, preview, 'sw-legend'), caption);
   }
 
   async function onInsert(): Promise<void> {
@@ -256,7 +280,8 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
       const { plan, chartError } = await insertSweep(context.port, resolved.input);
       const where = sheetAddress(plan.footprint);
       const axes = `${plan.chart.xLogarithmic ? 'log' : 'linear'} x, ${plan.chart.yLogarithmic ? 'log' : 'linear'} y`;
-      const table = `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ${plan.results.rowCount} × ${plan.results.columnCount} values`;
+      const codes = plan.modelCodes === null ? '' : `, under ${plan.modelCodes.formula} in ${blockAddress(plan.modelCodes.cell)} (one model per column)`;
+      const table = `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ${plan.results.rowCount} × ${plan.results.columnCount} values${codes}`;
       if (chartError === null) context.announce(`${table}; chart added (${axes}).`, 'success');
       else context.announce(`${table}; the chart could not be added: ${chartError}.`, 'error');
     } catch (error) {

@@ -13,6 +13,17 @@ describe('makeScale', () => {
     expect(scale.label(1e16)).toBe('1e16');
   });
 
+  it('log scale over less than a decade: 1-2-5 ticks, then every mantissa, so two values are labelled', () => {
+    // Within one mantissa step: round values as on a linear axis.
+    const scale = makeScale(11, 17, 0, 100, true);
+    expect(scale.ticks).toEqual([12, 14, 16]);
+    expect(scale.label(12)).toBe('12');
+    expect(makeScale(1.1e16, 1.7e16, 0, 100, true).label(1.2e16)).toBe('1.2e16');
+    expect(makeScale(8, 60, 0, 100, true).ticks).toEqual([10, 20, 50]);
+    expect(makeScale(8, 60, 0, 100, true).label(20)).toBe('2e1');
+    expect(makeScale(0.003, 0.009, 0, 100, true).ticks).toEqual([0.003, 0.004, 0.005, 0.006, 0.007, 0.008, 0.009]);
+  });
+
   it('linear scale: round ticks inside the range', () => {
     const scale = makeScale(250, 400, 0, 150, false);
     expect(scale.toPixel(325)).toBeCloseTo(75, 9);
