@@ -77,6 +77,7 @@ import type { Carrier, Sample } from '../sample';
 import { otherCarrier, sampleDopants } from '../sample';
 import { solveEquilibrium } from '../equilibrium';
 import { findRoot } from '../solve';
+import { memoize } from '../memo';
 import type { DopantKind } from '../materials/types';
 import { fullIonizationCorrection, netMajorityCarrier } from './fullIonizationCorrection';
 import { MASETTI_TABLE, type MasettiParameters } from './masetti';
@@ -286,29 +287,17 @@ function gScales(carrier: Carrier, temperature: number): { a: number; b: number 
   return { a: Math.pow(reduced / mass, g.s4), b: Math.pow(mass / reduced, g.s7) };
 }
 
-/**
- * P at which G(P) has its minimum, dG/dP = 0. With u = P,
- * u^(s6+1)·dG/du = s1·s3·a·(s2 + a·u)^(−s3−1)·u^(s6+1) − s5·s6·b^(−s6),
- * whose first term increases strictly with u (s6 > s3), so the root is unique;
- * found in ln u. Remembered per carrier and temperature (cleared when full).
- */
-const G_MINIMUM_CACHE_SIZE = 1024;
-const gMinimumCache: Record<Carrier, Map<number, number>> = { electron: new Map(), hole: new Map() };
 /** Bracket for ln P_min: P from e^−40 to e^40 covers every temperature the solvers accept. */
 const LOG_P_MIN_BRACKET = { lo: -40, hi: 40 } as const;
 
 /**
- * The lower bound P_min on the screening parameter in G (see the module comment).
- *
- * @param carrier - the scattered carrier i
- * @param temperature - T > 0, K
- * @returns P_min > 0
- * @example klaassenGMinimumScreening('electron', 300) // ≈ 0.32
+ * P at which G(P) has its minimum, dG/dP = 0. With u = P,
+ * u^(s6+1)·dG/du = s1·s3·a·(s2 + a·u)^(−s3−1)·u^(s6+1) − s5·s6·b^(−s6),
+ * whose first term increases strictly with u (s6 > s3), so the root is unique;
+ * found in ln u. A root search per carrier and temperature, remembered
+ * (memo.ts, the core's one memo policy).
  */
-export function klaassenGMinimumScreening(carrier: Carrier, temperature: number): number {
-  const cache = gMinimumCache[carrier];
-  const cached = cache.get(temperature);
-  if (cached !== undefined) return cached;
+const gMinimumScreening = memoize(2048, (carrier: Carrier, temperature: number): number => {
   const g = KLAASSEN_MINORITY_G;
   const { a, b } = gScales(carrier, temperature);
   const scaledSlope = (logP: number): number => {
@@ -319,10 +308,19 @@ export function klaassenGMinimumScreening(carrier: Carrier, temperature: number)
     );
   };
   const logMinimum = findRoot(scaledSlope, LOG_P_MIN_BRACKET.lo, LOG_P_MIN_BRACKET.hi, { xTolerance: 1e-12 }).root;
-  const minimum = Math.exp(logMinimum);
-  if (cache.size >= G_MINIMUM_CACHE_SIZE) cache.clear();
-  cache.set(temperature, minimum);
-  return minimum;
+  return Math.exp(logMinimum);
+});
+
+/**
+ * The lower bound P_min on the screening parameter in G (see the module comment).
+ *
+ * @param carrier - the scattered carrier i
+ * @param temperature - T > 0, K
+ * @returns P_min > 0
+ * @example klaassenGMinimumScreening('electron', 300) // ≈ 0.32
+ */
+export function klaassenGMinimumScreening(carrier: Carrier, temperature: number): number {
+  return gMinimumScreening(carrier, temperature);
 }
 
 /**
