@@ -65,8 +65,9 @@ import { f723Density, f723SpeciesFor } from './astmF723';
 
 /**
  * Range of net doping searched, cm⁻³: from 1 cm⁻³ (below that every sample is
- * intrinsic to any precision that matters) to the equilibrium solver's
- * guaranteed 1e22 cm⁻³ total density (physics contract).
+ * intrinsic to any precision that matters) to 1e22 cm⁻³ total density, the
+ * range the equilibrium solver is guaranteed for (docs/physics.md, "Solvers
+ * and their guarantees").
  */
 export const NET_DENSITY_SEARCH = { min: 1, maxTotal: 1e22 } as const;
 

@@ -106,7 +106,7 @@ const temperatureCoefficients = memoize(2048, (carrier: Carrier, temperature: nu
 /**
  * Arora's temperature ratio μ_Arora(N, T) / μ_Arora(N, 300 K): the factor by
  * which the 300 K fits (Masetti, Caughey–Thomas) are carried to other
- * temperatures (recommendation of the physics contract).
+ * temperatures (our choice; docs/physics.md, "Mobility models").
  *
  * @param carrier - 'electron' or 'hole'
  * @param totalDensity - N ≥ 0, cm⁻³

@@ -1,6 +1,7 @@
 /**
  * The correction that keeps the mobility fits honest next to incomplete
- * ionization ("the trap" of the physics contract).
+ * ionization (why it is needed and what it guarantees: docs/physics.md,
+ * "Ionization and the fitted mobilities").
  *
  * Masetti, Arora and Caughey–Thomas fitted conductivity mobility against the
  * *total* dopant density at room temperature, i.e. they computed μ from
@@ -24,7 +25,7 @@
  *   factor = 1 − s² + s · N_net/(m + m')
  *
  * For an extrinsic reference (m ≫ m', every doping the fits describe) s → 1
- * and factor → N_net/m, the contract's formula; the difference is of order
+ * and factor → N_net/m, the formula above; the difference is of order
  * m'/m = ni²/N² (below 1e-6 for N ≥ 1e13 cm⁻³). When the 300 K reference is
  * intrinsic (N_net ≲ ni, including near-exact compensation) s → 0 and the
  * factor goes smoothly to 1: free carriers are then ~ni, the fits'
