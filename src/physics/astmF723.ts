@@ -66,7 +66,7 @@ export const F723_VALIDITY: Readonly<Record<F723Species, { density: Interval; re
  * (296.15 K); 290–305 K is accepted without adjustment because the standard
  * gives no temperature correction and resistivity changes by well under the
  * conversion's own few-percent uncertainty within a few kelvin of 23 °C
- * (Driftcell project decision, documented in the physics contract).
+ * (our decision, no source; docs/physics.md, "Resistivity models").
  */
 export const F723_TEMPERATURE_RANGE: Interval = { min: 290, max: 305 };
 

@@ -44,6 +44,7 @@ import type { Dopant, Material } from './materials/types';
 import { checkTemperature } from './materials/temperature';
 import { ionizationState, prepareIonization, preparedIonizationState, type IonizationState, type PreparedIonization } from './ionization';
 import { findRoot } from './solve';
+import { memoize } from './memo';
 
 /** One dopant species and its total (chemical) density. */
 export interface DopantDensity {
@@ -145,53 +146,34 @@ export function solveEquilibrium(
   intrinsicModel?: string,
   statistics: CarrierStatistics = DEFAULT_CARRIER_STATISTICS,
 ): Equilibrium {
-  const last = lastSolve;
-  if (last !== undefined && last.statistics === statistics && sameProblem(last, material, temperature, dopants, intrinsicModel)) {
-    return { ...last.result };
-  }
-  const result = solveNeutrality(material, temperature, dopants, intrinsicModel, statistics);
-  lastSolve = {
-    material,
-    temperature,
-    dopants: dopants.map((d) => ({ dopant: d.dopant, density: d.density })),
-    intrinsicModel,
-    statistics,
-    result,
-  };
-  return { ...result };
+  const pairs: (Dopant | number)[] = [];
+  for (const { dopant, density } of dopants) pairs.push(dopant, density);
+  return { ...solution(material, temperature, intrinsicModel, statistics, ...pairs) };
 }
 
 /**
- * The most recent problem and its solution. At 300 K a conductivity asks for
- * the same solve twice in a row (the carriers, then the mobility fits'
- * full-ionization reference at 300 K); remembering one solve answers the
- * second without repeating it. The solution is a pure function of the inputs
- * compared here, so results are identical with or without it.
+ * Solutions by problem: material, temperature, ni model, statistics, then
+ * each dopant followed by its density (memo.ts, the core's one memo policy).
+ * A conductivity at 300 K asks for the same solve twice in a row (the
+ * carriers, then the mobility fits' full-ionization reference at 300 K), and
+ * the carrier and ionization functions of a sheet ask again for the samples
+ * of its other columns. Callers get a copy, so the remembered solution
+ * cannot be changed.
  */
-interface RememberedSolve {
-  readonly material: Material;
-  readonly temperature: number;
-  readonly dopants: readonly DopantDensity[];
-  readonly intrinsicModel: string | undefined;
-  readonly statistics: CarrierStatistics;
-  readonly result: Equilibrium;
-}
-let lastSolve: RememberedSolve | undefined;
-
-function sameProblem(
-  last: RememberedSolve,
-  material: Material,
-  temperature: number,
-  dopants: readonly DopantDensity[],
-  intrinsicModel: string | undefined,
-): boolean {
-  if (last.material !== material || last.temperature !== temperature || last.intrinsicModel !== intrinsicModel) return false;
-  if (last.dopants.length !== dopants.length) return false;
-  for (let i = 0; i < dopants.length; i++) {
-    if (last.dopants[i].dopant !== dopants[i].dopant || !Object.is(last.dopants[i].density, dopants[i].density)) return false;
-  }
-  return true;
-}
+const solution = memoize(
+  1024,
+  (
+    material: Material,
+    temperature: number,
+    intrinsicModel: string | undefined,
+    statistics: CarrierStatistics,
+    ...pairs: (Dopant | number)[]
+  ): Equilibrium => {
+    const dopants: DopantDensity[] = [];
+    for (let i = 0; i < pairs.length; i += 2) dopants.push({ dopant: pairs[i] as Dopant, density: pairs[i + 1] as number });
+    return solveNeutrality(material, temperature, dopants, intrinsicModel, statistics);
+  },
+);
 
 function solveNeutrality(
   material: Material,

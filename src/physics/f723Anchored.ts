@@ -35,6 +35,8 @@ import type { Sample } from './sample';
 import { F723_VALIDITY, rawDensity, rawResistivity, type F723Species } from './astmF723';
 import { findRoot } from './solve';
 import { SILICON } from './materials';
+import type { Dopant, Material } from './materials/types';
+import { memoize } from './memo';
 
 /** Code of the anchored model. */
 export const F723_ANCHORED_CODE = 'f723-anchored';
@@ -81,35 +83,42 @@ function reverseResistivity(species: F723Species, density: number): number {
 }
 
 /** ln k at u = ln N inside the range. */
-function logFactorInside(sample: Sample, species: F723Species, direction: AnchorDirection, u: number, physics: PhysicsResistivity): number {
+function logFactorInside(
+  material: Material,
+  dopant: Dopant,
+  species: F723Species,
+  direction: AnchorDirection,
+  u: number,
+  physics: PhysicsResistivity,
+): number {
   const density = Math.exp(u);
   const reference = direction === 'forward' ? rawResistivity(species, density) : reverseResistivity(species, density);
-  const physical = physics({ material: sample.material, dopant: sample.dopant, density, temperature: F723_ANCHOR_TEMPERATURE, counterDensity: 0 });
+  const physical = physics({ material, dopant, density, temperature: F723_ANCHOR_TEMPERATURE, counterDensity: 0 });
   return Math.log(reference) - Math.log(physical);
 }
 
-/** Value and inward slope of ln k at each range edge, per species, direction and physics function. */
-const edgeCache = new WeakMap<PhysicsResistivity, Map<string, { value: number; slope: number }>>();
-
-function edge(sample: Sample, species: F723Species, direction: AnchorDirection, side: 'lo' | 'hi', physics: PhysicsResistivity) {
-  let byKey = edgeCache.get(physics);
-  if (byKey === undefined) {
-    byKey = new Map();
-    edgeCache.set(physics, byKey);
-  }
-  const key = `${species}|${direction}|${side}`;
-  let cached = byKey.get(key);
-  if (cached === undefined) {
-    const range = anchorRange(species, direction);
-    const u = range[side];
+/**
+ * Value and inward slope of ln k at a range edge, by material, dopant, species,
+ * direction, side and physics function (memo.ts, the core's one memo policy):
+ * two physics evaluations that every sample beyond that edge shares.
+ */
+const edge = memoize(
+  64,
+  (
+    material: Material,
+    dopant: Dopant,
+    species: F723Species,
+    direction: AnchorDirection,
+    side: 'lo' | 'hi',
+    physics: PhysicsResistivity,
+  ): { value: number; slope: number } => {
+    const u = anchorRange(species, direction)[side];
     const inward = side === 'lo' ? SLOPE_STEP : -SLOPE_STEP;
-    const value = logFactorInside(sample, species, direction, u, physics);
-    const slope = (logFactorInside(sample, species, direction, u + inward, physics) - value) / inward;
-    cached = { value, slope };
-    byKey.set(key, cached);
-  }
-  return cached;
-}
+    const value = logFactorInside(material, dopant, species, direction, u, physics);
+    const slope = (logFactorInside(material, dopant, species, direction, u + inward, physics) - value) / inward;
+    return { value, slope };
+  },
+);
 
 /**
  * The anchoring factor k for a sample: 1 outside silicon or for dopants
@@ -127,9 +136,9 @@ export function anchorFactor(sample: Sample, direction: AnchorDirection, physics
   if (species === undefined || !(sample.density > 0)) return 1;
   const u = Math.log(sample.density);
   const range = anchorRange(species, direction);
-  if (u >= range.lo && u <= range.hi) return Math.exp(logFactorInside(sample, species, direction, u, physics));
+  if (u >= range.lo && u <= range.hi) return Math.exp(logFactorInside(sample.material, sample.dopant, species, direction, u, physics));
   const side = u < range.lo ? 'lo' : 'hi';
-  const { value, slope } = edge(sample, species, direction, side, physics);
+  const { value, slope } = edge(sample.material, sample.dopant, species, direction, side, physics);
   const offset = u - range[side];
   return Math.exp(value + slope * CONTINUATION_WIDTH * Math.tanh(offset / CONTINUATION_WIDTH));
 }

@@ -56,6 +56,8 @@
  * reverse equation (transport.anchoredResistivity(…, 'reverse')).
  */
 import type { Sample } from './sample';
+import type { Dopant, Material } from './materials/types';
+import { memoize } from './memo';
 import { findRoot } from './solve';
 import { PhysicsDomainError } from './errors';
 import { anchoredResistivity, resistivity, resolveResistivityModel, ASTM_F723_CODE, F723_ANCHORED_CODE } from './transport';
@@ -63,8 +65,9 @@ import { f723Density, f723SpeciesFor } from './astmF723';
 
 /**
  * Range of net doping searched, cm⁻³: from 1 cm⁻³ (below that every sample is
- * intrinsic to any precision that matters) to the equilibrium solver's
- * guaranteed 1e22 cm⁻³ total density (physics contract).
+ * intrinsic to any precision that matters) to 1e22 cm⁻³ total density, the
+ * range the equilibrium solver is guaranteed for (docs/physics.md, "Solvers
+ * and their guarantees").
  */
 export const NET_DENSITY_SEARCH = { min: 1, maxTotal: 1e22 } as const;
 
@@ -168,34 +171,6 @@ interface Scan {
   readonly grid: Float64Array;
   readonly logResistivity: Float64Array;
   readonly turningPoints: readonly TurningPoint[];
-}
-
-/**
- * Scans by conditions (material, dopant, temperature, counter-doping, model):
- * a column of targets under the same conditions scans once. Cleared when full.
- */
-const SCAN_CACHE_SIZE = 64;
-const scanCaches = new WeakMap<object, WeakMap<object, Map<string, Scan>>>();
-
-function cachedScan(sample: Omit<Sample, 'density'>, code: string, make: () => Scan): Scan {
-  let byDopant = scanCaches.get(sample.material);
-  if (byDopant === undefined) {
-    byDopant = new WeakMap();
-    scanCaches.set(sample.material, byDopant);
-  }
-  let byConditions = byDopant.get(sample.dopant);
-  if (byConditions === undefined) {
-    byConditions = new Map();
-    byDopant.set(sample.dopant, byConditions);
-  }
-  const key = `${sample.temperature}|${sample.counterDensity}|${code}`;
-  let scan = byConditions.get(key);
-  if (scan === undefined) {
-    if (byConditions.size >= SCAN_CACHE_SIZE) byConditions.clear();
-    scan = make();
-    byConditions.set(key, scan);
-  }
-  return scan;
 }
 
 /** Maximum of g on [a, b] by golden-section search, for a unimodal g. */
@@ -367,24 +342,48 @@ export function scanEvaluations(sample: Omit<Sample, 'density'>, model?: string)
 }
 
 function scanFor(sample: Omit<Sample, 'density'>, code: string): { scan: Scan; maxNet: number; densityOf: (u: number) => number; logResistivityAt: (u: number) => number } {
-  const counter = sample.counterDensity;
-  const maxNet = NET_DENSITY_SEARCH.maxTotal - counter;
+  const { material, dopant, temperature, counterDensity } = sample;
+  const conditions = scanConditionsOf(material, dopant, temperature, counterDensity, code);
+  const scan = scanOf(material, dopant, temperature, counterDensity, code);
+  return { scan, ...conditions };
+}
+
+/** The searched range and the forward model in u = ln(N − N_counter) under one set of conditions. */
+function scanConditionsOf(
+  material: Material,
+  dopant: Dopant,
+  temperature: number,
+  counterDensity: number,
+  code: string,
+): { maxNet: number; densityOf: (u: number) => number; logResistivityAt: (u: number) => number } {
+  const maxNet = NET_DENSITY_SEARCH.maxTotal - counterDensity;
   if (!(maxNet > NET_DENSITY_SEARCH.min)) {
     throw new PhysicsDomainError(
-      `counter-doping ${counter} cm⁻³ leaves no room for the dopant below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³ total; ` +
+      `counter-doping ${counterDensity} cm⁻³ leaves no room for the dopant below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³ total; ` +
         `use counter-doping below ${NET_DENSITY_SEARCH.maxTotal} cm⁻³.`,
     );
   }
-  const densityOf = (u: number): number => counter + Math.exp(u);
+  const densityOf = (u: number): number => counterDensity + Math.exp(u);
   // 'f723-anchored' inverts the form anchored to F723's reverse equation (f723Anchored.ts).
   const forward = (probe: Sample): number =>
     code === F723_ANCHORED_CODE ? anchoredResistivity(probe, 'reverse') : resistivity(probe, code);
-  const logResistivityAt = (u: number): number => Math.log(forward({ ...sample, density: densityOf(u) }));
-  const lo = Math.log(NET_DENSITY_SEARCH.min);
-  const hi = Math.log(maxNet);
-  const scan = cachedScan(sample, code, () => scanConditions(logResistivityAt, lo, hi));
-  return { scan, maxNet, densityOf, logResistivityAt };
+  const logResistivityAt = (u: number): number =>
+    Math.log(forward({ material, dopant, temperature, counterDensity, density: densityOf(u) }));
+  return { maxNet, densityOf, logResistivityAt };
 }
+
+/**
+ * Scans by conditions (material, dopant, temperature, counter-doping, model;
+ * memo.ts, the core's one memo policy): a column of targets under the same
+ * conditions scans once.
+ */
+const scanOf = memoize(
+  256,
+  (material: Material, dopant: Dopant, temperature: number, counterDensity: number, code: string): Scan => {
+    const { maxNet, logResistivityAt } = scanConditionsOf(material, dopant, temperature, counterDensity, code);
+    return scanConditions(logResistivityAt, Math.log(NET_DENSITY_SEARCH.min), Math.log(maxNet));
+  },
+);
 
 interface Solved {
   readonly solutions: readonly DopingSolution[];

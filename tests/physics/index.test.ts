@@ -11,9 +11,10 @@ import type {
   Sample,
 } from '../../src/physics';
 
-// The barrel must carry the API of the physics contract (both helpers) to the catalog layer.
+// src/physics/index.ts is the core's public API: the catalog reaches the physics through it only, so it must
+// export every function, table and type the catalog uses, the sample helpers sampleDopants and carrierFor included.
 describe('src/physics/index.ts', () => {
-  it('exports every function and table of the contract', () => {
+  it('exports every function and table the catalog uses', () => {
     const functions = [
       'thermalVoltage', 'findRoot', 'resolveMaterial', 'bandgap', 'conductionBandDensity', 'valenceBandDensity',
       'intrinsicDensity', 'dopantCodes', 'resolveDopant', 'genericDopant', 'solveEquilibrium', 'ionizedFraction',
@@ -31,7 +32,7 @@ describe('src/physics/index.ts', () => {
     expect(physics.SILICON.code).toBe('Si');
   });
 
-  it('carries the contract types (checked by the compiler)', () => {
+  it('exports the public types (checked by the compiler)', () => {
     const material: Material = physics.SILICON;
     const dopant: Dopant = physics.resolveDopant(material, 'B');
     const kind: DopantKind = dopant.kind;

@@ -46,7 +46,7 @@ describe('conductivity', () => {
     }
   });
 
-  it('reproduces the fit at 300 K: σ = q·N·μ_fit up to the minority-carrier term (the trap resolution)', () => {
+  it('reproduces the fit at 300 K: σ = q·N·μ_fit up to the minority-carrier term (the full-ionization correction, docs/physics.md)', () => {
     for (const dopant of ['B', 'P', 'As']) {
       for (const n of logSpaced(13, 20, 2)) {
         const sample = siliconSample(dopant, n);

@@ -12,6 +12,7 @@
  * registry states the fitted range).
  */
 import type { Carrier } from '../sample';
+import { memoize } from '../memo';
 
 /** Citation and validity of the Arora fit, for the model registry. */
 export const ARORA_SOURCE = {
@@ -88,33 +89,24 @@ interface AroraCoefficients {
 /**
  * Coefficients by carrier and temperature. They depend on temperature only,
  * yet cost four powers, while a sheet or a doping × temperature grid uses few
- * distinct temperatures; remembering them leaves each mobility one power. The
- * values are the ones computed below, so results are identical. Cleared when full.
+ * distinct temperatures; remembering them (memo.ts, the core's one memo
+ * policy) leaves each mobility one power.
  */
-const COEFFICIENT_CACHE_SIZE = 1024;
-const coefficientCache: Record<Carrier, Map<number, AroraCoefficients>> = { electron: new Map(), hole: new Map() };
-
-function temperatureCoefficients(carrier: Carrier, temperature: number): AroraCoefficients {
-  const cache = coefficientCache[carrier];
-  const cached = cache.get(temperature);
-  if (cached !== undefined) return cached;
+const temperatureCoefficients = memoize(2048, (carrier: Carrier, temperature: number): AroraCoefficients => {
   const p = ARORA_TABLE[carrier];
   const reduced = temperature / ARORA_REFERENCE_TEMPERATURE;
-  const coefficients: AroraCoefficients = {
+  return {
     minimum: p.minimum.value * Math.pow(reduced, p.minimum.exponent),
     amplitude: p.amplitude.value * Math.pow(temperature, p.amplitude.exponent),
     referenceDensity: p.referenceDensity.value * Math.pow(reduced, p.referenceDensity.exponent),
     alpha: p.alpha.value * Math.pow(reduced, p.alpha.exponent),
   };
-  if (cache.size >= COEFFICIENT_CACHE_SIZE) cache.clear();
-  cache.set(temperature, coefficients);
-  return coefficients;
-}
+});
 
 /**
  * Arora's temperature ratio μ_Arora(N, T) / μ_Arora(N, 300 K): the factor by
  * which the 300 K fits (Masetti, Caughey–Thomas) are carried to other
- * temperatures (recommendation of the physics contract).
+ * temperatures (our choice; docs/physics.md, "Mobility models").
  *
  * @param carrier - 'electron' or 'hole'
  * @param totalDensity - N ≥ 0, cm⁻³

@@ -1,6 +1,7 @@
 /**
  * The correction that keeps the mobility fits honest next to incomplete
- * ionization ("the trap" of the physics contract).
+ * ionization (why it is needed and what it guarantees: docs/physics.md,
+ * "Ionization and the fitted mobilities").
  *
  * Masetti, Arora and Caughey–Thomas fitted conductivity mobility against the
  * *total* dopant density at room temperature, i.e. they computed μ from
@@ -24,7 +25,7 @@
  *   factor = 1 − s² + s · N_net/(m + m')
  *
  * For an extrinsic reference (m ≫ m', every doping the fits describe) s → 1
- * and factor → N_net/m, the contract's formula; the difference is of order
+ * and factor → N_net/m, the formula above; the difference is of order
  * m'/m = ni²/N² (below 1e-6 for N ≥ 1e13 cm⁻³). When the 300 K reference is
  * intrinsic (N_net ≲ ni, including near-exact compensation) s → 0 and the
  * factor goes smoothly to 1: free carriers are then ~ni, the fits'
@@ -42,6 +43,8 @@
 import type { Carrier, Sample } from '../sample';
 import { sampleDopants, suppliedCarrier, otherCarrier } from '../sample';
 import { solveEquilibrium } from '../equilibrium';
+import type { Dopant, Material } from '../materials/types';
+import { memoize } from '../memo';
 
 /** Temperature at which the mobility fits were made and the correction is referenced, K. */
 export const FIT_REFERENCE_TEMPERATURE = 300;
@@ -74,54 +77,20 @@ export function netMajorityCarrier(sample: Sample): Carrier | undefined {
 export function fullIonizationCorrection(sample: Sample): number {
   const majority = netMajorityCarrier(sample);
   if (majority === undefined) return 1;
-  const cache = correctionCache(sample.material, sample.dopant);
-  let byCounter = cache.byDensity.get(sample.density);
-  const cached = byCounter?.get(sample.counterDensity);
-  if (cached !== undefined) return cached;
-  const factor = computeCorrection(sample, majority);
-  if (cache.entries >= CORRECTION_CACHE_SIZE) {
-    cache.byDensity.clear();
-    cache.entries = 0;
-    byCounter = undefined;
-  }
-  if (byCounter === undefined) {
-    byCounter = new Map();
-    cache.byDensity.set(sample.density, byCounter);
-  }
-  byCounter.set(sample.counterDensity, factor);
-  cache.entries++;
-  return factor;
+  return correctionFor(sample.material, sample.dopant, sample.density, sample.counterDensity, majority);
 }
 
 /**
- * Most recent factors, per material and dopant, keyed by density and
- * counter-density. The factor does not depend on the sample's temperature,
- * but it costs a neutrality solve at 300 K; a doping × temperature grid or a
- * column of repeated dopings asks for the same factor many times. The value is
- * the one computeCorrection returns, so results are identical with or without
- * the cache. Cleared when full, which keeps it small and needs no bookkeeping.
+ * The factor by the inputs it depends on. It does not depend on the sample's
+ * temperature but costs a neutrality solve at 300 K, and a doping ×
+ * temperature grid or a column of repeated dopings asks for the same factor
+ * many times, so it is remembered (memo.ts, the core's one memo policy).
  */
-const CORRECTION_CACHE_SIZE = 4096;
-/** Factors by density, then counter-density (numbers as keys: no string formatting per call). */
-interface CorrectionCache {
-  readonly byDensity: Map<number, Map<number, number>>;
-  entries: number;
-}
-const correctionCaches = new WeakMap<object, WeakMap<object, CorrectionCache>>();
-
-function correctionCache(material: object, dopant: object): CorrectionCache {
-  let byDopant = correctionCaches.get(material);
-  if (byDopant === undefined) {
-    byDopant = new WeakMap();
-    correctionCaches.set(material, byDopant);
-  }
-  let cache = byDopant.get(dopant);
-  if (cache === undefined) {
-    cache = { byDensity: new Map(), entries: 0 };
-    byDopant.set(dopant, cache);
-  }
-  return cache;
-}
+const correctionFor = memoize(
+  4096,
+  (material: Material, dopant: Dopant, density: number, counterDensity: number, majority: Carrier): number =>
+    computeCorrection({ material, dopant, density, counterDensity, temperature: FIT_REFERENCE_TEMPERATURE }, majority),
+);
 
 /** The factor itself, from a 300 K neutrality solve (see the module comment). */
 function computeCorrection(sample: Sample, majority: Carrier): number {

@@ -7,7 +7,8 @@ import { solveEquilibrium } from '../../../src/physics/equilibrium';
 import { sampleDopants } from '../../../src/physics/sample';
 import { logSpaced, siliconSample } from '../transportSamples';
 
-// The resolution of "the trap" in the physics contract: μ = μ_fit · N_net / n_eq(300 K).
+// The full-ionization correction of the fitted mobilities (docs/physics.md, "Ionization and the fitted mobilities"):
+// μ = μ_fit · N_net / n_eq(300 K).
 describe('netMajorityCarrier', () => {
   it('is the carrier of whichever doping outweighs the other', () => {
     expect(netMajorityCarrier(siliconSample('P', 1e16))).toBe('electron');

@@ -74,7 +74,7 @@ describe('Klaassen (1992) I: concentration dependence at 300 K', () => {
   // PVeducation's mob_klassen prints −0.01552, and a Python module by T. Ried (2022, class Klaassen, seen in
   // the code search without its repository name) prints −0.01552 with the note "r5(Sentaurus) = −0.8552,
   // r5(Klaassen) = −0.01552": the paper's Table 2 value is then −0.01552 and −0.8552 a simulator's refit.
-  // Kept as a failing expectation for the integrator (a value change is a physics change). With −0.01552
+  // Kept as a failing expectation until the paper settles it (a value change is a physics change). With −0.01552
   // the 300 K minority mobilities fall by about 13 % (holes in n-Si, 1e19) to 21 % (holes, 1e20) and
   // 11–17 % (electrons in p-Si, 1e19–1e20).
   it.failing('KNOWN DISAGREEMENT (expected to fail): r5 = −0.01552, the paper’s value as two transcriptions that follow the paper print it', () => {

@@ -61,7 +61,7 @@ describe('Masetti et al. (1983)', () => {
     expect(electronFit('As', 1e18)).toBeCloseTo(284, 0);
   });
 
-  it('is what the default resistivity reproduces at 300 K: ρ = 1/(q·N·μ_Masetti) (THE TRAP resolution)', () => {
+  it('is what the default resistivity reproduces at 300 K: ρ = 1/(q·N·μ_Masetti) (the full-ionization correction, docs/physics.md)', () => {
     for (const [dopant, carrier] of [['P', 'electron'], ['As', 'electron'], ['B', 'hole']] as const) {
       for (const n of logSpaced(14, 21, 1)) {
         const sample = siliconSample(dopant, n);

@@ -11,7 +11,8 @@
  * without its repository name) gives 9.15e19 and 6880 K, i.e. 1.00e10 cm⁻³ at
  * 300 K, the paper's headline value (from memory), where our fit gives 1.015e10.
  * So the model named 'sproul-green' (1991) may carry another paper's fit: a
- * finding for the integrator, kept below as a failing expectation.
+ * disagreement not yet settled against the paper, kept below as a failing
+ * expectation (DEVELOPERS.md, Testing: KNOWN DISAGREEMENT).
  */
 import { intrinsicDensity } from '../../../src/physics/bands';
 import { SILICON } from '../../../src/physics/materials';
