@@ -498,7 +498,7 @@ function windowText(window: DensityWindow, names: DensityWindowNames): string {
  *
  * @param target - resistivity, Ω·cm (finite, > 0)
  * @param sample - material, temperature, dopant and counterDensity (density is the unknown)
- * @param model - resistivity model code (default 'masetti'; 'astm-f723' uses the standard's reverse equation)
+ * @param model - resistivity model code (blank: the material's default, 'f723-anchored' in silicon, which inverts ASTM F723's N-from-ρ equation; 'astm-f723' uses the standard's reverse equation)
  * @param window - optional density window, cm⁻³ (ends included), to pick one of several solutions
  * @param names - how messages name the window's ends (default window.min, window.max)
  * @returns { density in cm⁻³, iterations }

@@ -51,7 +51,7 @@ function keyOf(arg: MemoKey): MemoKey {
  * @param compute - the pure function
  * @returns the memoized function
  * @throws RangeError for a capacity that is not an integer ≥ 1
- * @example const square = memoize(16, (x: number) => x * x); square(3) // 9, computed; square(3) // 9, remembered
+ * @example memoize(16, (x: number) => x * x)(3) // → 9
  */
 export function memoize<A extends readonly MemoKey[], R>(capacity: number, compute: (...args: A) => R): Memo<A, R> {
   if (!Number.isInteger(capacity) || capacity < 1) {

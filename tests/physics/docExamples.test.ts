@@ -29,14 +29,10 @@ const LIBRARY_PACKAGE = 'driftcell';
 
 /**
  * Files or folders (ending in /) whose examples are listed but not run, each
- * with the reason. Klaassen's module is being split into mobility/klaassen/ on
- * another branch that rewrites its examples; the lead removes these two
- * entries at that merge, and then they run like every other example.
+ * with the reason. Empty: every example runs; an entry here needs a reason a
+ * reviewer accepts.
  */
-const KNOWN_EXCEPTIONS: readonly { readonly path: string; readonly reason: string }[] = [
-  { path: 'src/physics/mobility/klaassen.ts', reason: 'examples rewritten by the klaassen/ split, enabled at its merge' },
-  { path: 'src/physics/mobility/klaassen/', reason: 'examples rewritten by the klaassen/ split, enabled at its merge' },
-];
+const KNOWN_EXCEPTIONS: readonly { readonly path: string; readonly reason: string }[] = [];
 
 function exceptionFor(file: string): string | undefined {
   return KNOWN_EXCEPTIONS.find((e) => (e.path.endsWith('/') ? file.startsWith(e.path) : file === e.path))?.reason;

@@ -91,7 +91,7 @@ export interface KlaassenDensities {
  * @param carrier - 'electron' or 'hole'
  * @param temperature - T > 0, K
  * @returns μ_L in cm²/(V·s)
- * @example klaassenLatticeMobility('electron', 300) // 1414
+ * @example klaassenLatticeMobility('electron', 300) // → 1414
  */
 export function klaassenLatticeMobility(carrier: Carrier, temperature: number): number {
   const { maximum: muMax, latticeExponent: theta } = KLAASSEN_CARRIER_TABLE[carrier];

@@ -34,7 +34,7 @@ import { klaassenMobility, type KlaassenDensities } from './equations';
  *
  * @param sample - the sample
  * @returns N_D, N_A, n, p in cm⁻³
- * @example klaassenSampleDensities(phosphorus1e18At300K) // { donors: 1e18, acceptors: 0, electrons: ≈ 1e18, holes: ≈ 1e2 }
+ * @example klaassenSampleDensities(phosphorus1e18At300K) // → { donors: 1e18, acceptors: 0, electrons: ≈ 1e18, holes: ≈ 1e2 }
  */
 export function klaassenSampleDensities(sample: Sample): KlaassenDensities {
   const equilibrium = solveEquilibrium(sample.material, sample.temperature, sampleDopants(sample));
@@ -57,7 +57,7 @@ export function klaassenSampleDensities(sample: Sample): KlaassenDensities {
  * @param carrier - 'electron' or 'hole'
  * @param sample - a silicon sample
  * @returns μ in cm²/(V·s)
- * @example klaassenSampleMobility('electron', boron1e19At300K) // ≈ 210 (minority electrons)
+ * @example klaassenSampleMobility('electron', boron1e19At300K) // ≈ 211 (minority electrons)
  */
 export function klaassenSampleMobility(carrier: Carrier, sample: Sample): number {
   return klaassenMobility(carrier, klaassenSampleDensities(sample), sample.temperature);
