@@ -80,6 +80,28 @@ describe('buildFunctionsMetadata', () => {
   });
 });
 
+describe('DRIFT.MODELCODES in functions.json', () => {
+  const entry = metadata.functions.find((f) => f.id === 'MODELCODES');
+
+  it('is declared like every other function: a matrix result, so Excel spills its row, and matrix arguments', () => {
+    // A matrix result is what lets a custom function return a 2-D array that spills (Office, "Custom functions metadata").
+    expect(entry).toMatchObject({ id: 'MODELCODES', name: 'MODELCODES', result: { type: 'any', dimensionality: 'matrix' }, helpUrl: 'https://localhost:3000/help/modelcodes.html' });
+    expect(entry?.parameters.map((p) => [p.name, p.optional, p.dimensionality])).toEqual([
+      ['quantity', false, 'matrix'],
+      ['material', true, 'matrix'],
+      ['dopant', true, 'matrix'],
+    ]);
+  });
+
+  it('tells in the tooltips which quantities there are and what a blank material and dopant mean', () => {
+    const [quantity, material, dopant] = entry!.parameters.map((p) => p.description);
+    expect(quantity).toMatch(/resistivity, mobility, intrinsic, bandgap-narrowing/);
+    expect(material).toMatch(/blank means Si/);
+    expect(dopant).toMatch(/blank means any/);
+    expect(dopant).toMatch(/Default: any dopant\.$/);
+  });
+});
+
 describe('the built functions.json and help pages', () => {
   beforeAll(requireAddinBuild);
 

@@ -89,6 +89,18 @@ describe('makeExcelFunction', () => {
     expect(result[0]).toEqual(['code', 'quantity', 'model', 'citation', 'validity']);
   });
 
+  it('returns DRIFT.MODELCODES as one row of text, and a range argument as one Error with the catalog message', () => {
+    const fn = makeExcelFunction(runtime, spec('MODELCODES'));
+    const row = fn([['resistivity']], [['Si']], [['B']], {});
+    expect(row).toEqual(evaluate(spec('MODELCODES'), ['resistivity', 'Si', 'B']));
+    expect(row).toHaveLength(1);
+    expect(row[0]).toContain('astm-f723');
+    // An empty cell some Excel builds pass as 0 reads as blank here (zeroIsBlank): silicon, any dopant.
+    expect(fn([['mobility']], [[0]], [[0]], {})).toEqual(evaluate(spec('MODELCODES'), ['mobility']));
+    const refused = fn([['resistivity'], ['mobility']], null, null, {});
+    expect(refused).toEqual([[new FakeError('#VALUE!', 'DRIFT.MODELCODES gives one row whose length depends on its arguments, so quantity must be a single value, not 2×1 values; call it once per value instead')]]);
+  });
+
   it('guards a table function that throws, returning #VALUE! with the reason', () => {
     const broken = tableFunction({
       name: 'BROKEN', summary: '', help: '', result: { unit: null, description: '' }, examples: [], models: [],
