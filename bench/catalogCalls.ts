@@ -13,7 +13,7 @@ import type { ElementwiseSpec, FunctionSpec } from '../src/catalog/types';
 import type { ArgumentInput, CellInput } from '../src/catalog/values';
 import { CM_PER_UM, SILICON } from '../src/physics';
 import { consume, sideBySide } from './lib/timing';
-import { figure, ratio, show, target, type Section, type TableRow, type Target } from './lib/results';
+import { ratio, show, target, type Section, type TableRow, type Target } from './lib/results';
 
 /** Highest overhead accepted for closed-form functions (issue 6). */
 export const CLOSED_FORM_MAX_RATIO = 3;

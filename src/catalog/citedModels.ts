@@ -7,18 +7,18 @@
  */
 import {
   BANDGAP_NARROWING_MODEL_CODES,
+  CAUGHEY_THOMAS_FIELD_CODE,
   FERMI_DIRAC_STATISTICS,
   HIGH_FIELD_TABLES,
+  IONIZATION_MODEL_CODE,
   MATERIALS,
   SILICON,
   intrinsicModelCodes,
+  ionizationModelCode,
   mobilityModelCodes,
   resistivityModelCodes,
   type Material,
 } from '../physics';
-import { IONIZATION_MODEL_CODE } from '../physics/ionization';
-import { ionizationModelCode } from '../physics/materials/modelInfo';
-import { CAUGHEY_THOMAS_FIELD_CODE } from '../physics/highField';
 
 /** Every code of codesOf over all materials, each once, in material order. */
 export function allCodes(codesOf: (host: Material) => readonly string[]): readonly string[] {

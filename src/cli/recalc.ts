@@ -126,7 +126,7 @@ export async function runRecalc(input: string, options: RecalcOptions, output: O
   let bytes: Buffer;
   let values: ValuesForm | undefined;
   let workbook: ExcelJS.Workbook;
-  let blockers: SpillBlockers = new Map();
+  let blockers: SpillBlockers;
   // A bar on stderr only when it is a terminal: long workbooks take a while. Reading, calculating
   // and writing are single calls (exceljs, HyperFormula); placing the results counts formulas.
   const progress = phaseProgress(process.stderr, `recalc ${input}`, ['reading', 'calculating', 'placing results', 'writing']);

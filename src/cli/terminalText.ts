@@ -10,6 +10,7 @@
  * U+200E/U+200F, embeddings and overrides U+202A–U+202E, isolates U+2066–U+2069,
  * and the Arabic letter mark U+061C (Unicode UAX #9, "Explicit directional formatting").
  */
+// eslint-disable-next-line no-control-regex -- matching control characters is this pattern's purpose
 const UNSAFE = /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/gu;
 
 /**

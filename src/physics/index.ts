@@ -123,3 +123,10 @@ export { TYPICAL_CONTACT_HEAD_SQUARES, resistorLength, resistorAtTemperature, ty
 
 // Model registry.
 export { MODEL_REGISTRY, modelInfo, type ModelInfo } from './models';
+
+// Codes and constants the catalog cites in help text and model lists; exported
+// here so the catalog reaches physics only through this barrel.
+export { IONIZATION_MODEL_CODE } from './ionization';
+export { ionizationModelCode } from './materials/modelInfo';
+export { CAUGHEY_THOMAS_FIELD_CODE, carrierHighFieldTable, canaliExponentAt300K } from './highField';
+export { TCR_RELATIVE_STEP } from './temperatureCoefficient';

@@ -2,7 +2,7 @@
  * The catalog entries as a user meets them: identities between functions
  * that must hold exactly, defaults, and the messages bad input gets.
  */
-import { CATALOG, evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
+import { CATALOG, evaluate, findFunction, type ArgumentInput } from '../../src/catalog';
 import { ELEMENTARY_CHARGE, MOBILITY_MODEL_CODES, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
 import { message, value } from './support/call';
 

@@ -3,7 +3,7 @@
  * meets them: defaults, consistency between the three, agreement with the
  * core, and the messages bad input gets.
  */
-import { evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
+import { evaluate, findFunction, type ArgumentInput } from '../../src/catalog';
 import { SILICON, diffusedLayerSheetResistance, implantedLayerSheetResistance, resolveDopant } from '../../src/physics';
 import { message, value } from './support/call';
 

@@ -2,7 +2,7 @@
  * The measurement-analysis and resistor-design entries as a user meets them:
  * identities with other catalog functions, defaults, errors.
  */
-import { evaluate, findFunction, isFailure, type ArgumentInput, type CellOutput } from '../../src/catalog';
+import { evaluate, findFunction, type ArgumentInput, type CellOutput } from '../../src/catalog';
 import { message, value } from './support/call';
 
 function grid(name: string, ...args: ArgumentInput[]): CellOutput[][] {

@@ -12,6 +12,7 @@ type Entry = typeof import('../../src/excel/functions');
 function loadEntry(): Entry {
   let entry: Entry | undefined;
   jest.isolateModules(() => {
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- jest.isolateModules needs a synchronous load
     entry = require('../../src/excel/functions') as Entry;
   });
   return entry as Entry;

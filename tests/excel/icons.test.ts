@@ -7,7 +7,7 @@ import path from 'path';
 import { inflateSync } from 'zlib';
 import { PROJECT_ROOT } from './support/build';
 
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- make-icons.js is a CommonJS script outside the TypeScript build
 const icons = require(path.join(PROJECT_ROOT, 'assets', 'make-icons.js')) as {
   SIZES: number[];
   render(size: number): Buffer;

@@ -125,6 +125,7 @@ describe('registerCatalog', () => {
   });
 
   it('looks the Error constructor up when a function runs, not when it is bound', () => {
+    // eslint-disable-next-line prefer-const -- assigned after binding on purpose: the look-up must happen at call time
     let errors: CustomFunctionsErrors | undefined;
     const bound = new Map<string, (...a: unknown[]) => unknown>();
     registerCatalog({ associate: (id, fn) => void bound.set(id, fn) }, CATALOG, () => errors);

@@ -56,7 +56,7 @@ function modulePath(file: string): string {
 }
 
 function valueExports(file: string): string[] {
-  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  // eslint-disable-next-line @typescript-eslint/no-require-imports -- the module path is computed per example file
   return Object.keys(require(modulePath(file))).filter((name) => !name.startsWith('__'));
 }
 

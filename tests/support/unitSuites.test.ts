@@ -6,10 +6,12 @@ interface Suite {
   readonly relative: string;
   readonly excludedBecause: string | undefined;
 }
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- unitSuites.js is the CommonJS module jest.unit.config.js loads
 const { classifySuites, needsBeyondUnit } = require('./unitSuites') as {
   classifySuites(): Suite[];
   needsBeyondUnit(file: string, text?: string): string | undefined;
 };
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- the jest config is CommonJS
 const config = require('../../jest.unit.config.js') as { testPathIgnorePatterns: string[] };
 
 const ROOT = path.resolve(__dirname, '..', '..');

@@ -86,6 +86,7 @@ function mockExcel(rangeData: Record<string, unknown> = {}) {
       return batch(this.context);
     },
   };
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- office-addin-mock's context has no type to name
   const excel = new OfficeMockObject(data as never) as unknown as ExcelHost & { context: any };
   return { excel, log, firstSeries, addedSeries, conditionalFormat };
 }

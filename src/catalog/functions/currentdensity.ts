@@ -1,9 +1,8 @@
-import { FIELD_DEPENDENCE_CODES, currentDensity, type FieldDependence } from '../../physics';
+import { FIELD_DEPENDENCE_CODES, carrierHighFieldTable, currentDensity, type FieldDependence } from '../../physics';
 import { counterDoping, dopant, doping, field, material, sampleOf, temperature } from '../common';
 import { codeParameter } from '../parameters';
 import { elementwise } from '../types';
 import { HIGH_FIELD_MODELS } from '../citedModels';
-import { carrierHighFieldTable } from '../../physics/highField';
 
 /** Lowest temperature with a Si hole saturation velocity, K (for the help text). */
 const SILICON_HOLE_MIN_K = carrierHighFieldTable('Si', 'hole').evaluationRange.min;

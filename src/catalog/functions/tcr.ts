@@ -1,5 +1,4 @@
-import { SILICON, resistivityTemperatureCoefficient, type Sample } from '../../physics';
-import { TCR_RELATIVE_STEP } from '../../physics/temperatureCoefficient';
+import { SILICON, TCR_RELATIVE_STEP, resistivityTemperatureCoefficient, type Sample } from '../../physics';
 import { TEMPERATURE_RANGE_K, dopant, doping, material, resistivityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { RESISTIVITY_MODELS } from '../citedModels';

@@ -1,5 +1,4 @@
-import { saturationVelocity, type Carrier } from '../../physics';
-import { carrierHighFieldTable, canaliExponentAt300K } from '../../physics/highField';
+import { canaliExponentAt300K, carrierHighFieldTable, saturationVelocity, type Carrier } from '../../physics';
 import { CARRIER_ALIASES, CARRIER_SPELLINGS, material, temperature } from '../common';
 import { codeParameter } from '../parameters';
 import { elementwise, type ParameterSpec } from '../types';

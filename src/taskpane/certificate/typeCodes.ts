@@ -11,7 +11,7 @@
  * parameters of B (acceptor) and P (donor) in silicon (see
  * src/physics/dopants.ts), so mobility is that of those elements.
  */
-import { readDopant, resolveMaterial, typedDopantCodes } from '../../physics';
+import { readDopant, resolveMaterial, typedDopantCodes } from '../../catalog/physicsFacade';
 
 /** What a lone letter of the type column becomes, by the switch. */
 const LONE_LETTERS = {

@@ -6,7 +6,7 @@
  * builds elements and reads them back.
  */
 import { findFunction } from '../../catalog';
-import { F723_ANCHOR_TEMPERATURE } from '../../physics';
+import { F723_ANCHOR_TEMPERATURE } from '../../catalog/physicsFacade';
 import { columnName, sheetAddress, type CellBlock } from '../port';
 import type { ToolContext } from '../tool';
 import { parameterNamed } from '../reference/callText';

@@ -6,8 +6,7 @@
  */
 import { qualifiedName } from '../../catalog/naming';
 import type { FunctionSpec, ParameterSpec } from '../../catalog/types';
-import { PhysicsDomainError } from '../../physics/errors';
-import { modelInfo, type ModelInfo } from '../../physics/models';
+import { PhysicsDomainError, modelInfo, type ModelInfo } from '../../catalog/physicsFacade';
 
 /** One parameter as the reference lists it. */
 export interface ParameterDetail {

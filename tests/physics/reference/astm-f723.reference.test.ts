@@ -9,8 +9,7 @@
  * below are from memory.
  */
 import { F723_VALIDITY, f723Density, f723Resistivity, type F723Species } from '../../../src/physics/astmF723';
-import { resistivity } from '../../../src/physics/transport';
-import { logSpaced, siliconSample } from '../transportSamples';
+import { logSpaced } from '../transportSamples';
 
 describe('ASTM F723-99 §1.2: self-consistency of the two conversions', () => {
   // §1.2 (read): "within 3 % for boron from 0.0001 to 10 000 Ω·cm and within
