@@ -15,7 +15,7 @@
  */
 import type { ElementwiseSpec, FunctionSpec, ParameterSpec, RowSpec, TupleSpec } from './types';
 import { InputError, failure, isFailure, type ArgumentInput, type CellFailure, type CellInput, type CellOutput, type Grid } from './values';
-import { PhysicsDomainError } from '../physics/errors';
+import { PhysicsDomainError } from '../physics';
 import { qualifiedName } from './naming';
 
 export { NAMESPACE } from './naming';

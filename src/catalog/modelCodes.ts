@@ -13,7 +13,10 @@
  */
 import {
   BANDGAP_NARROWING_MODEL_CODES,
+  ASTM_F723_CODE,
   F723_ANCHOR_TEMPERATURE,
+  PhysicsDomainError,
+  f723SpeciesFor,
   intrinsicModelCodes,
   mobilityModelCodes,
   resistivityModelCodes,
@@ -22,9 +25,6 @@ import {
   type Dopant,
   type Material,
 } from '../physics';
-import { f723SpeciesFor } from '../physics/astmF723';
-import { PhysicsDomainError } from '../physics/errors';
-import { ASTM_F723_CODE } from '../physics/transport';
 import { dopant as dopantParameter, intrinsicModel, material as materialParameter, mobilityModel, resistivityModel } from './common';
 import { bandgapNarrowingModel } from './functions/nieff';
 import { codeParameter } from './parameters';

@@ -67,6 +67,7 @@ export {
   RESISTIVITY_MODEL_CODES,
   ALL_RESISTIVITY_MODEL_CODES,
   F723_ANCHORED_CODE,
+  ASTM_F723_CODE,
   anchoredResistivity,
   resistivityModelCodes,
   conductivity,
@@ -90,7 +91,7 @@ export {
 } from './highField';
 export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
 export { dopingForResistivity, dopingSolutions, AmbiguousDopingError, type DensityWindow, type DensityWindowNames, type DopingSolution } from './inverse';
-export { f723Resistivity, f723Density, F723_VALIDITY, type F723Species } from './astmF723';
+export { f723Resistivity, f723Density, f723SpeciesFor, F723_VALIDITY, type F723Species } from './astmF723';
 export { F723_ANCHOR_TEMPERATURE } from './f723Anchored';
 export { resistivitySpread, dopingSpread, type ModelSpread } from './modelSpread';
 export { resistivityAtTemperature, conversionModel, CERTIFICATE_TEMPERATURE } from './temperatureConversion';

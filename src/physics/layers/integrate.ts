@@ -19,6 +19,7 @@
  */
 import { PhysicsDomainError } from '../errors';
 
+/* eslint-disable no-loss-of-precision -- coefficients as their source prints them, more digits than a double holds; the nearest double is what runs, and cutting digits by hand could round differently */
 /** Kronrod abscissae on [−1, 1], positive half, decreasing; odd indices are the Gauss nodes. */
 const KRONROD_NODES = [
   0.991455371120812639206854697526329, 0.949107912342758524526189684047851, 0.864864423359769072789712788640926,
@@ -38,6 +39,7 @@ const GAUSS_WEIGHTS = [
   0.129484966168869693270611432679082, 0.279705391489276667901467771423780, 0.381830050505118944950369775488975,
   0.417959183673469387755102040816327,
 ] as const;
+/* eslint-enable no-loss-of-precision */
 
 /** Evaluations per piece. */
 export const EVALUATIONS_PER_PIECE = 15;
