@@ -19,7 +19,7 @@ import {
 import { MATERIAL_MOBILITY_FITS } from '../../../src/physics/mobility/materialFits';
 import { MATERIALS, SILICON } from '../../../src/physics/materials';
 import { MODEL_REGISTRY, modelInfo } from '../../../src/physics/models';
-import { parameterText } from '../../../src/physics/parameterText';
+import { exponentText, parameterText } from '../../../src/physics/parameterText';
 import type { Carrier } from '../../../src/physics/sample';
 import { materialSample } from '../transportSamples';
 
@@ -105,7 +105,7 @@ describe('citations quote the parameter table', () => {
       // μmin = 0 (Hilsum) is the form's, not a quoted value.
       const quoted = [p.maximum.value, p.referenceDensity.value, p.alpha.value, ...(p.minimum.value === 0 ? [] : [p.minimum.value])];
       for (const value of quoted) {
-        const written = [parameterText(value), parameterText(value, 2)];
+        const written = [parameterText(value), parameterText(value, 2), exponentText(value)];
         expect([value, written.some((text) => fit.citation.includes(text))]).toEqual([value, true]);
       }
     }
@@ -127,6 +127,15 @@ describe('parameterText', () => {
     [636, 3, '636'],
   ] as const)('writes %p with %p significant digits as %p', (value, digits, text) => {
     expect(parameterText(value, digits)).toBe(text);
+  });
+
+  it.each([
+    [1.5, '3/2'],
+    [0.5, '1/2'],
+    [2, '2'],
+    [-1.66, '−1.66'],
+  ] as const)('writes the exponent %p as %p', (value, text) => {
+    expect(exponentText(value)).toBe(text);
   });
 
   it('refuses what is no table value or no digit count', () => {
