@@ -36,6 +36,19 @@ export function perMaterial(codesOf: (host: Material) => readonly string[], firs
   }).join('; ');
 }
 
+/**
+ * The default code of every material but silicon, for help texts that
+ * describe silicon's models and then the other hosts'.
+ *
+ * @param codesOf - a material's codes, default first
+ * @param form - 'for': "hilsum for Ge, sotoodeh for GaAs, …"; 'list': "hilsum, sotoodeh, …"
+ */
+export function otherMaterialDefaults(codesOf: (host: Material) => readonly string[], form: 'for' | 'list'): string {
+  return MATERIALS.filter((host) => host !== SILICON)
+    .map((host) => (form === 'for' ? `${codesOf(host)[0]} for ${host.code}` : codesOf(host)[0]))
+    .join(', ');
+}
+
 function unique(codes: readonly string[]): string[] {
   return [...new Set(codes)];
 }

@@ -1,4 +1,4 @@
-import { SILICON, carrierFor, fitMobility, freeCarrierMobility } from '../../physics';
+import { SILICON, carrierFor, fitMobility, freeCarrierMobility, mobilityModelCodes } from '../../physics';
 import { carrier, counterDoping, dopant, doping, material, mobilityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { EQUILIBRIUM_MODELS, MOBILITY_MODELS } from '../citedModels';
@@ -19,7 +19,7 @@ CONDUCTIVITY = q·(MAJORITY·FREEMOBILITY(majority) + MINORITY·FREEMOBILITY(min
 
 with DRIFT.MAJORITY and DRIFT.MINORITY for the same doping, dopant, temperature, material and counter_doping (equivalently n from DRIFT.ELECTRONS and p from DRIFT.HOLES with the generic dopants n and p), q the elementary charge.
 
-How it relates to DRIFT.MOBILITY: the silicon fits (masetti, arora, caughey-thomas, klaassen) were made as σ = q·N·μ with every dopant counted as ionized, so DRIFT.MOBILITY is a mobility per dopant. Per free carrier the same σ needs that value divided by the ionized share at 300 K (the fits' reference temperature): FREEMOBILITY = MOBILITY × N_net/n(300 K) for the net-majority carrier under a silicon model. At 1e17 cm⁻³ the factor is ${factor('P', 1e17)} (P) to ${factor('B', 1e17)} (B); at 1e18 cm⁻³, where about a fifth of the dopants are neutral at 300 K, it is ${factor('P', 1e18)} (P) to ${factor('B', 1e18)} (B). At other temperatures freeze-out enters through n, not through this factor. For minority carriers, and for the Ge, GaAs and 4H-SiC fits (made against measured free-carrier mobilities), FREEMOBILITY equals MOBILITY.
+How it relates to DRIFT.MOBILITY: the silicon fits (${mobilityModelCodes(SILICON).join(', ')}) were made as σ = q·N·μ with every dopant counted as ionized, so DRIFT.MOBILITY is a mobility per dopant. Per free carrier the same σ needs that value divided by the ionized share at 300 K (the fits' reference temperature): FREEMOBILITY = MOBILITY × N_net/n(300 K) for the net-majority carrier under a silicon model. At 1e17 cm⁻³ the factor is ${factor('P', 1e17)} (P) to ${factor('B', 1e17)} (B); at 1e18 cm⁻³, where about a fifth of the dopants are neutral at 300 K, it is ${factor('P', 1e18)} (P) to ${factor('B', 1e18)} (B). At other temperatures freeze-out enters through n, not through this factor. For minority carriers, and for the Ge, GaAs and 4H-SiC fits (made against measured free-carrier mobilities), FREEMOBILITY equals MOBILITY.
 
 Blank model: chosen per carrier exactly as in DRIFT.MOBILITY (klaassen for a Si minority carrier, the material's default otherwise). DRIFT.CONDUCTIVITY with a blank model uses its own default model for both carriers, so to reproduce it term by term pass the same model name to both.
 

@@ -1,7 +1,7 @@
-import { SILICON, carrierFor, fitMobility, mobility } from '../../physics';
+import { SILICON, carrierFor, fitMobility, mobility, mobilityModelCodes } from '../../physics';
 import { carrier, counterDoping, dopant, doping, material, mobilityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
-import { MOBILITY_MODELS } from '../citedModels';
+import { MOBILITY_MODELS, otherMaterialDefaults } from '../citedModels';
 
 /** Masetti's electron mobility in 1e18 cm⁻³ As-doped Si at 300 K, for the help text. */
 const MASETTI_AS_1E18 = fitMobility('masetti', 'electron', sampleOf(SILICON, 300, 'As', 1e18, 0)).toFixed(0);
@@ -21,7 +21,7 @@ klaassen (Klaassen 1992, silicon) is one model for majority and minority carrier
 
 Default away from 300 K: the blank choice does not change with temperature (masetti, i.e. Masetti at 300 K times Arora's temperature ratio, for majority carriers at every temperature). Switching models with temperature would put a kink into every temperature sweep. Choose klaassen for heavily doped or compensated material and temperatures far from 300 K.
 
-Other materials have their own fit, which is their default (blank model) for both carriers: hilsum for Ge, sotoodeh for GaAs, roschke-schwierz for 4H-SiC. These were fitted to measured free-carrier mobilities; silicon's models are refused for them, with a message naming the model the material supports.`,
+Other materials have their own fit, which is their default (blank model) for both carriers: ${otherMaterialDefaults(mobilityModelCodes, 'for')}. These were fitted to measured free-carrier mobilities; silicon's models are refused for them, with a message naming the model the material supports.`,
   result: { unit: 'cm²/(V·s)', description: 'Mobility' },
   parameters: [doping, dopant, temperature, carrier, mobilityModel, material, counterDoping] as const,
   examples: [

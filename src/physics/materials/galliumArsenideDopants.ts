@@ -21,6 +21,7 @@
  * acceptor (C on As sites), as in carbon-doped epitaxial layers.
  */
 
+import { GALLIUM_ARSENIDE_SOTOODEH_FIT } from '../mobility/galliumArsenideSotoodeh';
 import { mottScaledDopant, type MottScaledHost } from './ionizationScaling';
 import type { Dopant, DopantKind } from './types';
 
@@ -31,7 +32,7 @@ const SZE_NG_2007_GAAS =
   'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, ionization energies in ' +
   'GaAs (from memory)';
 
-const SPECIES_NOTE = 'the GaAs mobility fit (sotoodeh) does not depend on the dopant species';
+const SPECIES_NOTE = `the GaAs mobility fit (${GALLIUM_ARSENIDE_SOTOODEH_FIT.code}) does not depend on the dopant species`;
 
 const HOST: MottScaledHost = { relativePermittivity: GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY, mobilitySpeciesNote: SPECIES_NOTE };
 

@@ -8,21 +8,23 @@
 import { GERMANIUM_DOPANTS, GERMANIUM_RELATIVE_PERMITTIVITY } from './germaniumDopants';
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
 import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
+import { densityOfStatesText, varshniText } from './citationText';
+import { exponentText } from '../parameterText';
 
 /**
  * Varshni-form fit of the Ge gap as Thurmond gives it (the form of
  * Y. P. Varshni, Physica 34, 149 (1967)). Eg(300 K) = 0.6634 eV, matching the
  * 0.66 eV of Sze & Ng's property table.
  */
+const GERMANIUM_VARSHNI = { gapAtZero: 0.7437, alpha: 4.774e-4, beta: 235 } as const;
+
 export const THURMOND_1975_GERMANIUM_BANDGAP: VarshniBandgap = {
   code: 'thurmond-ge',
   name: 'Thurmond (1975) Varshni-form band gap of germanium',
-  gapAtZero: 0.7437,
-  alpha: 4.774e-4,
-  beta: 235,
+  ...GERMANIUM_VARSHNI,
   citation:
     'C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975), as quoted by S. M. Sze, K. K. Ng, Physics of ' +
-    'Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1: Eg0 = 0.7437 eV, α = 4.774e-4 eV/K, β = 235 K ' +
+    `Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1: ${varshniText(GERMANIUM_VARSHNI)} ` +
     '(values from memory)',
   validity:
     'fitted to Ge gap data from near 0 K to about room temperature and above (from memory); evaluated here ' +
@@ -33,14 +35,19 @@ export const THURMOND_1975_GERMANIUM_BANDGAP: VarshniBandgap = {
  * Sze & Ng's 300 K effective densities of states of Ge with the T^3/2 law of
  * constant effective masses.
  */
+const GERMANIUM_BANDS = {
+  conductionBand: { valueAtReference: 1.04e19, referenceTemperature: 300, exponent: 1.5 },
+  valenceBand: { valueAtReference: 6.0e18, referenceTemperature: 300, exponent: 1.5 },
+} as const;
+
 export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
   code: 'sze-ng-dos-ge',
   name: 'Sze & Ng (2007) effective densities of states of germanium',
-  conductionBand: { valueAtReference: 1.04e19, referenceTemperature: 300, exponent: 1.5 },
-  valenceBand: { valueAtReference: 6.0e18, referenceTemperature: 300, exponent: 1.5 },
+  ...GERMANIUM_BANDS,
   citation:
     'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix, properties of Ge ' +
-    'at 300 K: Nc = 1.04e19 cm⁻³, Nv = 6.0e18 cm⁻³ (from memory); T^3/2 law: constant effective masses ' +
+    `at 300 K: Nc = ${densityOfStatesText(GERMANIUM_BANDS.conductionBand)} cm⁻³, Nv = ${densityOfStatesText(GERMANIUM_BANDS.valenceBand, 2)} cm⁻³ ` +
+    `(from memory); T^${exponentText(GERMANIUM_BANDS.conductionBand.exponent)} law: constant effective masses ` +
     '(common practice, no source)',
   validity:
     '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is ' +

@@ -16,6 +16,7 @@
  * - Degeneracy g = 2 for donors, 4 for acceptors: common practice, no source.
  */
 
+import { GERMANIUM_HILSUM_FIT } from '../mobility/germaniumHilsum';
 import { mottScaledDopant, type MottScaledHost } from './ionizationScaling';
 import type { Dopant, DopantKind } from './types';
 
@@ -25,7 +26,7 @@ export const GERMANIUM_RELATIVE_PERMITTIVITY = 16.0;
 const SZE_NG_2007_GE =
   'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, ionization energies in Ge (from memory)';
 
-const SPECIES_NOTE = 'the germanium mobility fit (hilsum) does not depend on the dopant species';
+const SPECIES_NOTE = `the germanium mobility fit (${GERMANIUM_HILSUM_FIT.code}) does not depend on the dopant species`;
 
 const HOST: MottScaledHost = { relativePermittivity: GERMANIUM_RELATIVE_PERMITTIVITY, mobilitySpeciesNote: SPECIES_NOTE };
 

@@ -8,19 +8,21 @@
 import { SILICON_DOPANTS } from './siliconDopants';
 import type { DensityOfStatesModel, IntrinsicDensityFit, Material, VarshniBandgap } from './types';
 import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
+import { densityOfStatesText, intrinsicFitText, varshniText } from './citationText';
+import { parameterText as t } from '../parameterText';
 
 /**
  * Thurmond's Varshni-form fit of the Si gap.
  * Eg(300 K) = 1.1245 eV; Eg(77 K) = 1.1661 eV.
  */
+const THURMOND_CONSTANTS = { gapAtZero: 1.17, alpha: 4.73e-4, beta: 636 } as const;
+
 export const THURMOND_1975_BANDGAP: VarshniBandgap = {
   code: 'thurmond',
   name: 'Thurmond (1975) Varshni-form band gap',
-  gapAtZero: 1.17,
-  alpha: 4.73e-4,
-  beta: 636,
+  ...THURMOND_CONSTANTS,
   citation:
-    'C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); Eg0 = 1.170 eV, α = 4.73e-4 eV/K, β = 636 K ' +
+    `C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); ${varshniText(THURMOND_CONSTANTS, 4)} ` +
     '(values from memory)',
   validity:
     'fitted to Si gap data from near 0 K to well above room temperature (from memory); the physics core ' +
@@ -36,14 +38,19 @@ export const THURMOND_1975_BANDGAP: VarshniBandgap = {
  * 'dos' ni model tracks the measured ni(T) of Misiakos & Tsamakis within
  * about 10% from 78 K to 1000 K.
  */
+const GREEN_BANDS = {
+  conductionBand: { valueAtReference: 2.86e19, referenceTemperature: 300, exponent: 1.58 },
+  valenceBand: { valueAtReference: 3.1e19, referenceTemperature: 300, exponent: 1.85 },
+} as const;
+
 export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
   code: 'green-1990',
   name: 'Green (1990) effective densities of states',
-  conductionBand: { valueAtReference: 2.86e19, referenceTemperature: 300, exponent: 1.58 },
-  valenceBand: { valueAtReference: 3.1e19, referenceTemperature: 300, exponent: 1.85 },
+  ...GREEN_BANDS,
   citation:
-    'M. A. Green, J. Appl. Phys. 67, 2944 (1990): Nc(300 K) = 2.86e19 cm⁻³, Nv(300 K) = 3.10e19 cm⁻³; ' +
-    'temperature exponents 1.58 and 1.85 (from memory)',
+    `M. A. Green, J. Appl. Phys. 67, 2944 (1990): Nc(300 K) = ${densityOfStatesText(GREEN_BANDS.conductionBand)} cm⁻³, ` +
+    `Nv(300 K) = ${densityOfStatesText(GREEN_BANDS.valenceBand, 3)} cm⁻³; ` +
+    `temperature exponents ${t(GREEN_BANDS.conductionBand.exponent)} and ${t(GREEN_BANDS.valenceBand.exponent)} (from memory)`,
   validity:
     '300 K values; power laws approximate Green’s masses over about 200–500 K (from memory) and are ' +
     'extrapolated outside that range',
@@ -75,7 +82,7 @@ export const MISIAKOS_TSAMAKIS_1993_FIT: IntrinsicDensityFit = {
   name: 'Misiakos & Tsamakis (1993) ni fit',
   ...MISIAKOS_CONSTANTS,
   citation:
-    'K. Misiakos, D. Tsamakis, J. Appl. Phys. 74, 3293 (1993): ni = 5.29e19·(T/300)^2.54·exp(−6726/T) cm⁻³; ' +
+    `K. Misiakos, D. Tsamakis, J. Appl. Phys. 74, 3293 (1993): ${intrinsicFitText(MISIAKOS_CONSTANTS)}; ` +
     `these constants give ${atReference(MISIAKOS_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 9.65e9 (fit constants and quote from memory)`,
   validity: 'measured 78–340 K; smooth, strictly increasing extrapolation outside (see notes)',
   notes:
@@ -97,7 +104,7 @@ export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
   name: 'Sproul & Green (1991) ni fit',
   ...SPROUL_GREEN_CONSTANTS,
   citation:
-    'A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ni = 9.38e19·(T/300)^2·exp(−6884/T) cm⁻³; ' +
+    `A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ${intrinsicFitText(SPROUL_GREEN_CONSTANTS)}; ` +
     `these constants give ${atReference(SPROUL_GREEN_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 1.00e10 (fit constants and quote from memory)`,
   validity: 'measured 275–375 K; extrapolated outside',
   notes:

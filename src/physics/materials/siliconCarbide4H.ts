@@ -9,18 +9,19 @@
 import { LEVINSHTEIN_2001, SILICON_CARBIDE_4H_DOPANTS, SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY } from './siliconCarbide4HDopants';
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
 import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
+import { absolutePowerLawText, densityOfStatesText, varshniText } from './citationText';
 
 /**
  * Varshni-form gap of 4H-SiC, Eg(T) = 3.265 − 6.5e-4·T²/(T + 1300) eV:
  * 3.228 eV at 300 K, within the 3.23–3.26 eV usually quoted.
  */
+const SILICON_CARBIDE_4H_VARSHNI = { gapAtZero: 3.265, alpha: 6.5e-4, beta: 1300 } as const;
+
 export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_BANDGAP: VarshniBandgap = {
   code: 'levinshtein-gap-4h-sic',
   name: 'Levinshtein et al. (2001) Varshni-form band gap of 4H-SiC',
-  gapAtZero: 3.265,
-  alpha: 6.5e-4,
-  beta: 1300,
-  citation: `${LEVINSHTEIN_2001}: Eg0 = 3.265 eV, α = 6.5e-4 eV/K, β = 1300 K (values from memory)`,
+  ...SILICON_CARBIDE_4H_VARSHNI,
+  citation: `${LEVINSHTEIN_2001}: ${varshniText(SILICON_CARBIDE_4H_VARSHNI)} (values from memory)`,
   validity:
     'fitted to optical gap data up to several hundred kelvin (from memory); evaluated here up to 3100 K ' +
     '(extrapolation above about 700 K)',
@@ -31,13 +32,19 @@ export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_BANDGAP: VarshniBandgap = {
  * Nv = 4.8e15·T^3/2 cm⁻³ (1.69e19 and 2.49e19 at 300 K); Nc counts the three
  * equivalent M-point minima.
  */
+const SILICON_CARBIDE_4H_BANDS = {
+  conductionBand: { valueAtReference: 1.69e19, referenceTemperature: 300, exponent: 1.5 },
+  valenceBand: { valueAtReference: 2.49e19, referenceTemperature: 300, exponent: 1.5 },
+} as const;
+
 export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES: DensityOfStatesModel = {
   code: 'levinshtein-dos-4h-sic',
   name: 'Levinshtein et al. (2001) effective densities of states of 4H-SiC',
-  conductionBand: { valueAtReference: 1.69e19, referenceTemperature: 300, exponent: 1.5 },
-  valenceBand: { valueAtReference: 2.49e19, referenceTemperature: 300, exponent: 1.5 },
+  ...SILICON_CARBIDE_4H_BANDS,
   citation:
-    `${LEVINSHTEIN_2001}: Nc ≈ 3.25e15·T^3/2, Nv ≈ 4.8e15·T^3/2 cm⁻³, i.e. 1.69e19 and 2.49e19 cm⁻³ at 300 K ` +
+    `${LEVINSHTEIN_2001}: Nc ≈ ${absolutePowerLawText(SILICON_CARBIDE_4H_BANDS.conductionBand, 3)}, ` +
+    `Nv ≈ ${absolutePowerLawText(SILICON_CARBIDE_4H_BANDS.valenceBand, 2)} cm⁻³, i.e. ` +
+    `${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.conductionBand)} and ${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.valenceBand)} cm⁻³ at 300 K ` +
     '(values from memory)',
   validity: 'constant-mass estimate; ni at 300 K (about 1e-8 cm⁻³) is an order-of-magnitude value',
 };

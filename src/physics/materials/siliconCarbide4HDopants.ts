@@ -32,6 +32,7 @@
  * Degeneracy g = 2 for donors, 4 for acceptors: common practice, no source.
  */
 
+import { SILICON_CARBIDE_4H_ROSCHKE_SCHWIERZ_FIT } from '../mobility/siliconCarbide4HRoschkeSchwierz';
 import { mottScaledDopant, type MottScaledHost } from './ionizationScaling';
 import type { Dopant, DopantKind } from './types';
 
@@ -61,7 +62,7 @@ const SOURCES = {
   B: `shallow boron acceptor ≈0.28–0.35 eV (deep D centre ignored); ${LEVINSHTEIN_2001_LEVELS}`,
 } as const;
 
-const SPECIES_NOTE = 'the 4H-SiC mobility fit (roschke-schwierz) does not depend on the dopant species';
+const SPECIES_NOTE = `the 4H-SiC mobility fit (${SILICON_CARBIDE_4H_ROSCHKE_SCHWIERZ_FIT.code}) does not depend on the dopant species`;
 
 const HOST: MottScaledHost = { relativePermittivity: SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY, mobilitySpeciesNote: SPECIES_NOTE };
 

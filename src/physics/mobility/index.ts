@@ -2,83 +2,64 @@
  * Mobility models by code, the drift mobility used by transport, and the
  * (generalized) Einstein diffusivity.
  *
- * Codes (case-insensitive; the first is the default):
- * - 'masetti': Masetti et al. (1983), dopant-specific, at 300 K; away from
- *   300 K multiplied by Arora's temperature ratio μ_Arora(N,T)/μ_Arora(N,300 K)
- *   (Arora et al. 1982, fitted 250–500 K; extrapolated outside).
- * - 'arora': Arora et al. (1982) with its own temperature dependence.
- * - 'caughey-thomas': Caughey & Thomas (1967) at 300 K, carried to other
- *   temperatures by the same Arora ratio as 'masetti' (the 1967 fit has none).
- * - 'klaassen': Klaassen (1992), one model for majority and minority carriers
- *   with its own temperature dependence; takes N_D, N_A and n, p separately
- *   (klaassen.ts).
- *
- * The other fits take the total impurity density N = N_D + N_A of the sample
- * (common practice for compensated material, no source). With them minority
- * carriers use the same fit for their carrier type at that total density;
- * a blank code therefore chooses 'klaassen' for silicon minority carriers
- * (defaultMobilityModelFor).
+ * The models, their materials, defaults and equations are the entries of
+ * registry.ts (MOBILITY_MODEL_REGISTRY); this module derives the code lists
+ * and defaults from them and dispatches to each entry's compute (the one
+ * dispatch for every material). Codes are
+ * case-insensitive; a blank code means the sample material's default, except
+ * for minority carriers in a material with a model marked for them
+ * (defaultMobilityModelFor: silicon's klaassen, the one silicon model with
+ * minority-carrier physics; the other silicon fits are majority-carrier fits
+ * at the total impurity density N_D + N_A). A code without parameters for the
+ * material is refused with a message naming the models it supports.
  *
  * Published vs free-carrier mobility: `mobility` returns each model as
  * published; `freeCarrierMobility` (and driftMobilities, which conductivity
- * uses) multiplies the silicon fits' majority-carrier value by
+ * uses) multiplies the majority-carrier value of the fits made against the
+ * total dopant density (the silicon fits, `fittedTo: 'dopant-density'`) by
  * fullIonizationCorrection, so σ = q(nμn + pμp) with the solver's
- * incompletely ionized n, p reproduces the fits' 300 K resistivity.
- *
- * Masetti species: electrons use the named dopant's own row when it is a donor
- * (dopant.mobilitySpecies, 'As' or 'P'), otherwise the P row; holes always use
- * the B row (Masetti gives no other hole row).
- *
- * Materials: the models above have silicon parameters only. Ge, GaAs and
- * 4H-SiC have their own fits (materialFits.ts: 'hilsum', 'sotoodeh',
- * 'roschke-schwierz'), each the default of its material; a blank code means
- * the sample material's default, and a code without parameters for the
- * material is refused with a message naming the models it supports. The
- * material fits describe free-carrier mobility, so their free-carrier
- * mobility is the published value (no full-ionization correction; see
- * materialFits.ts).
+ * incompletely ionized n, p reproduces the fits' 300 K resistivity. Fits made
+ * against free-carrier mobilities (Ge, GaAs, 4H-SiC; materialFits.ts) are used
+ * unchanged.
  */
 import type { Carrier, Sample } from '../sample';
-import { sampleDopants, totalImpurityDensity } from '../sample';
+import { sampleDopants } from '../sample';
 import { solveEquilibrium } from '../equilibrium';
 import { einsteinDegeneracyFactor } from '../bands/einsteinRelation';
 import { thermalVoltage } from '../constants';
 import { PhysicsDomainError } from '../errors';
-import { MASETTI_TABLE, masettiMobility, type MasettiSpecies } from './masetti';
-import { aroraMobility, aroraTemperatureRatio } from './arora';
-import { caugheyThomasMobility } from './caugheyThomas';
-import { klaassenSampleMobility } from './klaassen';
 import { fullIonizationCorrection, netMajorityCarrier } from './fullIonizationCorrection';
-import { MATERIAL_MOBILITY_FIT_CODES, materialFitMobility, materialMobilityFit, mobilityFitsFor } from './materialFits';
+import { MOBILITY_MODEL_REGISTRY, mobilityModelEntry, mobilityModelsOf, type MobilityModel } from './registry';
 import { MATERIALS, SILICON, type Material } from '../materials';
 
+export { MOBILITY_MODEL_REGISTRY, mobilityModelEntry, mobilityModelsOf, type MobilityModel, type MobilityFitBasis } from './registry';
+
 /** Silicon's mobility model codes (silicon parameters only; see mobilityModelCodes); the first is silicon's default. */
-export const MOBILITY_MODEL_CODES = ['masetti', 'arora', 'caughey-thomas', 'klaassen'] as const;
+export const MOBILITY_MODEL_CODES: readonly string[] = mobilityModelsOf(SILICON.code).map((model) => model.code);
 
 /** A mobility model code. */
-export type MobilityModelCode = (typeof MOBILITY_MODEL_CODES)[number];
+export type MobilityModelCode = string;
 
 /** Silicon's default mobility model (other materials: defaultMobilityModel). */
 export const DEFAULT_MOBILITY_MODEL: MobilityModelCode = MOBILITY_MODEL_CODES[0];
 
-/** Every mobility model code of every material: silicon's (MOBILITY_MODEL_CODES), then the material fits. */
-export const ALL_MOBILITY_MODEL_CODES: readonly string[] = [...MOBILITY_MODEL_CODES, ...MATERIAL_MOBILITY_FIT_CODES];
+/** Every mobility model code of every material, in registry order: silicon's (MOBILITY_MODEL_CODES), then the material fits. */
+export const ALL_MOBILITY_MODEL_CODES: readonly string[] = MOBILITY_MODEL_REGISTRY.map((model) => model.code);
 
 /**
  * Mobility model codes with parameters for a material; the first is its default.
  *
  * @param material - host material
- * @returns silicon: MOBILITY_MODEL_CODES; other hosts: their own fits
+ * @returns the codes of its registry entries: silicon MOBILITY_MODEL_CODES; other hosts their own fits
  * @example mobilityModelCodes(GALLIUM_ARSENIDE) // → ['sotoodeh']
  */
 export function mobilityModelCodes(material: Material): readonly string[] {
-  const own = mobilityFitsFor(material.code).map((fit) => fit.code);
-  return material.code === SILICON.code ? [...MOBILITY_MODEL_CODES, ...own] : own;
+  return mobilityModelsOf(material.code).map((model) => model.code);
 }
 
 /**
- * The default mobility model of a material: Si 'masetti', Ge 'hilsum',
- * GaAs 'sotoodeh', 4H-SiC 'roschke-schwierz'.
+ * The default mobility model of a material: the first registry entry that
+ * lists the material.
  *
  * @param material - host material
  * @returns its default model code
@@ -132,31 +113,16 @@ export function resolveMobilityModel(code?: string, material: Material = SILICON
   );
 }
 
-/** Masetti row for a carrier in a sample (see the module comment). */
-function masettiSpecies(carrier: Carrier, sample: Sample): MasettiSpecies {
-  if (carrier === 'hole') return 'B';
-  const own = sample.dopant.mobilitySpecies;
-  return sample.dopant.kind === 'donor' && (own === 'As' || own === 'P') ? own : 'P';
+/** The registry entry of an already-parsed model code (resolveMobilityModel returns only registered codes). */
+function entryOf(code: string): MobilityModel {
+  const entry = mobilityModelEntry(code);
+  if (entry === undefined) throw new Error(`mobility model '${code}' was parsed but has no registry entry`);
+  return entry;
 }
 
-/** Fitted mobility for an already-parsed model code. */
+/** Fitted mobility for an already-parsed model code: the entry's compute. */
 function fitted(model: string, carrier: Carrier, sample: Sample): number {
-  const density = totalImpurityDensity(sample);
-  const temperature = sample.temperature;
-  const materialFit = materialMobilityFit(model);
-  if (materialFit !== undefined) return materialFitMobility(materialFit, carrier, density, temperature);
-  switch (model as MobilityModelCode) {
-    case 'masetti': {
-      const row = MASETTI_TABLE[masettiSpecies(carrier, sample)].parameters;
-      return masettiMobility(row, density) * aroraTemperatureRatio(carrier, density, temperature);
-    }
-    case 'arora':
-      return aroraMobility(carrier, density, temperature);
-    case 'caughey-thomas':
-      return caugheyThomasMobility(carrier, density) * aroraTemperatureRatio(carrier, density, temperature);
-    case 'klaassen':
-      return klaassenSampleMobility(carrier, sample);
-  }
+  return entryOf(model).compute(carrier, sample);
 }
 
 /** Guards every value leaving this module: a mobility must be finite and positive. */
@@ -212,20 +178,23 @@ export function defaultMobilityModelFor(carrier: Carrier, sample: Sample): strin
   return isMinority ? defaultMinorityMobilityModel(sample.material) : defaultMobilityModel(sample.material);
 }
 
-/** Silicon's model with minority-carrier physics, which a blank code chooses for minority carriers. */
-export const SILICON_MINORITY_MOBILITY_MODEL: MobilityModelCode = 'klaassen';
 
 /**
- * The model a blank code chooses for minority carriers of a material:
- * silicon 'klaassen'; the other materials their single fit (their default).
+ * The model a blank code chooses for minority carriers of a material: its
+ * registry entry marked `minorityCarrierDefault` (silicon 'klaassen'), else
+ * its default (the other materials have a single fit).
  *
  * @param material - host material
  * @returns a model code of that material
  * @example defaultMinorityMobilityModel(SILICON) // → 'klaassen'
  */
 export function defaultMinorityMobilityModel(material: Material): string {
-  return material.code === SILICON.code ? SILICON_MINORITY_MOBILITY_MODEL : defaultMobilityModel(material);
+  const minority = mobilityModelsOf(material.code).find((model) => model.minorityCarrierDefault === true);
+  return minority !== undefined ? minority.code : defaultMobilityModel(material);
 }
+
+/** Silicon's model with minority-carrier physics, which a blank code chooses for minority carriers. */
+export const SILICON_MINORITY_MOBILITY_MODEL: MobilityModelCode = defaultMinorityMobilityModel(SILICON);
 
 /** A named code parsed for the material, or the carrier's blank-code choice. */
 function modelFor(model: string | undefined, carrier: Carrier, sample: Sample): string {
@@ -236,12 +205,12 @@ function modelFor(model: string | undefined, carrier: Carrier, sample: Sample): 
 /**
  * The factor that turns the published mobility of a carrier into its
  * free-carrier drift mobility: fullIonizationCorrection (≈ N_net / n_eq at
- * 300 K) for the net-majority carrier under a silicon model, 1 for minority
- * carriers and for the material fits (fitted to free-carrier data already,
- * materialFits.ts).
+ * 300 K) for the net-majority carrier under a fit made against the total
+ * dopant density (the silicon models), 1 for minority carriers and for fits
+ * made against free-carrier data (the material fits, materialFits.ts).
  */
 function freeCarrierFactor(code: string, carrier: Carrier, sample: Sample): number {
-  if (materialMobilityFit(code) !== undefined) return 1;
+  if (entryOf(code).fittedTo === 'free-carriers') return 1;
   return carrier === netMajorityCarrier(sample) ? fullIonizationCorrection(sample) : 1;
 }
 

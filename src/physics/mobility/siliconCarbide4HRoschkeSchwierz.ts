@@ -22,31 +22,44 @@
  * uncertain); scaling μmin with it too is our assumption, which keeps μmax > μmin
  * at every temperature.
  */
-import type { MaterialMobilityFit } from './materialFits';
+import type { FitParameters, MaterialMobilityFit, ScaledCaugheyThomasParameters } from './fitTypes';
+import { parameterText as t } from '../parameterText';
+
+/** Roschke & Schwierz (2001) electrons, Schaffer et al. (1994) holes at 300 K with Levinshtein's lattice law (module comment). */
+const PARAMETERS: FitParameters = {
+  electron: {
+    minimum: { value: 40, exponent: -0.5 },
+    maximum: { value: 950, exponent: -2.4 },
+    referenceDensity: { value: 2e17, exponent: 0 },
+    alpha: { value: 0.76, exponent: 0 },
+  },
+  hole: {
+    minimum: { value: 15.9, exponent: -2.15 },
+    maximum: { value: 124, exponent: -2.15 },
+    referenceDensity: { value: 1.76e19, exponent: 0 },
+    alpha: { value: 0.34, exponent: 0 },
+  },
+};
+
+/** μmax, μmin, Nref and α of one carrier at 300 K, as the citation lists them. */
+function curveValues(p: ScaledCaugheyThomasParameters): string {
+  return `μmax ${t(p.maximum.value)}, μmin ${t(p.minimum.value)}, Nref ${t(p.referenceDensity.value)}, α ${t(p.alpha.value)}`;
+}
+
+const { electron: E, hole: H } = PARAMETERS;
 
 export const SILICON_CARBIDE_4H_ROSCHKE_SCHWIERZ_FIT: MaterialMobilityFit = {
   code: 'roschke-schwierz',
   name: 'Roschke & Schwierz (2001) electron mobility of 4H-SiC, with Schaffer et al. (1994) holes',
   materialCode: '4H-SiC',
-  parameters: {
-    electron: {
-      minimum: { value: 40, exponent: -0.5 },
-      maximum: { value: 950, exponent: -2.4 },
-      referenceDensity: { value: 2e17, exponent: 0 },
-      alpha: { value: 0.76, exponent: 0 },
-    },
-    hole: {
-      minimum: { value: 15.9, exponent: -2.15 },
-      maximum: { value: 124, exponent: -2.15 },
-      referenceDensity: { value: 1.76e19, exponent: 0 },
-      alpha: { value: 0.34, exponent: 0 },
-    },
-  },
+  parameters: PARAMETERS,
+  parameterTable: 'src/physics/mobility/siliconCarbide4HRoschkeSchwierz.ts',
+  tests: ['tests/physics/reference/roschke-schwierz-2001.reference.test.ts', 'tests/physics/mobility/materialFits.test.ts'],
   citation:
-    'electrons: M. Roschke, F. Schwierz, IEEE Trans. Electron Devices 48, 1442 (2001), 4H-SiC (μmax 950, μmin 40, ' +
-    'Nref 2e17, α 0.76, exponents −2.4 and −0.5; from memory, uncertain); holes: W. J. Schaffer et al., ' +
-    'Mater. Res. Soc. Symp. Proc. 339, 595 (1994) (μmax 124, μmin 15.9, Nref 1.76e19, α 0.34; from memory, ' +
-    'attribution uncertain), T^−2.15 after Levinshtein et al., Properties of Advanced Semiconductor Materials, ' +
+    `electrons: M. Roschke, F. Schwierz, IEEE Trans. Electron Devices 48, 1442 (2001), 4H-SiC (${curveValues(E)}, ` +
+    `exponents ${t(E.maximum.exponent)} and ${t(E.minimum.exponent)}; from memory, uncertain); holes: W. J. Schaffer et al., ` +
+    `Mater. Res. Soc. Symp. Proc. 339, 595 (1994) (${curveValues(H)}; from memory, ` +
+    `attribution uncertain), T^${t(H.maximum.exponent)} after Levinshtein et al., Properties of Advanced Semiconductor Materials, ` +
     'Wiley 2001 (from memory)',
   validity:
     'electrons: about 1e15–1e20 cm⁻³, roughly 200–600 K (from memory); holes: 300 K fit, about 1e15–1e20 cm⁻³; ' +

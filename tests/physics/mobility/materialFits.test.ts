@@ -13,11 +13,8 @@ import {
   mobilityModelCodes,
   resolveMobilityModel,
 } from '../../../src/physics/mobility';
-import {
-  MATERIAL_MOBILITY_FITS,
-  materialFitMobility,
-  materialMobilityFit,
-} from '../../../src/physics/mobility/materialFits';
+import { MATERIAL_MOBILITY_FITS, materialFitMobility } from '../../../src/physics/mobility/materialFits';
+import { GALLIUM_ARSENIDE_SOTOODEH_FIT } from '../../../src/physics/mobility/galliumArsenideSotoodeh';
 import { fullIonizationCorrection } from '../../../src/physics/mobility/fullIonizationCorrection';
 import { GALLIUM_ARSENIDE, GERMANIUM, MATERIALS, SILICON, SILICON_CARBIDE_4H, type Material } from '../../../src/physics/materials';
 import { PhysicsDomainError } from '../../../src/physics/errors';
@@ -73,7 +70,7 @@ describe('the temperature-scaled Caughey–Thomas form', () => {
   });
 
   it('is Sotoodeh’s equation for GaAs: μmin + (μmax·(300/T)^θ1 − μmin)/(1 + (N/(Nref·(T/300)^θ2))^λ)', () => {
-    const fit = materialMobilityFit('sotoodeh')!;
+    const fit = GALLIUM_ARSENIDE_SOTOODEH_FIT;
     const [t, n] = [400, 3e17];
     const expected = 500 + (9400 * Math.pow(300 / t, 2.1) - 500) / (1 + Math.pow(n / (6.0e16 * Math.pow(t / 300, 3.0)), 0.394));
     expect(materialFitMobility(fit, 'electron', n, t)).toBeCloseTo(expected, 9);
@@ -83,10 +80,9 @@ describe('the temperature-scaled Caughey–Thomas form', () => {
 describe('physical behaviour, 1e12–1e21 cm⁻³ and 50–700 K', () => {
   const densities = Array.from({ length: 9 * 4 + 1 }, (_, i) => Math.pow(10, 12 + i / 4));
 
-  it.each(MATERIAL_MOBILITY_FITS.flatMap((fit) => (['electron', 'hole'] as Carrier[]).map((c) => [fit.code, c])))(
+  it.each(MATERIAL_MOBILITY_FITS.flatMap((fit) => (['electron', 'hole'] as Carrier[]).map((c) => [fit.code, c, fit] as const)))(
     '%s, %ss: positive, falls with doping at every temperature, falls with temperature when lightly doped (200–700 K)',
-    (code, carrier) => {
-      const fit = materialMobilityFit(code)!;
+    (_code, carrier, fit) => {
       for (const t of [50, 100, 200, 300, 500, 700]) {
         let previous = Infinity;
         for (const n of densities) {
@@ -117,7 +113,7 @@ describe('drift mobility: the material fits describe free carriers (no full-ioni
 
   it('uses the total impurity density for compensated samples', () => {
     const compensated = sample(GALLIUM_ARSENIDE, 'Te', 2e17, 300, 1e17);
-    expect(fitMobility('', 'electron', compensated)).toBe(materialFitMobility(materialMobilityFit('sotoodeh')!, 'electron', 3e17, 300));
+    expect(fitMobility('', 'electron', compensated)).toBe(materialFitMobility(GALLIUM_ARSENIDE_SOTOODEH_FIT, 'electron', 3e17, 300));
   });
 
   it('still computes the silicon-style correction for every host (300 K solve): finite, ≥ 1', () => {
