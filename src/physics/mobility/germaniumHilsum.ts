@@ -19,7 +19,7 @@
  * The combination (Hilsum's doping law with Sze & Ng's and Morin & Maita's
  * lattice mobilities) is ours; each part is published.
  */
-import type { FitParameters, MaterialMobilityFit, ScaledCaugheyThomasParameters } from './fitTypes';
+import type { FitParameters, MaterialMobilityFit } from './fitTypes';
 import { exponentText, parameterText as t } from '../parameterText';
 
 /** Hilsum's doping law with germanium's lattice mobilities (sources in the module comment). */

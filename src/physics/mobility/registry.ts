@@ -30,7 +30,6 @@ import {
   KLAASSEN_MINORITY_G,
   KLAASSEN_SCREENING,
   KLAASSEN_SOURCE,
-  KLAASSEN_TEMPERATURE_LAWS,
   klaassenSampleMobility,
 } from './klaassen';
 import { MATERIAL_MOBILITY_FITS, materialFitMobility } from './materialFits';
@@ -119,10 +118,9 @@ const CAUGHEY_THOMAS: MobilityModel<typeof CAUGHEY_THOMAS_TABLE> = {
   },
 };
 
-/** Klaassen's parameter tables, as klaassen.ts exports them. */
+/** Klaassen's fitted parameter tables, as klaassen/parameters.ts exports them. */
 const KLAASSEN_PARAMETERS = {
   carriers: KLAASSEN_CARRIER_TABLE,
-  temperatureLaws: KLAASSEN_TEMPERATURE_LAWS,
   clustering: KLAASSEN_CLUSTERING_TABLE,
   screening: KLAASSEN_SCREENING,
   electronHoleF: KLAASSEN_ELECTRON_HOLE_F,
