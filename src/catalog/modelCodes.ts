@@ -164,10 +164,15 @@ export function applicableModelCodes(quantity: ModelQuantity, material?: string,
 
 const QUANTITY_OF_PARAMETER = new Map<ParameterSpec, ModelQuantity>(MODEL_QUANTITIES.map((quantity) => [QUANTITIES[quantity].parameter, quantity]));
 
+/** The quantity whose codes a catalog parameter takes (it is one of the shared `model` arguments), or undefined. */
+export function modelQuantityOfParameter(parameter: ParameterSpec): ModelQuantity | undefined {
+  return QUANTITY_OF_PARAMETER.get(parameter);
+}
+
 /** The quantity whose codes a catalog function's `model` argument takes, or undefined when it has none. */
 export function modelQuantityOf(spec: FunctionSpec): ModelQuantity | undefined {
   for (const parameter of spec.parameters as readonly ParameterSpec[]) {
-    const quantity = QUANTITY_OF_PARAMETER.get(parameter);
+    const quantity = modelQuantityOfParameter(parameter);
     if (quantity !== undefined) return quantity;
   }
   return undefined;

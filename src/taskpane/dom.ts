@@ -52,6 +52,24 @@ export function labelledControl(doc: Document, label: string, control: HTMLEleme
 }
 
 /**
+ * A checkbox with its label and a hint the box is described by: div.dc-field.dc-check [input, label, p.dc-hint].
+ *
+ * @param doc - document
+ * @param input - the checkbox (its id names the label's target and the hint's id, `${id}-hint`)
+ * @param label - label text
+ * @param hint - hint text below
+ */
+export function checkField(doc: Document, input: HTMLInputElement, label: string, hint: string): HTMLDivElement {
+  const hintId = `${input.id}-hint`;
+  input.setAttribute('aria-describedby', hintId);
+  return element(doc, 'div', { class: 'dc-field dc-check' }, [
+    input,
+    element(doc, 'label', { for: input.id, text: label }),
+    element(doc, 'p', { class: 'dc-hint', id: hintId, text: hint }),
+  ]);
+}
+
+/**
  * A <select> of options.
  *
  * @param doc - document

@@ -10,7 +10,7 @@ import { F723_ANCHOR_TEMPERATURE } from '../../catalog/physicsFacade';
 import { columnName, sheetAddress, type CellBlock } from '../port';
 import type { ToolContext } from '../tool';
 import { parameterNamed } from '../reference/callText';
-import { element, labelledControl, parseNumberField, selectOf } from '../dom';
+import { checkField, element, labelledControl, parseNumberField, selectOf } from '../dom';
 import { PaneRefusal } from '../sheetPlan';
 import type { CertificateSettings, MeasuredAt, TemperatureUnit, WindowRule } from './plan';
 import { COLUMN_ROLES, ROLE_LABELS, type ColumnRole } from './roles';
@@ -57,16 +57,12 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const dopants = dopingChoices('dopant');
   const dopantSelect = selectOf(doc, `${ID}-dopant`, dopants.codes.map((code) => [code, code] as const), dopants.codes.includes('B') ? 'B' : dopants.codes[0] ?? '');
   const thicknessField = labelledControl(doc, 'Thickness unit', thicknessUnit, 'Converted to µm in the formulas: mm × 1000, mil × 25.4 (1 mil = 0.001 inch).');
-  const typeField = element(doc, 'div', { class: 'dc-field dc-check' }, [
+  const typeField = checkField(
+    doc,
     typeSwitch,
-    element(doc, 'label', { for: typeSwitch.id, text: 'Type column gives conductivity type: P means p-type, N means n-type' }),
-    element(doc, 'p', {
-      class: 'dc-hint',
-      id: `${typeSwitch.id}-hint`,
-      text: 'On: a lone P or N (any case) becomes the generic acceptor or donor (boron-like or phosphorus-like mobility). Off: P means phosphorus, N nitrogen. B, As, Sb, Boron, n-type… are read as written either way.',
-    }),
-  ]);
-  typeSwitch.setAttribute('aria-describedby', `${typeSwitch.id}-hint`);
+    'Type column gives conductivity type: P means p-type, N means n-type',
+    'On: a lone P or N (any case) becomes the generic acceptor or donor (boron-like or phosphorus-like mobility). Off: P means phosphorus, N nitrogen. B, As, Sb, Boron, n-type… are read as written either way.',
+  );
   const dopantField = labelledControl(doc, 'Dopant (no type column mapped)', dopantSelect);
 
   // Window and options.
@@ -88,18 +84,13 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const materialSelect = selectOf(doc, `${ID}-material`, materials.codes.map((code) => [code, code] as const), materials.defaultCode);
   // Model spread beside the doping window: off unless asked for, so the check is unchanged by default.
   const spreadSwitch = element(doc, 'input', { type: 'checkbox', id: `${ID}-model-spread` });
-  const spreadField = element(doc, 'div', { class: 'dc-field dc-check' }, [
+  const spreadField = checkField(
+    doc,
     spreadSwitch,
-    element(doc, 'label', { for: spreadSwitch.id, text: 'Show the model spread: lowest and highest doping over the published models' }),
-    element(doc, 'p', {
-      class: 'dc-hint',
-      id: `${spreadSwitch.id}-hint`,
-      text:
-        'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
-        'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
-    }),
-  ]);
-  spreadSwitch.setAttribute('aria-describedby', `${spreadSwitch.id}-hint`);
+    'Show the model spread: lowest and highest doping over the published models',
+    'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
+    'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
+  );
   const radialLimit = element(doc, 'input', { type: 'text', id: `${ID}-radial-limit`, inputmode: 'decimal', autocomplete: 'off', placeholder: 'no limit' });
   const addButton = element(doc, 'button', { type: 'button', id: `${ID}-add`, class: 'dc-button dc-primary', text: 'Add check columns' });
 

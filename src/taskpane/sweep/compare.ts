@@ -10,9 +10,9 @@
  * at the same conditions, not a measurement uncertainty.
  */
 import { findFunction } from '../../catalog';
-import { applicableModelCodes, modelQuantityOf, type ModelQuantity } from '../../catalog/modelCodes';
+import { applicableModelCodes, modelQuantityOfParameter, type ModelQuantity } from '../../catalog/modelCodes';
 import { qualifiedName } from '../../catalog/naming';
-import type { FunctionSpec, ParameterSpec } from '../../catalog/types';
+import type { ParameterSpec } from '../../catalog/types';
 import { settingKey, textLiteral, type ModelsArgument, type SettingValues } from './arguments';
 import { settingParameters, type SweepQuantity } from './quantities';
 
@@ -36,14 +36,13 @@ export interface ModelSetting {
 
 /**
  * The setting whose codes DRIFT.MODELCODES lists, or null when the quantity's functions take no model argument
- * (MAJORITY, MINORITY, VSAT). Asked of the catalog per parameter, so the identity check stays in modelQuantityOf.
+ * (MAJORITY, MINORITY, VSAT). Asked of the catalog per parameter (modelQuantityOfParameter).
  *
  * @example modelSettingOf(rho)?.key // 'inner:model'
  */
 export function modelSettingOf(quantity: SweepQuantity): ModelSetting | null {
   for (const { owner, spec } of settingParameters(quantity)) {
-    const function_ = owner === 'inner' ? quantity.inner : quantity.outer;
-    const modelQuantity = modelQuantityOf({ ...function_, parameters: [spec] } as FunctionSpec);
+    const modelQuantity = modelQuantityOfParameter(spec);
     if (modelQuantity !== undefined) return { key: settingKey(owner, spec.name), spec, modelQuantity };
   }
   return null;
