@@ -56,7 +56,7 @@ function scaled(coefficient: ScaledCoefficient, reducedTemperature: number): num
  * @param totalDensity - total impurity density N ≥ 0, cm⁻³
  * @param temperature - T > 0, K
  * @returns μ in cm²/(V·s)
- * @example materialFitMobility(materialMobilityFit('sotoodeh')!, 'electron', 0, 300) // ≈ 9400
+ * @example materialFitMobility(MATERIAL_MOBILITY_FITS.find((fit) => fit.code === 'sotoodeh')!, 'electron', 0, 300) // ≈ 9400
  */
 export function materialFitMobility(fit: MaterialMobilityFit, carrier: Carrier, totalDensity: number, temperature: number): number {
   const p = fit.parameters[carrier];

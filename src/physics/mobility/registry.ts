@@ -178,15 +178,15 @@ export const MOBILITY_MODEL_REGISTRY: readonly MobilityModel[] = [
   ...MATERIAL_MOBILITY_FITS.map(materialFitModel),
 ];
 
-/** The entries by code; building it refuses a registry that gives one code twice. */
-const ENTRY_BY_CODE: ReadonlyMap<string, MobilityModel> = new Map(
-  MOBILITY_MODEL_REGISTRY.map((model, index) => {
-    if (MOBILITY_MODEL_REGISTRY.findIndex((other) => other.code.toLowerCase() === model.code.toLowerCase()) !== index) {
+/** A registry that gives one code twice (case-insensitively) is refused when the module loads. */
+function refuseRepeatedCodes(models: readonly MobilityModel[]): void {
+  models.forEach((model, index) => {
+    if (models.findIndex((other) => other.code.toLowerCase() === model.code.toLowerCase()) !== index) {
       throw new Error(`mobility model code '${model.code}' is registered twice`);
     }
-    return [model.code, model] as const;
-  }),
-);
+  });
+}
+refuseRepeatedCodes(MOBILITY_MODEL_REGISTRY);
 
 /**
  * The entries with parameters for a material, in registry order (the first is its default).
@@ -207,5 +207,5 @@ export function mobilityModelsOf(materialCode: string): readonly MobilityModel[]
  * @example mobilityModelEntry('arora')?.materials // → ['Si']
  */
 export function mobilityModelEntry(code: string): MobilityModel | undefined {
-  return ENTRY_BY_CODE.get(code);
+  return MOBILITY_MODEL_REGISTRY.find((model) => model.code === code);
 }
