@@ -10,7 +10,7 @@ import { PhysicsDomainError } from './errors';
 import { BAND_MODELS } from './bands/modelInfo';
 import { F723_SOURCE } from './astmF723';
 import { LAYER_MODELS } from './layers/modelInfo';
-import type { ModelInfo } from './modelInfo';
+import { locationOf, type ModelInfo } from './modelInfo';
 import { MEASUREMENT_MODELS } from './measurement/modelInfo';
 import { HIGH_FIELD_MODELS } from './highField/modelInfo';
 import { MATERIAL_MODELS } from './materials/modelInfo';
@@ -19,9 +19,17 @@ import { SILICON } from './materials/silicon';
 
 export type { ModelInfo };
 
-/** A mobility model's DRIFT.MODELS row: its registry entry's description. */
+/** A mobility model's DRIFT.MODELS row: its registry entry's description and where it lives. */
 function mobilityModelInfo(model: MobilityModel): ModelInfo {
-  return { code: model.code, quantity: model.quantity, name: model.name, citation: model.citation, validity: model.validity, notes: model.notes };
+  return {
+    code: model.code,
+    quantity: model.quantity,
+    name: model.name,
+    citation: model.citation,
+    validity: model.validity,
+    notes: model.notes,
+    ...locationOf(model),
+  };
 }
 
 const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
@@ -38,6 +46,9 @@ const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
       'other dopants (As included, whose F723 range is only 1e19–6e20 cm⁻³) k = 1. RESISTIVITY uses F723\'s ρ-from-N equation, ' +
       'DOPING its N-from-ρ equation, so each direction is the standard\'s own and they disagree by its stated self-consistency ' +
       '(3 % B, 4.5 % P). Outside F723\'s ranges ln k levels off smoothly (continuous value and slope). Not a mobility model.',
+    equation: 'src/physics/f723Anchored.ts',
+    parameterTable: 'src/physics/astmF723.ts',
+    tests: ['tests/physics/f723Anchored.test.ts'],
   },
   {
     code: 'astm-f723',
@@ -46,6 +57,9 @@ const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
     citation: F723_SOURCE.citation,
     validity: F723_SOURCE.validity,
     notes: 'Closed-form conversion for resistivity and doping only; not a mobility model.',
+    equation: 'src/physics/astmF723.ts',
+    parameterTable: 'src/physics/astmF723.ts',
+    tests: ['tests/physics/reference/astm-f723.reference.test.ts', 'tests/physics/astmF723.test.ts'],
   },
 ];
 

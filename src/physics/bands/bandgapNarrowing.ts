@@ -28,9 +28,10 @@ import { SILICON } from '../materials/silicon';
 import type { Material } from '../materials/types';
 import { logIntrinsicDensity } from './intrinsicDensity';
 import { checkDopantDensity } from '../ionization';
+import type { ModelLocation } from '../modelInfo';
 
-/** One apparent-BGN parameter set, with its source. */
-export interface ApparentBandgapNarrowingModel {
+/** One apparent-BGN parameter set, with its source and where it lives. */
+export interface ApparentBandgapNarrowingModel extends ModelLocation {
   /** Code as users type it (lower case). */
   readonly code: string;
   readonly name: string;
@@ -68,6 +69,9 @@ export const KLAASSEN_BGN: ApparentBandgapNarrowingModel = {
   notes:
     'Apparent BGN (includes majority-carrier degeneracy); reported by DRIFT.NIEFF only, not used in the ' +
     'Fermi–Dirac equilibrium solve. Taken as temperature-independent (assumption away from 300 K).',
+  equation: 'src/physics/bands/bandgapNarrowing.ts',
+  parameterTable: 'src/physics/bands/bandgapNarrowing.ts',
+  tests: ['tests/physics/bands/bandgapNarrowing.test.ts'],
 };
 
 /** Slotboom & de Graaff (1976), the original parameters of the form. */
@@ -88,6 +92,9 @@ export const SLOTBOOM_1976_BGN: ApparentBandgapNarrowingModel = {
   notes:
     'Commonly applied to both doping types (common practice, no source). Apparent BGN; reported by DRIFT.NIEFF only, ' +
     'not used in the equilibrium solve; taken as temperature-independent (assumption away from 300 K).',
+  equation: 'src/physics/bands/bandgapNarrowing.ts',
+  parameterTable: 'src/physics/bands/bandgapNarrowing.ts',
+  tests: ['tests/physics/bands/bandgapNarrowing.test.ts'],
 };
 
 /** Every BGN model; the first is the default. */

@@ -1,4 +1,4 @@
-import type { ModelInfo } from '../modelInfo';
+import { locationOf, type ModelInfo } from '../modelInfo';
 
 /**
  * Descriptions of the band-structure, ni, statistics, bandgap-narrowing and ionization models, for
@@ -27,6 +27,7 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     citation: fit.citation,
     validity: fit.validity,
     ...(fit.notes === undefined ? {} : { notes: fit.notes }),
+    ...locationOf(fit),
   })),
   {
     code: DOS_INTRINSIC_MODEL,
@@ -37,6 +38,10 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     notes:
       'Gives about 1.07e10 cm⁻³ at 300 K, 10% above the measured 9.65e9: the known mismatch between ' +
       'Green’s densities of states and measured ni; kept as an independent cross-check.',
+    equation: 'src/physics/bands/intrinsicDensity.ts',
+    // Its ingredients' tables: Thurmond's gap and Green's densities of states.
+    parameterTable: 'src/physics/materials/silicon.ts',
+    tests: ['tests/physics/reference/green-1990.reference.test.ts', 'tests/physics/bands/intrinsicDensity.test.ts'],
   },
   {
     code: SILICON.bandgap.code,
@@ -44,6 +49,7 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     name: SILICON.bandgap.name,
     citation: SILICON.bandgap.citation,
     validity: SILICON.bandgap.validity,
+    ...locationOf(SILICON.bandgap),
   },
   {
     code: SILICON.densityOfStates.code,
@@ -51,6 +57,7 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     name: SILICON.densityOfStates.name,
     citation: SILICON.densityOfStates.citation,
     validity: SILICON.densityOfStates.validity,
+    ...locationOf(SILICON.densityOfStates),
   },
   {
     code: FERMI_DIRAC_STATISTICS.code,
@@ -69,6 +76,14 @@ export const BAND_MODELS: readonly ModelInfo[] = [
       'rounding; n·p = ni² then holds to the factor F½(ηc)/e^ηc of the majority carriers (1 − 1.2e-4 at 1e16 cm⁻³, ' +
       '300 K). Also gives the generalized Einstein relation D = μ·(kT/q)·F½(η)/F−½(η) used by DRIFT.DIFFUSIVITY. ' +
       'Bandgap narrowing is not included (see klaassen-bgn).',
+    equation: 'src/physics/bands/fermiDirac.ts',
+    // No fitted values: the Chebyshev tables are computed once from the integral, in the same file.
+    parameterTable: 'src/physics/bands/fermiDirac.ts',
+    tests: [
+      'tests/physics/reference/mpmath-fermi-dirac.reference.test.ts',
+      'tests/physics/bands/fermiDirac.test.ts',
+      'tests/physics/bands/statistics.test.ts',
+    ],
   },
   {
     code: BOLTZMANN_STATISTICS.code,
@@ -77,6 +92,9 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     citation: 'common practice, no source',
     validity: 'non-degenerate carriers: Fermi level a few kT inside the gap (about n, p < 1e19 cm⁻³ at 300 K)',
     notes: 'Available in the core for comparison (solveEquilibrium’s statistics argument); the solver default is fermi-dirac.',
+    equation: 'src/physics/bands/statistics.ts',
+    parameterTable: 'src/physics/bands/statistics.ts',
+    tests: ['tests/physics/bands/statistics.test.ts'],
   },
   ...BANDGAP_NARROWING_MODELS.map((model) => ({
     code: model.code,
@@ -85,6 +103,7 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     citation: model.citation,
     validity: model.validity,
     notes: model.notes,
+    ...locationOf(model),
   })),
   {
     code: IONIZATION_MODEL_CODE,
@@ -95,5 +114,8 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     notes:
       'P, As, B fitted; Sb, Al, Ga, In use their own Sze & Ng ionization energy with the density ' +
       'dependence of P (Sb) or B (Al, Ga, In): assumption.',
+    equation: 'src/physics/ionization.ts',
+    parameterTable: 'src/physics/materials/siliconDopants.ts',
+    tests: ['tests/physics/reference/altermatt-2006.reference.test.ts', 'tests/physics/ionization.test.ts'],
   },
 ];

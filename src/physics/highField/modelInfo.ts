@@ -33,6 +33,9 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     notes:
       'μ0 is the sample’s low-field drift mobility (the material’s default mobility model, as DRIFT.MOBILITY gives it), ' +
       'so v = μ0·E exactly at low field. Monotone: no velocity overshoot or negative differential mobility.',
+    equation: 'src/physics/highField/caugheyThomasField.ts',
+    parameterTable: 'src/physics/highField/caugheyThomasField.ts',
+    tests: ['tests/physics/reference/canali-1975.reference.test.ts', 'tests/physics/highField/caugheyThomasField.test.ts'],
   },
   {
     code: CANALI_MODEL_CODE,
@@ -44,6 +47,9 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
       'Canali’s fit β = 2.57e-2·T^0.66 (e), 0.46·T^0.17 (h) belongs with its v_m = 1.53e9·T^−0.87, 1.62e8·T^−0.52 cm/s; ' +
       'that v_m is a fit parameter, not the saturation velocity (3.5e7 cm/s at 77 K against about 1.2–1.4e7 measured), ' +
       'so Si uses Quay’s v_sat(T) with Canali’s 300 K β.',
+    equation: 'src/physics/highField/canali.ts',
+    parameterTable: 'src/physics/highField/canali.ts',
+    tests: ['tests/physics/reference/canali-1975.reference.test.ts'],
   },
   {
     code: QUAY_MODEL_CODE,
@@ -56,6 +62,13 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
       `${Math.ceil(SILICON_HOLE_LAW_CROSSING_K)} K (below, Quay’s hole law would exceed the electron one); Ge, GaAs 20–1000 K. ` +
       'Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs β = 2 (e), 1 (h) from Caughey–Thomas, not fitted to these materials. ' +
       (QUAY_GALLIUM_ARSENIDE.limitations ?? ''),
+    equation: 'src/physics/highField/saturationVelocity.ts',
+    parameterTable: 'src/physics/highField/quay.ts',
+    tests: [
+      'tests/physics/reference/quay-2000.reference.test.ts',
+      'tests/physics/reference/jacoboni-1977.reference.test.ts',
+      'tests/physics/highField/saturationVelocity.test.ts',
+    ],
   },
   {
     code: KHAN_COOPER_MODEL_CODE,
@@ -65,5 +78,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     validity: KHAN_COOPER_SOURCE.validity,
     notes:
       `β = 2 from Caughey–Thomas, not fitted to 4H-SiC. No hole value is tabulated. ${KHAN_COOPER_SILICON_CARBIDE.limitations ?? ''}`,
+    equation: 'src/physics/highField/saturationVelocity.ts',
+    parameterTable: 'src/physics/highField/siliconCarbide.ts',
+    tests: ['tests/physics/reference/khan-cooper-2000.reference.test.ts', 'tests/physics/highField/saturationVelocity.test.ts'],
   },
 ];

@@ -22,6 +22,12 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
       'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about 1e19 cm⁻³ results are approximate.',
     notes:
       'Each depth is treated as a uniform sample of the layer dopant over the opposite-type background (incomplete ionization, compensation, default mobility model), where Irvin used his bulk resistivity curve and full ionization; depletion at the junction is ignored. Adaptive Gauss–Kronrod (7/15) quadrature, target 1e-6 relative.',
+    equation: 'src/physics/layers/sheetResistance.ts',
+    parameterTable: 'src/physics/layers/sheetResistance.ts',
+    tests: [
+      'tests/physics/reference/irvin-1962-layers.reference.test.ts',
+      'tests/physics/layers/sheetResistance.test.ts',
+    ],
   },
   {
     code: 'gaussian',
@@ -30,6 +36,13 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     citation: `Solution of Fick's second law for a fixed dose, common practice, no source; used for layers by ${IRVIN_CITATION}`,
     validity: AS_DIFFUSED,
     notes: 'L = 2·sqrt(D·t); junction at xj = L·sqrt(ln(Ns/NB)).',
+    equation: 'src/physics/layers/profiles.ts',
+    parameterTable: 'src/physics/layers/profiles.ts',
+    tests: [
+      'tests/physics/reference/irvin-1962-layers.reference.test.ts',
+      'tests/physics/layers/profiles.test.ts',
+      'tests/physics/layers/sheetResistance.test.ts',
+    ],
   },
   {
     code: 'erfc',
@@ -38,6 +51,9 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     citation: `Solution of Fick's second law for a fixed surface concentration, common practice, no source; used for layers by ${IRVIN_CITATION}. erfc from W. J. Cody, Math. Comp. 23, 631 (1969)`,
     validity: AS_DIFFUSED,
     notes: 'L = 2·sqrt(D·t); junction at xj = L·erfcinv(NB/Ns).',
+    equation: 'src/physics/layers/profiles.ts',
+    parameterTable: 'src/physics/layers/profiles.ts',
+    tests: ['tests/physics/reference/irvin-1962-layers.reference.test.ts', 'tests/physics/layers/profiles.test.ts'],
   },
   {
     code: 'lss-gaussian-implant',
@@ -49,5 +65,8 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
       'Amorphous-target approximation: no channelling tail, no skew (light ions such as B are skewed); as implanted, before any anneal.',
     notes:
       'Truncated at the surface: the part of the Gaussian above x = 0 is lost, not reflected. Assumed fully electrically activated with no implant damage (as-implanted, fully activated, no damage).',
+    equation: 'src/physics/layers/profiles.ts',
+    parameterTable: 'src/physics/layers/profiles.ts',
+    tests: ['tests/physics/layers/profiles.test.ts', 'tests/physics/layers/sheetResistance.test.ts'],
   },
 ];

@@ -28,6 +28,9 @@ export const THURMOND_1975_GALLIUM_ARSENIDE_BANDGAP: VarshniBandgap = {
   validity:
     'fitted to GaAs gap data from near 0 K to above room temperature (from memory); evaluated here up to the ' +
     'melting point, 1511 K (extrapolation)',
+  equation: 'src/physics/bands/bandgap.ts',
+  parameterTable: 'src/physics/materials/galliumArsenide.ts',
+  tests: ['tests/physics/reference/sze-ng-2007-ge-gaas.reference.test.ts', 'tests/physics/materials/hosts.test.ts'],
 };
 
 /**
@@ -52,6 +55,9 @@ export const SZE_NG_2007_GALLIUM_ARSENIDE_DENSITY_OF_STATES: DensityOfStatesMode
   validity:
     '300 K values; the T^3/2 law ignores the temperature dependence of the masses and the L and X valleys, ' +
     'which fill above about 500 K, so Nc and ni at high temperature are underestimates',
+  equation: 'src/physics/bands/densityOfStates.ts',
+  parameterTable: 'src/physics/materials/galliumArsenide.ts',
+  tests: ['tests/physics/reference/sze-ng-2007-ge-gaas.reference.test.ts', 'tests/physics/materials/hosts.test.ts'],
 };
 
 /** Melting point of GaAs, 1238 °C (common practice, no source). */

@@ -29,6 +29,9 @@ export const THURMOND_1975_GERMANIUM_BANDGAP: VarshniBandgap = {
   validity:
     'fitted to Ge gap data from near 0 K to about room temperature and above (from memory); evaluated here ' +
     'up to the melting point, 1211 K, where it gives 0.26 eV (extrapolation)',
+  equation: 'src/physics/bands/bandgap.ts',
+  parameterTable: 'src/physics/materials/germanium.ts',
+  tests: ['tests/physics/reference/sze-ng-2007-ge-gaas.reference.test.ts', 'tests/physics/materials/hosts.test.ts'],
 };
 
 /**
@@ -52,6 +55,9 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
   validity:
     '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is ' +
     'an estimate',
+  equation: 'src/physics/bands/densityOfStates.ts',
+  parameterTable: 'src/physics/materials/germanium.ts',
+  tests: ['tests/physics/reference/sze-ng-2007-ge-gaas.reference.test.ts', 'tests/physics/materials/hosts.test.ts'],
 };
 
 /** Melting point of Ge, 938 °C: solid-state models end there (common practice, no source). */

@@ -4,7 +4,7 @@
  * bands/modelInfo.ts), for the model registry and DRIFT.MODELS(). Citations
  * and validity come from the parameter tables themselves.
  */
-import type { ModelInfo } from '../modelInfo';
+import { locationOf, type ModelInfo } from '../modelInfo';
 import { MATERIALS } from './index';
 import { HYDROGENIC_CONSTANTS, mottDensity } from './ionizationScaling';
 import { SILICON } from './silicon';
@@ -41,6 +41,20 @@ function dopantSummary(material: Material): string {
     .join(', ');
 }
 
+/** The file of each host's dopant table (isolated ionization energies), by material code. */
+const DOPANT_TABLE_FILES: Readonly<Record<string, string>> = {
+  Ge: 'src/physics/materials/germaniumDopants.ts',
+  GaAs: 'src/physics/materials/galliumArsenideDopants.ts',
+  '4H-SiC': 'src/physics/materials/siliconCarbide4HDopants.ts',
+};
+
+/** A host's dopant-table file; a host added without one is refused when the registry loads. */
+function dopantTableFile(material: Material): string {
+  const file = DOPANT_TABLE_FILES[material.code];
+  if (file === undefined) throw new Error(`materials/modelInfo.ts: no dopant table file named for ${material.code}`);
+  return file;
+}
+
 function hostModels(material: Material): ModelInfo[] {
   const { bandgap, densityOfStates } = material;
   return [
@@ -53,6 +67,7 @@ function hostModels(material: Material): ModelInfo[] {
       notes:
         `Eg(T) = Eg0 − α·T²/(T + β). With ${densityOfStates.code} it gives ni of ${material.name} through the ` +
         `'dos' model, the only ni model for ${material.code} (no published ni fit is offered).`,
+      ...locationOf(bandgap),
     },
     {
       code: densityOfStates.code,
@@ -60,6 +75,7 @@ function hostModels(material: Material): ModelInfo[] {
       name: densityOfStates.name,
       citation: densityOfStates.citation,
       validity: densityOfStates.validity,
+      ...locationOf(densityOfStates),
     },
     {
       code: ionizationModelCode(material),
@@ -74,6 +90,9 @@ function hostModels(material: Material): ModelInfo[] {
         'freeze-out from the measured isolated levels; full ionization above the estimated Mott density, an ' +
         'estimate within about a factor of 2, not a fit',
       notes: `εr = ${material.relativePermittivity}. ${dopantSummary(material)}.`,
+      equation: 'src/physics/materials/ionizationScaling.ts',
+      parameterTable: dopantTableFile(material),
+      tests: ['tests/physics/materials/hosts.test.ts'],
     },
   ];
 }

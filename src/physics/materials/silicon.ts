@@ -27,6 +27,9 @@ export const THURMOND_1975_BANDGAP: VarshniBandgap = {
   validity:
     'fitted to Si gap data from near 0 K to well above room temperature (from memory); the physics core ' +
     'evaluates it over 1–1687 K (between 1.17 and 0.59 eV there), the spreadsheet functions at 20–1000 K',
+  equation: 'src/physics/bands/bandgap.ts',
+  parameterTable: 'src/physics/materials/silicon.ts',
+  tests: ['tests/physics/reference/thurmond-1975.reference.test.ts', 'tests/physics/bands/bandgap.test.ts'],
 };
 
 /**
@@ -54,6 +57,9 @@ export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
   validity:
     '300 K values; power laws approximate Green’s masses over about 200–500 K (from memory) and are ' +
     'extrapolated outside that range',
+  equation: 'src/physics/bands/densityOfStates.ts',
+  parameterTable: 'src/physics/materials/silicon.ts',
+  tests: ['tests/physics/reference/green-1990.reference.test.ts', 'tests/physics/bands/densityOfStates.test.ts'],
 };
 
 /**
@@ -89,6 +95,9 @@ export const MISIAKOS_TSAMAKIS_1993_FIT: IntrinsicDensityFit = {
     'Default. Outside 78–340 K the same analytic fit is extrapolated: it stays within 10% of the ' +
     'DOS-based model (Thurmond gap, Green 1990 Nc/Nv) from 78 K to 1000 K, and the gap it implies with ' +
     'Green’s Nc, Nv stays within 0.015 eV of Thurmond’s from 1 K to 1687 K.',
+  equation: 'src/physics/bands/intrinsicDensity.ts',
+  parameterTable: 'src/physics/materials/silicon.ts',
+  tests: ['tests/physics/reference/misiakos-tsamakis-1993.reference.test.ts', 'tests/physics/bands/intrinsicDensity.test.ts'],
 };
 
 /**
@@ -110,6 +119,9 @@ export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
   notes:
     'About 5% above the default at 300 K; Altermatt et al., J. Appl. Phys. 93, 1598 (2003) attribute the ' +
     'difference to band-gap narrowing in the measured devices.',
+  equation: 'src/physics/bands/intrinsicDensity.ts',
+  parameterTable: 'src/physics/materials/silicon.ts',
+  tests: ['tests/physics/reference/sproul-green-1991.reference.test.ts', 'tests/physics/bands/intrinsicDensity.test.ts'],
 };
 
 /** Melting point of Si: solid-state models end there. */

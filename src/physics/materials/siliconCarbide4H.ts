@@ -25,6 +25,9 @@ export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_BANDGAP: VarshniBandgap = {
   validity:
     'fitted to optical gap data up to several hundred kelvin (from memory); evaluated here up to 3100 K ' +
     '(extrapolation above about 700 K)',
+  equation: 'src/physics/bands/bandgap.ts',
+  parameterTable: 'src/physics/materials/siliconCarbide4H.ts',
+  tests: ['tests/physics/materials/hosts.test.ts'],
 };
 
 /**
@@ -47,6 +50,9 @@ export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES: DensityOfSta
     `${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.conductionBand)} and ${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.valenceBand)} cm⁻³ at 300 K ` +
     '(values from memory)',
   validity: 'constant-mass estimate; ni at 300 K (about 1e-8 cm⁻³) is an order-of-magnitude value',
+  equation: 'src/physics/bands/densityOfStates.ts',
+  parameterTable: 'src/physics/materials/siliconCarbide4H.ts',
+  tests: ['tests/physics/materials/hosts.test.ts'],
 };
 
 /** 4H-SiC decomposes (sublimes) near 2830 °C instead of melting (common practice, no source). */

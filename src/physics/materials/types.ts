@@ -3,6 +3,7 @@
  * citation and the range over which its source validated it, so the model
  * registry and help pages can show them next to the numbers.
  */
+import type { ModelLocation } from '../modelInfo';
 
 /** Where a parameter set comes from and where it was validated. */
 export interface Provenance {
@@ -16,7 +17,7 @@ export interface Provenance {
  * Varshni-form band gap Eg(T) = Eg0 − α·T²/(T + β) (Y. P. Varshni,
  * Physica 34, 149 (1967)).
  */
-export interface VarshniBandgap extends Provenance {
+export interface VarshniBandgap extends Provenance, ModelLocation {
   readonly code: string;
   readonly name: string;
   /** Gap at 0 K, eV. */
@@ -38,7 +39,7 @@ export interface PowerLawDensity {
 }
 
 /** Effective densities of states of both band edges, from one source. */
-export interface DensityOfStatesModel extends Provenance {
+export interface DensityOfStatesModel extends Provenance, ModelLocation {
   readonly code: string;
   readonly name: string;
   readonly conductionBand: PowerLawDensity;
@@ -49,7 +50,7 @@ export interface DensityOfStatesModel extends Provenance {
  * Intrinsic density fit ni(T) = A·(T/Tref)^m·exp(−Θ/T), the form used by
  * Misiakos & Tsamakis (1993) and Sproul & Green (1991).
  */
-export interface IntrinsicDensityFit extends Provenance {
+export interface IntrinsicDensityFit extends Provenance, ModelLocation {
   readonly code: string;
   readonly name: string;
   /** A, cm⁻³. */

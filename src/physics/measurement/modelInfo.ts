@@ -13,6 +13,9 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     validity:
       'homogeneous isotropic sample, point contacts far from lateral edges; non-conducting bottom face; any thickness (exact image series)',
     notes: 'ρ = 2π·s·(V/I)/G(t/s); G is summed exactly from the image series here rather than read from a table.',
+    equation: 'src/physics/measurement/fourPoint.ts',
+    parameterTable: 'src/physics/measurement/fourPoint.ts',
+    tests: ['tests/physics/reference/valdes-1954.reference.test.ts', 'tests/physics/measurement/fourPoint.test.ts'],
   },
   {
     code: 'smits-1958',
@@ -23,6 +26,9 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     notes:
       'Rs = (π/ln 2)·V/I ≈ 4.532·V/I for an unbounded layer; C(d/s) = π/(ln 2 + ln((d²/s² + 3)/(d²/s² − 3))) for a disc; ' +
       'thickness and diameter factors multiplied, as Smits does for thin slices.',
+    equation: 'src/physics/measurement/fourPoint.ts',
+    parameterTable: 'src/physics/measurement/fourPoint.ts',
+    tests: ['tests/physics/reference/smits-1958.reference.test.ts', 'tests/physics/measurement/fourPoint.test.ts'],
   },
   {
     code: 'van-der-pauw-1958',
@@ -31,6 +37,13 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     citation: 'L. J. van der Pauw, "A method of measuring specific resistivity and Hall effect of discs of arbitrary shape", Philips Res. Rep. 13, 1 (1958)',
     validity: 'uniform layer without holes, contacts small and on its periphery',
     notes: 'exp(−πRa/Rs) + exp(−πRb/Rs) = 1 solved exactly with a bracketed root finder.',
+    equation: 'src/physics/measurement/vanDerPauw.ts',
+    parameterTable: 'src/physics/measurement/vanDerPauw.ts',
+    tests: [
+      'tests/physics/reference/van-der-pauw-1958.reference.test.ts',
+      'tests/physics/reference/mpmath-oracles.reference.test.ts',
+      'tests/physics/measurement/vanDerPauw.test.ts',
+    ],
   },
   {
     code: 'hall-effect',
@@ -39,5 +52,8 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     citation: 'common practice, no source (textbook single-carrier relation R_H = ±r_H/(q·n))',
     validity: 'one dominant carrier type; weak magnetic field (μB ≪ 1); r_H ≈ 1.1–1.2 for lattice scattering (from memory)',
     notes: 'Sign convention: a negative density means electrons (n-type), a positive one holes (p-type).',
+    equation: 'src/physics/measurement/hall.ts',
+    parameterTable: 'src/physics/measurement/hall.ts',
+    tests: ['tests/physics/measurement/hall.test.ts'],
   },
 ];

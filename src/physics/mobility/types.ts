@@ -5,6 +5,7 @@
  */
 import type { Carrier, Sample } from '../sample';
 import type { Provenance } from '../materials/types';
+import type { ModelLocation } from '../modelInfo';
 
 export type { FitParameters, MaterialMobilityFit, ScaledCaugheyThomasParameters, ScaledCoefficient } from './fitTypes';
 
@@ -25,7 +26,7 @@ export type MobilityFitBasis = 'dopant-density' | 'free-carriers';
  * default, dispatch, DRIFT.MODELS row, help-page citation and README row of
  * a mobility model is derived from these entries (registry.ts).
  */
-export interface MobilityModel<Parameters = unknown> extends Provenance {
+export interface MobilityModel<Parameters = unknown> extends Provenance, ModelLocation {
   /** Code as users type it (lower-case author names; look-up is case-insensitive). */
   readonly code: string;
   /** What it computes, as DRIFT.MODELS and README's model table show it. */

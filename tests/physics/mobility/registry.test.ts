@@ -77,7 +77,7 @@ describe('what is derived from the registry', () => {
     }
   });
 
-  it('gives each entry its DRIFT.MODELS row word for word', () => {
+  it('gives each entry its DRIFT.MODELS row word for word, with the files it names', () => {
     for (const model of MOBILITY_MODEL_REGISTRY) {
       expect(modelInfo(model.code)).toEqual({
         code: model.code,
@@ -86,6 +86,9 @@ describe('what is derived from the registry', () => {
         citation: model.citation,
         validity: model.validity,
         notes: model.notes,
+        equation: model.equation,
+        parameterTable: model.parameterTable,
+        tests: model.tests,
       });
     }
     expect(MODEL_REGISTRY.filter((row) => mobilityModelEntry(row.code) !== undefined)).toHaveLength(MOBILITY_MODEL_REGISTRY.length);
