@@ -29,6 +29,7 @@ import type { Material } from '../materials/types';
 import { logIntrinsicDensity } from './intrinsicDensity';
 import { checkDopantDensity } from '../ionization';
 import type { ModelLocation } from '../modelInfo';
+import { parameterText as t } from '../parameterText';
 
 /** One apparent-BGN parameter set, with its source and where it lives. */
 export interface ApparentBandgapNarrowingModel extends ModelLocation {
@@ -48,6 +49,25 @@ export interface ApparentBandgapNarrowingModel extends ModelLocation {
   readonly notes: string;
 }
 
+/** The three fitted values of a BGN parameter set. */
+type BandgapNarrowingParameters = Pick<ApparentBandgapNarrowingModel, 'energy' | 'referenceDensity' | 'constant'>;
+
+/**
+ * A parameter set's values as its citation quotes them, written from the set.
+ *
+ * @param parameters - E0 (eV), Nref (cm⁻³), C
+ * @returns e.g. 'E0 = 6.92 meV, Nref = 1.3e17 cm⁻³, C = 0.5'
+ */
+function bandgapNarrowingText(parameters: BandgapNarrowingParameters): string {
+  return `E0 = ${t(parameters.energy * 1000)} meV, Nref = ${t(parameters.referenceDensity)} cm⁻³, C = ${t(parameters.constant)}`;
+}
+
+/** Klaassen, Slotboom & de Graaff (1992) values (from memory). */
+const KLAASSEN_BGN_PARAMETERS = { energy: 6.92e-3, referenceDensity: 1.3e17, constant: 0.5 } as const;
+
+/** Slotboom & de Graaff (1976) values (from memory). */
+const SLOTBOOM_1976_PARAMETERS = { energy: 9e-3, referenceDensity: 1e17, constant: 0.5 } as const;
+
 /**
  * Klaassen, Slotboom & de Graaff (1992): the 1976 form refitted to n- and
  * p-type data together, re-evaluated with the newer ni (about 1e10 cm⁻³ at
@@ -57,12 +77,10 @@ export const KLAASSEN_BGN: ApparentBandgapNarrowingModel = {
   code: 'klaassen-bgn',
   name: 'Klaassen, Slotboom & de Graaff (1992) unified apparent bandgap narrowing (default)',
   materialCode: 'Si',
-  energy: 6.92e-3,
-  referenceDensity: 1.3e17,
-  constant: 0.5,
+  ...KLAASSEN_BGN_PARAMETERS,
   citation:
     'D. B. M. Klaassen, J. W. Slotboom, H. C. de Graaff, "Unified apparent bandgap narrowing in n- and p-type ' +
-    'silicon", Solid-State Electron. 35, 125 (1992); E0 = 6.92 meV, Nref = 1.3e17 cm⁻³, C = 0.5 (from memory)',
+    `silicon", Solid-State Electron. 35, 125 (1992); ${bandgapNarrowingText(KLAASSEN_BGN_PARAMETERS)} (from memory)`,
   validity:
     'silicon, n- and p-type, dopant density about 1e17–1e20 cm⁻³ near 300 K; meant for use with ni = 9.65e9–1e10 cm⁻³ ' +
     'at 300 K and Boltzmann statistics (n0·p0 = ni_eff²)',
@@ -79,12 +97,10 @@ export const SLOTBOOM_1976_BGN: ApparentBandgapNarrowingModel = {
   code: 'slotboom-1976',
   name: 'Slotboom & de Graaff (1976) apparent bandgap narrowing',
   materialCode: 'Si',
-  energy: 9e-3,
-  referenceDensity: 1e17,
-  constant: 0.5,
+  ...SLOTBOOM_1976_PARAMETERS,
   citation:
     'J. W. Slotboom, H. C. de Graaff, "Measurements of bandgap narrowing in Si bipolar transistors", ' +
-    'Solid-State Electron. 19, 857 (1976); E0 = 9 meV, Nref = 1e17 cm⁻³, C = 0.5 (from memory)',
+    `Solid-State Electron. 19, 857 (1976); ${bandgapNarrowingText(SLOTBOOM_1976_PARAMETERS)} (from memory)`,
   validity:
     'silicon, dopant density about 1e17–1e20 cm⁻³, measured on transistor bases near room temperature; ' +
     'evaluated with the older ni ≈ 1.45e10 cm⁻³ at 300 K (from memory), so with today’s ni it overstates ΔEg; ' +

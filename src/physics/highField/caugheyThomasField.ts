@@ -10,18 +10,19 @@
  * monotone, so it cannot show a velocity peak (negative differential mobility).
  */
 import { PhysicsDomainError } from '../errors';
-
-/** Citation of the velocity–field form, for the model registry. */
-export const CAUGHEY_THOMAS_FIELD_SOURCE = {
-  citation:
-    'D. M. Caughey, R. E. Thomas, Proc. IEEE 55, 2192 (1967): v = μ0E/(1 + (μ0E/v_sat)^β)^(1/β); ' +
-    'β = 2 for electrons, 1 for holes in Si at 300 K (from memory)',
-  validity:
-    'fitted to silicon at 300 K; used with material- and temperature-dependent μ0, v_sat and β from the tables of each material',
-} as const;
+import { parameterText as t } from '../parameterText';
 
 /** Caughey & Thomas (1967) silicon field exponents at 300 K (from memory), used where a material has no fitted β. */
 export const CAUGHEY_THOMAS_FIELD_EXPONENTS = { electron: 2, hole: 1 } as const;
+
+/** Citation of the velocity–field form, for the model registry; the exponents written from the table above. */
+export const CAUGHEY_THOMAS_FIELD_SOURCE = {
+  citation:
+    'D. M. Caughey, R. E. Thomas, Proc. IEEE 55, 2192 (1967): v = μ0E/(1 + (μ0E/v_sat)^β)^(1/β); ' +
+    `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} for electrons, ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} for holes in Si at 300 K (from memory)`,
+  validity:
+    'fitted to silicon at 300 K; used with material- and temperature-dependent μ0, v_sat and β from the tables of each material',
+} as const;
 
 /**
  * Caughey–Thomas drift velocity for a given low-field mobility.

@@ -4,10 +4,16 @@
  * constants beside each table.
  */
 import type { ModelInfo } from '../modelInfo';
-import { CAUGHEY_THOMAS_FIELD_SOURCE } from './caugheyThomasField';
-import { CANALI_MODEL_CODE, CANALI_SOURCE, canaliExponentAt300K } from './canali';
+import { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE } from './caugheyThomasField';
+import { CANALI_FIELD_EXPONENT_LAWS, CANALI_MODEL_CODE, CANALI_SOURCE, canaliExponentAt300K } from './canali';
 import { QUAY_GALLIUM_ARSENIDE, QUAY_MODEL_CODE, QUAY_PARAMETERS, QUAY_SOURCE, SILICON_HOLE_LAW_CROSSING_K } from './quay';
-import { KHAN_COOPER_MODEL_CODE, KHAN_COOPER_SILICON_CARBIDE, KHAN_COOPER_SOURCE } from './siliconCarbide';
+import {
+  KHAN_COOPER_MODEL_CODE,
+  KHAN_COOPER_SATURATION_VELOCITY,
+  KHAN_COOPER_SILICON_CARBIDE,
+  KHAN_COOPER_SOURCE,
+} from './siliconCarbide';
+import { parameterText as t } from '../parameterText';
 
 /** Registry code of the Caughey–Thomas velocity–field relation. */
 export const CAUGHEY_THOMAS_FIELD_CODE = 'caughey-thomas-field';
@@ -22,6 +28,19 @@ function quayParameterText(): string {
     .join('; ');
 }
 const SATURATION = 'saturation velocity';
+
+/** "β = 2 (e), 1 (h)": the Caughey–Thomas exponents as the notes quote them, from the table. */
+const CAUGHEY_THOMAS_EXPONENTS_TEXT = `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} (e), ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} (h)`;
+
+/**
+ * "2.57e-2·T^0.66 (e), 0.46·T^0.17 (h)": Canali's β(T) laws from the table.
+ * Canali's v_m(T) beside it in the notes is quoted text: the core does not
+ * compute with it (see canali.ts).
+ */
+function canaliLawText(): string {
+  const { electron, hole } = CANALI_FIELD_EXPONENT_LAWS;
+  return `${electron.prefactor.toExponential()}·T^${t(electron.exponent)} (e), ${t(hole.prefactor)}·T^${t(hole.exponent)} (h)`;
+}
 
 export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
   {
@@ -44,7 +63,7 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     citation: CANALI_SOURCE.citation,
     validity: CANALI_SOURCE.validity,
     notes:
-      'Canali’s fit β = 2.57e-2·T^0.66 (e), 0.46·T^0.17 (h) belongs with its v_m = 1.53e9·T^−0.87, 1.62e8·T^−0.52 cm/s; ' +
+      `Canali’s fit β = ${canaliLawText()} belongs with its v_m = 1.53e9·T^−0.87, 1.62e8·T^−0.52 cm/s; ` +
       'that v_m is a fit parameter, not the saturation velocity (3.5e7 cm/s at 77 K against about 1.2–1.4e7 measured), ' +
       'so Si uses Quay’s v_sat(T) with Canali’s 300 K β.',
     equation: 'src/physics/highField/canali.ts',
@@ -60,7 +79,7 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     notes:
       `${quayParameterText()} (read in Palankovski 2000, Table 3.31). Si electrons 77–1000 K, Si holes from ` +
       `${Math.ceil(SILICON_HOLE_LAW_CROSSING_K)} K (below, Quay’s hole law would exceed the electron one); Ge, GaAs 20–1000 K. ` +
-      'Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs β = 2 (e), 1 (h) from Caughey–Thomas, not fitted to these materials. ' +
+      `Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs ${CAUGHEY_THOMAS_EXPONENTS_TEXT} from Caughey–Thomas, not fitted to these materials. ` +
       (QUAY_GALLIUM_ARSENIDE.limitations ?? ''),
     equation: 'src/physics/highField/saturationVelocity.ts',
     parameterTable: 'src/physics/highField/quay.ts',
@@ -73,11 +92,11 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
   {
     code: KHAN_COOPER_MODEL_CODE,
     quantity: `${SATURATION}, 4H-SiC electrons`,
-    name: 'Khan & Cooper (2000) 4H-SiC electron saturated drift velocity, 2.2e7 cm/s',
+    name: `Khan & Cooper (2000) 4H-SiC electron saturated drift velocity, ${t(KHAN_COOPER_SATURATION_VELOCITY)} cm/s`,
     citation: KHAN_COOPER_SOURCE.citation,
     validity: KHAN_COOPER_SOURCE.validity,
     notes:
-      `β = 2 from Caughey–Thomas, not fitted to 4H-SiC. No hole value is tabulated. ${KHAN_COOPER_SILICON_CARBIDE.limitations ?? ''}`,
+      `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} from Caughey–Thomas, not fitted to 4H-SiC. No hole value is tabulated. ${KHAN_COOPER_SILICON_CARBIDE.limitations ?? ''}`,
     equation: 'src/physics/highField/saturationVelocity.ts',
     parameterTable: 'src/physics/highField/siliconCarbide.ts',
     tests: ['tests/physics/reference/khan-cooper-2000.reference.test.ts', 'tests/physics/highField/saturationVelocity.test.ts'],

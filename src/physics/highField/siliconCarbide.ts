@@ -9,15 +9,19 @@
  */
 import { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE } from './caugheyThomasField';
 import type { MaterialHighFieldTables, VelocitySource } from './types';
+import { parameterText as t } from '../parameterText';
 
 /** Registry code of the Khan & Cooper (2000) 4H-SiC electron saturation velocity. */
 export const KHAN_COOPER_MODEL_CODE = 'khan-cooper-2000';
+
+/** Khan & Cooper (2000) 4H-SiC electron saturated drift velocity at 300 K, cm/s (from memory). */
+export const KHAN_COOPER_SATURATION_VELOCITY = 2.2e7;
 
 /** Citation and validity of the Khan & Cooper value, for the model registry. */
 export const KHAN_COOPER_SOURCE: VelocitySource = {
   citation:
     'I. A. Khan, J. A. Cooper, Jr., IEEE Trans. Electron Devices 47, 269 (2000); Mater. Sci. Forum 338–342, 761 (2000) ' +
-    '(v_sat = 2.2e7 cm/s from memory)',
+    `(v_sat = ${t(KHAN_COOPER_SATURATION_VELOCITY)} cm/s from memory)`,
   validity: '4H-SiC electrons, 300 K only, field perpendicular to the c axis; no temperature law tabulated',
 };
 
@@ -29,7 +33,7 @@ export const KHAN_COOPER_SILICON_CARBIDE: MaterialHighFieldTables = {
   material: '4H-SiC',
   electron: {
     modelCode: KHAN_COOPER_MODEL_CODE,
-    saturationVelocity: { form: 'single-temperature', value: 2.2e7, temperature: MEASURED_TEMPERATURE },
+    saturationVelocity: { form: 'single-temperature', value: KHAN_COOPER_SATURATION_VELOCITY, temperature: MEASURED_TEMPERATURE },
     saturationSource: KHAN_COOPER_SOURCE,
     fieldExponent: { form: 'constant', value: CAUGHEY_THOMAS_FIELD_EXPONENTS.electron },
     fieldExponentSource: {

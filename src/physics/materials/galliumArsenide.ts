@@ -8,7 +8,7 @@ import { GALLIUM_ARSENIDE_DOPANTS, GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY } from
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
 import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 import { densityOfStatesText, varshniText } from './citationText';
-import { exponentText } from '../parameterText';
+import { exponentText, parameterText as t } from '../parameterText';
 
 /**
  * Varshni-form fit of the GaAs gap as Thurmond gives it (form of
@@ -74,13 +74,14 @@ export const GALLIUM_ARSENIDE: Material = {
     min: LOWEST_NUMERIC_TEMPERATURE,
     max: GALLIUM_ARSENIDE_MELTING_POINT,
     reason:
-      'from 1 K (below, the exponentials leave double-precision range) to the melting point of GaAs, 1511 K ' +
+      `from 1 K (below, the exponentials leave double-precision range) to the melting point of GaAs, ${t(GALLIUM_ARSENIDE_MELTING_POINT)} K ` +
       '(free surfaces lose arsenic well below it); each model’s own validated range is narrower (see DRIFT.MODELS)',
   },
   atomicDensity: GALLIUM_ARSENIDE_ATOMIC_DENSITY,
   relativePermittivity: GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY,
   hostPropertiesCitation:
-    'atomic density 4.42e22 cm⁻³ and melting point 1511 K: common practice, no source; εr = 12.9: ' +
+    `atomic density ${t(GALLIUM_ARSENIDE_ATOMIC_DENSITY)} cm⁻³ and melting point ${t(GALLIUM_ARSENIDE_MELTING_POINT)} K: common practice, no source; ` +
+    `εr = ${t(GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY)}: ` +
     'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)',
   bandgap: THURMOND_1975_GALLIUM_ARSENIDE_BANDGAP,
   densityOfStates: SZE_NG_2007_GALLIUM_ARSENIDE_DENSITY_OF_STATES,

@@ -9,7 +9,7 @@ import { GERMANIUM_DOPANTS, GERMANIUM_RELATIVE_PERMITTIVITY } from './germaniumD
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
 import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 import { densityOfStatesText, varshniText } from './citationText';
-import { exponentText } from '../parameterText';
+import { exponentText, parameterText as t } from '../parameterText';
 
 /**
  * Varshni-form fit of the Ge gap as Thurmond gives it (the form of
@@ -75,12 +75,13 @@ export const GERMANIUM: Material = {
     max: GERMANIUM_MELTING_POINT,
     reason:
       'from 1 K (below, the exponentials leave double-precision range) to the melting point of germanium, ' +
-      '1211 K; each model’s own validated range is narrower (see DRIFT.MODELS)',
+      `${t(GERMANIUM_MELTING_POINT)} K; each model’s own validated range is narrower (see DRIFT.MODELS)`,
   },
   atomicDensity: GERMANIUM_ATOMIC_DENSITY,
   relativePermittivity: GERMANIUM_RELATIVE_PERMITTIVITY,
   hostPropertiesCitation:
-    'atomic density 4.42e22 cm⁻³ and melting point 1211 K: common practice, no source; εr = 16.0: ' +
+    `atomic density ${t(GERMANIUM_ATOMIC_DENSITY)} cm⁻³ and melting point ${t(GERMANIUM_MELTING_POINT)} K: common practice, no source; ` +
+    `εr = ${t(GERMANIUM_RELATIVE_PERMITTIVITY, 3)}: ` +
     'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)',
   bandgap: THURMOND_1975_GERMANIUM_BANDGAP,
   densityOfStates: SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES,

@@ -146,13 +146,13 @@ export const SILICON: Material = {
     max: SILICON_MELTING_POINT,
     reason:
       'from 1 K (below, the exponentials leave double-precision range) to the melting point of silicon, ' +
-      '1687 K; each model’s own validated range is narrower (see DRIFT.MODELS)',
+      `${t(SILICON_MELTING_POINT)} K; each model’s own validated range is narrower (see DRIFT.MODELS)`,
   },
   atomicDensity: SILICON_ATOMIC_DENSITY,
   relativePermittivity: SILICON_RELATIVE_PERMITTIVITY,
   hostPropertiesCitation:
-    'atomic density (8 atoms per 5.431 Å cubic cell) and melting point 1687 K: common practice, no source; ' +
-    'εr = 11.9: S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)',
+    `atomic density (8 atoms per 5.431 Å cubic cell) and melting point ${t(SILICON_MELTING_POINT)} K: common practice, no source; ` +
+    `εr = ${t(SILICON_RELATIVE_PERMITTIVITY)}: S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)`,
   bandgap: THURMOND_1975_BANDGAP,
   densityOfStates: GREEN_1990_DENSITY_OF_STATES,
   intrinsicFits: [MISIAKOS_TSAMAKIS_1993_FIT, SPROUL_GREEN_1991_FIT],

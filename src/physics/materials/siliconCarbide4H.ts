@@ -10,6 +10,7 @@ import { LEVINSHTEIN_2001, SILICON_CARBIDE_4H_DOPANTS, SILICON_CARBIDE_4H_RELATI
 import type { DensityOfStatesModel, Material, VarshniBandgap } from './types';
 import { LOWEST_NUMERIC_TEMPERATURE } from './temperature';
 import { absolutePowerLawText, densityOfStatesText, varshniText } from './citationText';
+import { parameterText as t } from '../parameterText';
 
 /**
  * Varshni-form gap of 4H-SiC, Eg(T) = 3.265 − 6.5e-4·T²/(T + 1300) eV:
@@ -70,12 +71,13 @@ export const SILICON_CARBIDE_4H: Material = {
     max: SILICON_CARBIDE_DECOMPOSITION,
     reason:
       'from 1 K (below, the exponentials leave double-precision range) to the decomposition of SiC near ' +
-      '3100 K; each model’s own validated range is much narrower (see DRIFT.MODELS)',
+      `${t(SILICON_CARBIDE_DECOMPOSITION)} K; each model’s own validated range is much narrower (see DRIFT.MODELS)`,
   },
   atomicDensity: SILICON_CARBIDE_ATOMIC_DENSITY,
   relativePermittivity: SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY,
   hostPropertiesCitation:
-    'atomic density 9.64e22 cm⁻³ and decomposition near 3100 K: common practice, no source; εr = 9.7 ' +
+    `atomic density ${t(SILICON_CARBIDE_ATOMIC_DENSITY)} cm⁻³ and decomposition near ${t(SILICON_CARBIDE_DECOMPOSITION)} K: ` +
+    `common practice, no source; εr = ${t(SILICON_CARBIDE_4H_RELATIVE_PERMITTIVITY)} ` +
     `(perpendicular to c): ${LEVINSHTEIN_2001} (from memory)`,
   bandgap: LEVINSHTEIN_2001_SILICON_CARBIDE_4H_BANDGAP,
   densityOfStates: LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES,

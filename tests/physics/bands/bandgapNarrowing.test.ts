@@ -10,6 +10,7 @@ import {
 import { thermalVoltage } from '../../../src/physics/constants';
 import { PhysicsDomainError } from '../../../src/physics/errors';
 import { GALLIUM_ARSENIDE, GERMANIUM, SILICON, SILICON_CARBIDE_4H } from '../../../src/physics/materials';
+import { parameterText } from '../../../src/physics/parameterText';
 
 describe('apparent bandgap narrowing', () => {
   it('offers klaassen-bgn (default) and slotboom-1976, case-insensitively, for silicon', () => {
@@ -64,4 +65,14 @@ describe('apparent bandgap narrowing', () => {
     // No overflow at 50 K, 1e21 cm⁻³, where ni itself is tiny.
     expect(Number.isFinite(effectiveIntrinsicDensity(SILICON, 50, 1e21))).toBe(true);
   });
+});
+
+describe('citations', () => {
+  it.each([KLAASSEN_BGN, SLOTBOOM_1976_BGN].map((model) => [model.code, model] as const))(
+    '%s quotes E0, Nref and C as its own table holds them',
+    (_code, model) => {
+      const quoted = `E0 = ${parameterText(model.energy * 1000)} meV, Nref = ${parameterText(model.referenceDensity)} cm⁻³, C = ${parameterText(model.constant)}`;
+      expect(model.citation).toContain(quoted);
+    },
+  );
 });

@@ -5,6 +5,9 @@
 import { MODEL_REGISTRY, modelInfo } from '../../../src/physics/models';
 import { HIGH_FIELD_MODELS, HIGH_FIELD_TABLES, carrierHighFieldTable, missingSaturationVelocity } from '../../../src/physics/highField';
 import { findFunction } from '../../../src/catalog';
+import { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE } from '../../../src/physics/highField/caugheyThomasField';
+import { KHAN_COOPER_SOURCE } from '../../../src/physics/highField/siliconCarbide';
+import { parameterText } from '../../../src/physics/parameterText';
 
 describe('high-field registry entries', () => {
   it('are in MODEL_REGISTRY exactly once, each with citation and validity', () => {
@@ -39,5 +42,15 @@ describe('high-field registry entries', () => {
       for (const code of ['canali-1975', 'quay-2000', 'khan-cooper-2000']) expect(spec.models).toContain(code);
       for (const code of spec.models) expect(() => modelInfo(code)).not.toThrow();
     }
+  });
+});
+
+describe('high-field citations quote the tables', () => {
+  it('gives the Caughey–Thomas exponents and the Khan & Cooper velocity the core computes with', () => {
+    const { electron, hole } = CAUGHEY_THOMAS_FIELD_EXPONENTS;
+    expect(CAUGHEY_THOMAS_FIELD_SOURCE.citation).toContain(`β = ${electron} for electrons, ${hole} for holes`);
+    const table = carrierHighFieldTable('4H-SiC', 'electron');
+    if (table.saturationVelocity.form !== 'single-temperature') throw new Error('Khan & Cooper give one temperature');
+    expect(KHAN_COOPER_SOURCE.citation).toContain(`v_sat = ${parameterText(table.saturationVelocity.value)} cm/s`);
   });
 });

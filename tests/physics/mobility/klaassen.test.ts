@@ -11,6 +11,7 @@
 import {
   KLAASSEN_CARRIER_TABLE,
   KLAASSEN_ELECTRON_HOLE_F,
+  KLAASSEN_SOURCE,
   klaassenClusteringFactor,
   klaassenElectronHoleFactor,
   klaassenGMinimumScreening,
@@ -25,6 +26,7 @@ import { solveEquilibrium } from '../../../src/physics/equilibrium';
 import { sampleDopants, type Carrier } from '../../../src/physics/sample';
 import { conductivity } from '../../../src/physics/transport';
 import { ELEMENTARY_CHARGE } from '../../../src/physics/constants';
+import { parameterText } from '../../../src/physics/parameterText';
 import { logSpaced, siliconSample } from '../transportSamples';
 
 const TEMPERATURES = [50, 77, 300, 500, 700];
@@ -321,5 +323,11 @@ describe('minority vs majority carriers of the same type (model property, Klaass
     const compensated = siliconSample('P', 1.5e19, 300, 5e18);
     expect(fitMobility('klaassen', 'electron', compensated)).toBeLessThan(0.9 * fitMobility('klaassen', 'electron', uncompensated));
     expect(fitMobility('masetti', 'electron', compensated)).toBe(fitMobility('masetti', 'electron', uncompensated));
+  });
+});
+
+describe('citation', () => {
+  it('quotes the r5 of F(P) the model computes with, beside the transcriptions’ disagreeing value', () => {
+    expect(KLAASSEN_SOURCE.citation).toContain(`(${parameterText(KLAASSEN_ELECTRON_HOLE_F.r5)} here, as in the simulators; −0.01552 in pvedu`);
   });
 });

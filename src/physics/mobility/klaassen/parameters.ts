@@ -14,19 +14,7 @@
 import type { Carrier } from '../../sample';
 import type { DopantKind } from '../../materials/types';
 import { MASETTI_TABLE, type MasettiParameters } from '../masetti';
-
-/** Citation and validity of Klaassen's model, for the model registry. */
-export const KLAASSEN_SOURCE = {
-  citation:
-    'D. B. M. Klaassen, Solid-State Electron. 35, 953 (1992) (I: model equations, concentration dependence) ' +
-    'and 35, 961 (1992) (II: temperature dependence). Equations and coefficients from memory, checked against ' +
-    'public transcriptions (github tcadsoftware/charon src/Charon_Material_Properties.cpp; cogenda/Genius-TCAD-Open ' +
-    'src/material/Si/Si_mob_Philips.cc; pvedu/photovoltaic photovoltaic/si.py); they disagree on r5 of F(P) ' +
-    '(−0.8552 here, as in the simulators; −0.01552 in pvedu and another transcription that follows the paper)',
-  validity:
-    'Silicon. 300 K: majority electrons and holes about 1e14–1e21 cm⁻³ (P, As, B), minority carriers about ' +
-    '1e17–1e20 cm⁻³; temperature: roughly 70/100–500 K (paper II, range from memory); extrapolated outside',
-} as const;
+import { parameterText as t } from '../../parameterText';
 
 /** Carrier parameters (paper I, Table 1 and paper II for θ; from memory). Mobilities cm²/(V·s). */
 export interface KlaassenCarrierParameters {
@@ -97,4 +85,22 @@ export const KLAASSEN_MINORITY_G = {
   s5: 0.005978,
   s6: 1.80618,
   s7: 0.72169,
+} as const;
+
+/**
+ * Citation and validity of Klaassen's model, for the model registry. The r5
+ * this model computes with is written from KLAASSEN_ELECTRON_HOLE_F; the
+ * −0.01552 beside it is a quote of the transcriptions that disagree, not a
+ * value used here.
+ */
+export const KLAASSEN_SOURCE = {
+  citation:
+    'D. B. M. Klaassen, Solid-State Electron. 35, 953 (1992) (I: model equations, concentration dependence) ' +
+    'and 35, 961 (1992) (II: temperature dependence). Equations and coefficients from memory, checked against ' +
+    'public transcriptions (github tcadsoftware/charon src/Charon_Material_Properties.cpp; cogenda/Genius-TCAD-Open ' +
+    'src/material/Si/Si_mob_Philips.cc; pvedu/photovoltaic photovoltaic/si.py); they disagree on r5 of F(P) ' +
+    `(${t(KLAASSEN_ELECTRON_HOLE_F.r5)} here, as in the simulators; −0.01552 in pvedu and another transcription that follows the paper)`,
+  validity:
+    'Silicon. 300 K: majority electrons and holes about 1e14–1e21 cm⁻³ (P, As, B), minority carriers about ' +
+    '1e17–1e20 cm⁻³; temperature: roughly 70/100–500 K (paper II, range from memory); extrapolated outside',
 } as const;
