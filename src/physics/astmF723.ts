@@ -25,16 +25,6 @@
  */
 import { PhysicsDomainError } from './errors';
 
-/** Citation and validity of the conversion, for the model registry. */
-export const F723_SOURCE = {
-  citation:
-    'ASTM F723-99 (now SEMI MF723), equations of W. R. Thurber, R. L. Mattis, Y. M. Liu, J. J. Filliben, ' +
-    'NBS Special Publication 400-64 (1981); coefficients checked against two public transcriptions of F723-99',
-  validity:
-    'B, P and As, uncompensated, 23 °C (accepted 290–305 K); B 1e12–1e21 cm⁻³ (1e-4–1e4 Ω·cm), ' +
-    'P 1e12–5e20 cm⁻³ (2e-4–4e3 Ω·cm), As 1e19–6e20 cm⁻³ (ρ from N only; DOPING inverts it numerically)',
-} as const;
-
 /** Dopants the conversion is defined for. */
 export type F723Species = 'B' | 'P' | 'As';
 
@@ -69,6 +59,30 @@ export const F723_VALIDITY: Readonly<Record<F723Species, { density: Interval; re
  * (our decision, no source; docs/physics.md, "Resistivity models").
  */
 export const F723_TEMPERATURE_RANGE: Interval = { min: 290, max: 305 };
+
+/**
+ * An F723 range as registry text writes it, in exponent form.
+ *
+ * @param interval - a density (cm⁻³) or resistivity (Ω·cm) range of F723_VALIDITY
+ * @returns e.g. '1e12–1e21'
+ * @example f723RangeText(F723_VALIDITY.As.density) // → '1e19–6e20'
+ */
+export function f723RangeText(interval: Interval): string {
+  const exponential = (value: number): string => value.toExponential().replace('e+', 'e');
+  return `${exponential(interval.min)}–${exponential(interval.max)}`;
+}
+
+/** Citation and validity of the conversion, for the model registry; the ranges written from the tables above. */
+export const F723_SOURCE = {
+  citation:
+    'ASTM F723-99 (now SEMI MF723), equations of W. R. Thurber, R. L. Mattis, Y. M. Liu, J. J. Filliben, ' +
+    'NBS Special Publication 400-64 (1981); coefficients checked against two public transcriptions of F723-99',
+  validity:
+    `B, P and As, uncompensated, 23 °C (accepted ${F723_TEMPERATURE_RANGE.min}–${F723_TEMPERATURE_RANGE.max} K); ` +
+    `B ${f723RangeText(F723_VALIDITY.B.density)} cm⁻³ (${f723RangeText(F723_VALIDITY.B.resistivity)} Ω·cm), ` +
+    `P ${f723RangeText(F723_VALIDITY.P.density)} cm⁻³ (${f723RangeText(F723_VALIDITY.P.resistivity)} Ω·cm), ` +
+    `As ${f723RangeText(F723_VALIDITY.As.density)} cm⁻³ (ρ from N only; DOPING inverts it numerically)`,
+} as const;
 
 /**
  * Boron, Thurber et al. (1981) / F723 eq. for resistivity from density:

@@ -8,7 +8,7 @@
  */
 import { PhysicsDomainError } from './errors';
 import { BAND_MODELS } from './bands/modelInfo';
-import { F723_SOURCE } from './astmF723';
+import { F723_SOURCE, F723_VALIDITY, f723RangeText } from './astmF723';
 import { LAYER_MODELS } from './layers/modelInfo';
 import { locationOf, type ModelInfo } from './modelInfo';
 import { MEASUREMENT_MODELS } from './measurement/modelInfo';
@@ -43,7 +43,7 @@ const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
       'counter-doping over F723\'s ranges; elsewhere F723\'s density dependence times the physics model\'s temperature and compensation dependence',
     notes:
       'ρ = ρ_phys · k(N), k = ρ_F723(N)/ρ_phys(N, 296.15 K, uncompensated), k of the dopant density only: B and P anchored, ' +
-      'other dopants (As included, whose F723 range is only 1e19–6e20 cm⁻³) k = 1. RESISTIVITY uses F723\'s ρ-from-N equation, ' +
+      `other dopants (As included, whose F723 range is only ${f723RangeText(F723_VALIDITY.As.density)} cm⁻³) k = 1. RESISTIVITY uses F723's ρ-from-N equation, ` +
       'DOPING its N-from-ρ equation, so each direction is the standard\'s own and they disagree by its stated self-consistency ' +
       '(3 % B, 4.5 % P). Outside F723\'s ranges ln k levels off smoothly (continuous value and slope). Not a mobility model.',
     equation: 'src/physics/f723Anchored.ts',

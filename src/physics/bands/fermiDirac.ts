@@ -66,10 +66,10 @@ export type FermiDiracOrder = 0.5 | -0.5;
  * only skips the exponential).
  */
 const BOLTZMANN_LIMIT = -39;
-/** Upper end of the series region (method 1). */
-const SERIES_LIMIT = -2;
-/** Lower end of the Sommerfeld region (method 3). */
-const SOMMERFELD_LIMIT = 35;
+/** Upper end of the series region (method 1); the registry citation quotes it. */
+export const SERIES_LIMIT = -2;
+/** Lower end of the Sommerfeld region (method 3); the registry citation quotes it. */
+export const SOMMERFELD_LIMIT = 35;
 /** Relative size of the first omitted term at which a series stops (2⁻⁵⁶). */
 const SERIES_TOLERANCE = 2 ** -56;
 /** Terms the series needs at most at η = SERIES_LIMIT with SERIES_TOLERANCE (21), with room. */

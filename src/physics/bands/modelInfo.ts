@@ -11,7 +11,8 @@ import { IONIZATION_MODEL_CODE } from '../ionization';
 import { BOLTZMANN_STATISTICS, FERMI_DIRAC_STATISTICS } from './statistics';
 import { BANDGAP_NARROWING_MODELS } from './bandgapNarrowing';
 import { DOS_INTRINSIC_MODEL } from './intrinsicDensity';
-import { FERMI_DIRAC_TABLE_DEGREE } from './fermiDirac';
+import { FERMI_DIRAC_TABLE_DEGREE, SERIES_LIMIT, SOMMERFELD_LIMIT } from './fermiDirac';
+import { parameterText as t } from '../parameterText';
 
 const NI = 'intrinsic density ni';
 const [phosphorus, boron] = ['P', 'B'].map(
@@ -65,8 +66,8 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     name: FERMI_DIRAC_STATISTICS.name,
     citation:
       'F½ as normalised by J. S. Blakemore, Solid-State Electron. 25, 1067 (1982); computed by its alternating ' +
-      'series (η ≤ −2), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, SIAM Review 56, 385 ' +
-      `(2014)), tabulated once as Chebyshev interpolants of degree ${FERMI_DIRAC_TABLE_DEGREE} on unit intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ 35 (citations from memory); ` +
+      `series (η ≤ ${t(SERIES_LIMIT)}), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, SIAM Review 56, 385 ` +
+      `(2014)), tabulated once as Chebyshev interpolants of degree ${FERMI_DIRAC_TABLE_DEGREE} on unit intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ ${t(SOMMERFELD_LIMIT)} (citations from memory); ` +
       'checked against mpmath polylog values',
     validity:
       'parabolic bands with the densities of states of the material; any Fermi level (F½ to 1e-13 relative for ' +

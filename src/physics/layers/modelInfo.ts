@@ -1,4 +1,6 @@
 import type { ModelInfo } from '../modelInfo';
+import { parameterText as t } from '../parameterText';
+import { LAYER_INTEGRATION } from './sheetResistance';
 
 /**
  * Descriptions of the layer models (Irvin's integration, the diffusion
@@ -21,7 +23,7 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     validity:
       'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about 1e19 cm⁻³ results are approximate.',
     notes:
-      'Each depth is treated as a uniform sample of the layer dopant over the opposite-type background (incomplete ionization, compensation, default mobility model), where Irvin used his bulk resistivity curve and full ionization; depletion at the junction is ignored. Adaptive Gauss–Kronrod (7/15) quadrature, target 1e-6 relative.',
+      `Each depth is treated as a uniform sample of the layer dopant over the opposite-type background (incomplete ionization, compensation, default mobility model), where Irvin used his bulk resistivity curve and full ionization; depletion at the junction is ignored. Adaptive Gauss–Kronrod (7/15) quadrature, target ${t(LAYER_INTEGRATION.relativeTolerance)} relative.`,
     equation: 'src/physics/layers/sheetResistance.ts',
     parameterTable: 'src/physics/layers/sheetResistance.ts',
     tests: [

@@ -51,6 +51,11 @@ export const LEVINSHTEIN_2001 =
 /** As cited for ionization energies. */
 const LEVINSHTEIN_2001_LEVELS = `${LEVINSHTEIN_2001} (from memory)`;
 
+/**
+ * Ionization-energy citations. The site levels and ranges in them are quotes
+ * of the sources, not values the core computes with; the level it uses is the
+ * dopant table's (the registry notes print it from there).
+ */
 const SOURCES = {
   N:
     `effective level between the h-site (≈0.05–0.06 eV) and k-site (≈0.09–0.125 eV) donor levels (decision); ` +

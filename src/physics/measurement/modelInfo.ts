@@ -3,6 +3,8 @@
  * (models.ts), DRIFT.MODELS() and the help pages.
  */
 import type { ModelInfo } from '../modelInfo';
+import { parameterText as t } from '../parameterText';
+import { MINIMUM_DIAMETER_RATIO, THIN_LAYER_FACTOR } from './fourPoint';
 
 export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
   {
@@ -22,9 +24,9 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     quantity: 'four-point-probe sheet resistance of thin layers and circular slices',
     name: 'Smits (1958) thin-layer and finite-slice correction factors',
     citation: 'F. M. Smits, "Measurement of sheet resistivities with the four-point probe", Bell Syst. Tech. J. 37, 711 (1958) (tabulated factors recalled from memory)',
-    validity: 'thin layer (t ≪ s) on an insulator; circular slice measured at its centre along a diameter, d/s ≥ 3',
+    validity: `thin layer (t ≪ s) on an insulator; circular slice measured at its centre along a diameter, d/s ≥ ${MINIMUM_DIAMETER_RATIO}`,
     notes:
-      'Rs = (π/ln 2)·V/I ≈ 4.532·V/I for an unbounded layer; C(d/s) = π/(ln 2 + ln((d²/s² + 3)/(d²/s² − 3))) for a disc; ' +
+      `Rs = (π/ln 2)·V/I ≈ ${t(THIN_LAYER_FACTOR, 4)}·V/I for an unbounded layer; C(d/s) = π/(ln 2 + ln((d²/s² + 3)/(d²/s² − 3))) for a disc; ` +
       'thickness and diameter factors multiplied, as Smits does for thin slices.',
     equation: 'src/physics/measurement/fourPoint.ts',
     parameterTable: 'src/physics/measurement/fourPoint.ts',
