@@ -9,6 +9,9 @@
 import { existsSync, readFileSync } from 'fs';
 import { join } from 'path';
 import { MODEL_REGISTRY } from '../../src/physics/models';
+import { CATALOG, evaluate, findFunction } from '../../src/catalog';
+import { renderHelpSite } from '../../src/catalog/docs/helpPage';
+import { renderModelTable } from '../../src/catalog/docs/readme';
 
 const ROOT = join(__dirname, '..', '..');
 const REFERENCE_FOLDER = 'tests/physics/reference/';
@@ -98,5 +101,24 @@ describe('codes', () => {
     const codes = MODEL_REGISTRY.map((entry) => entry.code.toLowerCase());
     const repeated = codes.filter((code, index) => codes.indexOf(code) !== index);
     expect(repeated).toEqual([]);
+  });
+});
+
+describe('what spreadsheet users see', () => {
+  // The locations are for readers of the code: DRIFT.MODELS, the help pages and README show none of them.
+  const files = [...new Set(MODEL_REGISTRY.flatMap((entry) => [entry.equation, entry.parameterTable, ...entry.tests]))];
+  const shown = (text: string) => files.some((file) => text.includes(file));
+
+  it('DRIFT.MODELS keeps its five columns and names no file', () => {
+    const table = evaluate(findFunction('MODELS')!, []);
+    for (const row of table) {
+      expect(row).toHaveLength(5);
+      for (const cell of row) expect(shown(String(cell))).toBe(false);
+    }
+  });
+
+  it('the help pages and README’s model table name no file', () => {
+    for (const [file, html] of renderHelpSite(CATALOG)) expect([file, shown(html)]).toEqual([file, false]);
+    expect(shown(renderModelTable())).toBe(false);
   });
 });
