@@ -21,7 +21,14 @@ export type { ModelInfo };
 
 /** A mobility model's DRIFT.MODELS row: its registry entry's description. */
 function mobilityModelInfo(model: MobilityModel): ModelInfo {
-  return { code: model.code, quantity: model.quantity, name: model.name, citation: model.citation, validity: model.validity, notes: model.notes };
+  return {
+    code: model.code,
+    quantity: model.quantity,
+    name: model.name,
+    citation: model.citation,
+    validity: model.validity,
+    notes: model.notes,
+  };
 }
 
 const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
@@ -32,7 +39,8 @@ const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
     citation: `${F723_SOURCE.citation}; physics as for ${mobilityModelsOf(SILICON.code)[0].code}`,
     validity:
       'Silicon, any dopant, temperature and counter-doping the physics model covers; equals F723 (B, P) at 296.15 K without ' +
-      'counter-doping over F723\'s ranges; elsewhere F723\'s density dependence times the physics model\'s temperature and compensation dependence',
+      'counter-doping over F723\'s ranges; elsewhere F723\'s density dependence times the physics model\'s ' +
+        'temperature and compensation dependence',
     notes:
       'ρ = ρ_phys · k(N), k = ρ_F723(N)/ρ_phys(N, 296.15 K, uncompensated), k of the dopant density only: B and P anchored, ' +
       'other dopants (As included, whose F723 range is only 1e19–6e20 cm⁻³) k = 1. RESISTIVITY uses F723\'s ρ-from-N equation, ' +

@@ -37,7 +37,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
   {
     code: CANALI_MODEL_CODE,
     quantity: 'field exponent of the velocity–field relation, Si',
-    name: `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ${canaliExponentAt300K('hole').toFixed(3)} (h), held constant`,
+    name: `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ` +
+      `${canaliExponentAt300K('hole').toFixed(3)} (h), held constant`,
     citation: CANALI_SOURCE.citation,
     validity: CANALI_SOURCE.validity,
     notes:
@@ -54,7 +55,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     notes:
       `${quayParameterText()} (read in Palankovski 2000, Table 3.31). Si electrons 77–1000 K, Si holes from ` +
       `${Math.ceil(SILICON_HOLE_LAW_CROSSING_K)} K (below, Quay’s hole law would exceed the electron one); Ge, GaAs 20–1000 K. ` +
-      'Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs β = 2 (e), 1 (h) from Caughey–Thomas, not fitted to these materials. ' +
+      'Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs β = 2 (e), 1 (h) from ' +
+        'Caughey–Thomas, not fitted to these materials. ' +
       (QUAY_GALLIUM_ARSENIDE.limitations ?? ''),
   },
   {
