@@ -147,7 +147,7 @@ export const carrier: ParameterSpec<CarrierRole> = {
   }),
   details:
     `${CARRIER_SPELLINGS} majority and minority name the dopant’s own carrier type and the other one. With ` +
-      `a blank model the mobility model ` +
+    `a blank model the mobility model ` +
     'follows the carrier’s role in the sample by net doping (counter_doping included): in Si the minority carrier gets ' +
     `${SILICON_MINORITY_MOBILITY_MODEL} (minority-carrier physics), the majority carrier ${defaultMobilityModel(SILICON)}; ` +
     'other materials use their own fit for both.',

@@ -60,8 +60,8 @@ export const BAND_MODELS: readonly ModelInfo[] = [
       'F½ as normalised by J. S. Blakemore, Solid-State Electron. 25, 1067 (1982); computed by its alternating ' +
       'series (η ≤ −2), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, SIAM Review 56, 385 ' +
       `(2014)), tabulated once as Chebyshev interpolants of degree ${FERMI_DIRAC_TABLE_DEGREE} on unit ` +
-        `intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ ` +
-        `35 (citations from memory); ` +
+      `intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ ` +
+      `35 (citations from memory); ` +
       'checked against mpmath polylog values',
     validity:
       'parabolic bands with the densities of states of the material; any Fermi level (F½ to 1e-13 relative for ' +

@@ -56,7 +56,7 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
       `${quayParameterText()} (read in Palankovski 2000, Table 3.31). Si electrons 77–1000 K, Si holes from ` +
       `${Math.ceil(SILICON_HOLE_LAW_CROSSING_K)} K (below, Quay’s hole law would exceed the electron one); Ge, GaAs 20–1000 K. ` +
       'Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs β = 2 (e), 1 (h) from ' +
-        'Caughey–Thomas, not fitted to these materials. ' +
+      'Caughey–Thomas, not fitted to these materials. ' +
       (QUAY_GALLIUM_ARSENIDE.limitations ?? ''),
   },
   {

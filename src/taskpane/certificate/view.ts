@@ -139,9 +139,9 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     spreadSwitch,
     'Show the model spread: lowest and highest doping over the published models',
     'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a ' +
-      'measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
+    'measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
     'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever ' +
-      'doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
+    'doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
   );
   const radialLimit = element(
     doc,
