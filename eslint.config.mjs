@@ -48,6 +48,11 @@ const layerZones = [
     message: 'The catalog imports physics only through its barrel, src/physics/index.ts: export what you need from there.',
   },
   {
+    target: './src/text',
+    from: ['./src/physics', './src/catalog', ...FRONT_ENDS],
+    message: 'src/text (prose and other text helpers) is a leaf every layer may import: it imports nothing from them.',
+  },
+  {
     target: './src',
     from: ['./dev', './tests', './bench'],
     message: 'src/ never imports development tooling, tests or benchmarks.',

@@ -69,7 +69,12 @@ export const INTRINSIC_MODELS = unique([
 export const IONIZATION_MODELS = MATERIALS.map((host) => (host === SILICON ? IONIZATION_MODEL_CODE : ionizationModelCode(host)));
 
 /** What every equilibrium result rests on: ionization, carrier statistics, silicon's default ni. */
-export const EQUILIBRIUM_MODELS = unique([IONIZATION_MODEL_CODE, FERMI_DIRAC_STATISTICS.code, intrinsicModelCodes(SILICON)[0], ...IONIZATION_MODELS]);
+export const EQUILIBRIUM_MODELS = unique([
+  IONIZATION_MODEL_CODE,
+  FERMI_DIRAC_STATISTICS.code,
+  intrinsicModelCodes(SILICON)[0],
+  ...IONIZATION_MODELS,
+]);
 
 /** Mobility models of every material, silicon's default first (DRIFT.MOBILITY). */
 export const MOBILITY_MODELS = allCodes(mobilityModelCodes);
@@ -82,7 +87,10 @@ export const DEFAULT_MOBILITY_MODELS = unique(MATERIALS.map((host) => mobilityMo
 
 /** Sources of the tabulated saturation velocities (DRIFT.VSAT). */
 export const SATURATION_VELOCITY_MODELS = unique(
-  HIGH_FIELD_TABLES.flatMap((table) => [table.electron, table.hole]).flatMap((entry) => ('modelCode' in entry ? [entry.modelCode, ...(entry.fieldExponentModelCode ? [entry.fieldExponentModelCode] : [])] : [])),
+  HIGH_FIELD_TABLES.flatMap((table) => [table.electron, table.hole]).flatMap((entry) => ('modelCode' in entry ? [
+    entry.modelCode,
+    ...(entry.fieldExponentModelCode ? [entry.fieldExponentModelCode] : []),
+  ] : [])),
 );
 
 /** The velocity–field law with its tables and the low-field mobility it starts from (DRIFT.VELOCITY, DRIFT.CURRENTDENSITY). */

@@ -28,6 +28,7 @@ import {
 import { allCodes, perMaterial } from './citedModels';
 import { codeParameter, optionalNumber, requiredCode, requiredNumber } from './parameters';
 import type { ParameterSpec } from './types';
+import { prose } from '../text/prose';
 
 /** Temperatures the core's solvers are built and tested for. */
 export const TEMPERATURE_RANGE_K = { min: 20, max: 1000 } as const;
@@ -145,7 +146,8 @@ export const carrier: ParameterSpec<CarrierRole> = {
     aliases: CARRIER_ALIASES,
   }),
   details:
-    `${CARRIER_SPELLINGS} majority and minority name the dopant’s own carrier type and the other one. With a blank model the mobility model ` +
+    `${CARRIER_SPELLINGS} majority and minority name the dopant’s own carrier type and the other one. With ` +
+    `a blank model the mobility model ` +
     'follows the carrier’s role in the sample by net doping (counter_doping included): in Si the minority carrier gets ' +
     `${SILICON_MINORITY_MOBILITY_MODEL} (minority-carrier physics), the majority carrier ${defaultMobilityModel(SILICON)}; ` +
     'other materials use their own fit for both.',
@@ -168,7 +170,8 @@ function materialModelParameter(
   return {
     ...codeParameter<string>({
       name: 'model',
-      description: blank?.description ?? `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s default. Codes by material on the help page.`,
+      description: blank?.description ?? `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s ` +
+        `default. Codes by material on the help page.`,
       choices: () => codes,
       defaultCode: '',
       resolve: (code) => code,
@@ -183,7 +186,8 @@ export const MOBILITY_DEFAULT_TEXT = `${SILICON_MINORITY_MOBILITY_MODEL} for Si 
 
 /** A mobility model argument: a blank chooses per carrier (physics defaultMobilityModelFor). */
 export const mobilityModel = materialModelParameter('Mobility model', mobilityModelCodes, {
-  description: `Mobility model, e.g. ${defaultMobilityModel(SILICON)}; blank: ${SILICON_MINORITY_MOBILITY_MODEL} for Si minority carriers, else the material’s default (see help).`,
+  description: prose`Mobility model, e.g. ${defaultMobilityModel(SILICON)}; blank:
+    ${SILICON_MINORITY_MOBILITY_MODEL} for Si minority carriers, else the material’s default (see help).`,
   defaultText: MOBILITY_DEFAULT_TEXT,
   details:
     `Blank: a carrier that is the sample’s minority carrier by net doping (counter_doping included) gets ` +
@@ -227,7 +231,12 @@ export function sampleOf(
 }
 
 /** Equilibrium of a sample with donors and acceptors as generic dopants (ELECTRONS, HOLES, FERMILEVEL). */
-export function genericEquilibrium(materialValue: Material, temperatureValue: number, donorDensity: number, acceptorDensity: number): Equilibrium {
+export function genericEquilibrium(
+  materialValue: Material,
+  temperatureValue: number,
+  donorDensity: number,
+  acceptorDensity: number,
+): Equilibrium {
   const dopants: DopantDensity[] = [
     { dopant: genericDopant(materialValue, 'donor'), density: donorDensity },
     { dopant: genericDopant(materialValue, 'acceptor'), density: acceptorDensity },

@@ -106,7 +106,9 @@ function callArgument(text: string): CallArgument {
  * @param formula - e.g. '=DRIFT.DOPING(10,"B")'
  * @returns the name as written and one entry per written argument, or null when the formula is not one call
  *   (e.g. '=DRIFT.DOPING(1)+DRIFT.DOPING(2)', '=DRIFT.DOPING(10,"B")*2') or its brackets or quotes do not balance
- * @example readCall('=DRIFT.DOPING(10,,{1,2})')?.arguments // [{ kind: 'value', value: 10 }, { kind: 'blank' }, { kind: 'array', rows: [[1, 2]] }]
+ * @example
+ * const call = readCall('=DRIFT.DOPING(10,,{1,2})');
+ * call?.arguments // [{ kind: 'value', value: 10 }, { kind: 'blank' }, { kind: 'array', rows: [[1, 2]] }]
  */
 export function readCall(formula: string): CallParts | null {
   const match = /^=([A-Za-z_][\w.]*)\((.*)\)$/.exec(formula.trim());

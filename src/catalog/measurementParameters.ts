@@ -45,7 +45,16 @@ export function numberList(options: ListOptions): ParameterSpec<readonly number[
     if (values.length === 0) throw new InputError(`${name} holds no values: give one or more numbers (blank cells are skipped)`);
     return values;
   };
-  return { name, type: 'number', unit, description, optional: false, zeroIsBlank: excludesZero(options), parse: (value) => reduce([value]), reduce };
+  return {
+    name,
+    type: 'number',
+    unit,
+    description,
+    optional: false,
+    zeroIsBlank: excludesZero(options),
+    parse: (value) => reduce([value]),
+    reduce,
+  };
 }
 
 /** Probe voltage and current, shared by DRIFT.FOURPOINT and DRIFT.FOURPOINTRS. */

@@ -103,7 +103,9 @@ const QUANTITIES: Readonly<Record<ModelQuantity, QuantityEntry>> = {
 export const MODEL_QUANTITIES = Object.keys(QUANTITIES) as readonly ModelQuantity[];
 
 /** "resistivity: resistivity models (RESISTIVITY, …); mobility: …", for help. */
-export const MODEL_QUANTITY_LIST = MODEL_QUANTITIES.map((quantity) => `${quantity}: ${QUANTITIES[quantity].what} (${QUANTITIES[quantity].takenBy.join(', ')})`).join('; ');
+export const MODEL_QUANTITY_LIST = MODEL_QUANTITIES.map(
+  (quantity) => `${quantity}: ${QUANTITIES[quantity].what} (${QUANTITIES[quantity].takenBy.join(', ')})`,
+).join('; ');
 
 /** The functions whose model argument takes a quantity's codes, as help names them. */
 export function functionsTaking(quantity: ModelQuantity): readonly string[] {
@@ -154,7 +156,11 @@ export function modelCodesFor(quantity: ModelQuantity, host: Material, dopantTex
   return codes;
 }
 
-/** Codes of the models that apply to a quantity for a material (typed code, blank = silicon/default material) and dopant (typed code, blank = any dopant); default first. Throws the catalog's InputError (clear message naming what is allowed) for an unknown quantity, material or dopant. */
+/**
+ * Codes of the models that apply to a quantity for a material (typed code, blank = silicon/default material) and
+ * dopant (typed code, blank = any dopant); default first. Throws the catalog's InputError (clear message naming
+ * what is allowed) for an unknown quantity, material or dopant.
+ */
 export function applicableModelCodes(quantity: ModelQuantity, material?: string, dopant?: string): readonly string[] {
   const parsedQuantity = modelQuantity.parse(quantity);
   const host = materialParameter.parse(material ?? null);
@@ -162,7 +168,9 @@ export function applicableModelCodes(quantity: ModelQuantity, material?: string,
   return modelCodesFor(parsedQuantity, host, dopantText);
 }
 
-const QUANTITY_OF_PARAMETER = new Map<ParameterSpec, ModelQuantity>(MODEL_QUANTITIES.map((quantity) => [QUANTITIES[quantity].parameter, quantity]));
+const QUANTITY_OF_PARAMETER = new Map<ParameterSpec, ModelQuantity>(
+  MODEL_QUANTITIES.map((quantity) => [QUANTITIES[quantity].parameter, quantity]),
+);
 
 /** The quantity whose codes a catalog parameter takes (it is one of the shared `model` arguments), or undefined. */
 export function modelQuantityOfParameter(parameter: ParameterSpec): ModelQuantity | undefined {

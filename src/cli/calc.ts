@@ -64,7 +64,13 @@ function readFormulas(file: string, readStdin: () => string): Formula[] {
     text = readFileSync(file, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    throw new CliFailure(code === 'ENOENT' ? `${file}: no such file` : code === 'EISDIR' ? `${file} is a folder, not a file of formulas` : `${file}: cannot be read (${code ?? 'error'})`);
+    throw new CliFailure(
+      code === 'ENOENT'
+        ? `${file}: no such file`
+        : code === 'EISDIR'
+          ? `${file} is a folder, not a file of formulas`
+          : `${file}: cannot be read (${code ?? 'error'})`,
+    );
   }
   return formulasOfText(text, file);
 }
@@ -93,7 +99,12 @@ const readProcessStdin = () => readFileSync(0, 'utf8');
  * @returns 0 when no formula's whole result is an error, 1 when at least one is; CliFailure (2) when it cannot run
  * @example runCalc(['DRIFT.SHEETRES(1,10)', 'DRIFT.SHEETRES(2,10)'], {}, output) // prints 1000 and 500, returns 0
  */
-export function runCalc(formulas: readonly string[], options: CalcOptions, output: Output, readStdin: () => string = readProcessStdin): number {
+export function runCalc(
+  formulas: readonly string[],
+  options: CalcOptions,
+  output: Output,
+  readStdin: () => string = readProcessStdin,
+): number {
   const style: NumberStyle = { digits: parseDigits(options.digits) };
   const fromStdin = formulas.length === 1 && formulas[0] === '-';
   if (options.file !== undefined && formulas.length > 0) {
@@ -102,7 +113,8 @@ export function runCalc(formulas: readonly string[], options: CalcOptions, outpu
   let list: Formula[];
   if (options.file !== undefined || fromStdin) {
     list = readFormulas(options.file ?? '-', readStdin);
-    if (list.length === 0) throw new CliFailure(`${options.file === undefined || options.file === '-' ? 'stdin' : options.file} holds no formulas (blank lines and # comment lines are skipped)`);
+    if (list.length === 0) throw new CliFailure(`${options.file === undefined || options.file === '-' ? 'stdin' : options.file} ` +
+      `holds no formulas (blank lines and # comment lines are skipped)`);
   } else {
     if (formulas.length === 0) throw new CliFailure('give a formula, several formulas, --file <file>, or - to read formulas from stdin');
     list = formulas.map((text, i) => ({ text, label: `formula ${i + 1}` }));

@@ -29,7 +29,9 @@ function shownValue(cell: ExcelJS.Cell, decimals: number): string {
 
 /** An input as printed: large and small numbers in exponent form (1e+20), others as they are. */
 function inputText(value: ExcelJS.CellValue): string {
-  if (typeof value === 'number') return value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-3) ? value.toExponential() : String(value);
+  if (typeof value === 'number') {
+    return value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-3) ? value.toExponential() : String(value);
+  }
   if (typeof value === 'string' || typeof value === 'boolean') return formatElement(value);
   return '';
 }
@@ -88,14 +90,16 @@ export async function runDemo(file: string, output: Output, options: { readonly 
   output.out(`${DEMO_COMPANY}: diffused-bar resistor over −40…150 °C (sheet "${SHEETS.sweep}")`);
   output.out(INVENTED_NOTE);
   output.out('');
-  output.out('Inputs (a uniform bar at an effective doping; R = DRIFT.RESISTOR(DRIFT.RESISTIVITY(doping, dopant, T), length, width, thickness)):');
+  output.out('Inputs (a uniform bar at an effective doping; R = DRIFT.RESISTOR(DRIFT.RESISTIVITY(doping, ' +
+    'dopant, T), length, width, thickness)):');
   inputs.forEach(output.out);
   output.out('');
   sweep.forEach(output.out);
   output.out('');
   output.out(
     values
-      ? `wrote ${file} (values form): ${summary.sheets.length} sheets, ${summary.formulas} formulas as plain values, listed on sheet "${values.sheet}"`
+      ? `wrote ${file} (values form): ${summary.sheets.length} sheets, ${summary.formulas} formulas as ` +
+        `plain values, listed on sheet "${values.sheet}"`
       : `wrote ${file}: ${summary.sheets.length} sheets, ${summary.formulas} formulas (live, with cached results)`,
   );
   for (const problem of summary.problems) {

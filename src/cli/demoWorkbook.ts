@@ -134,15 +134,20 @@ function aboutSheet(workbook: ExcelJS.Workbook, valuesForm: boolean): void {
   const lines = [
     '',
     'What this workbook shows (all figures invented):',
-    `• ${SHEETS.wafers}: each supplier wafer's ordered resistivity window turned into a doping window with one spilled DRIFT.DOPING per row, the measured value's doping, and a window check.`,
-    `• ${SHEETS.sweep}: a boron-diffused bar resistor's value from −40 to 150 °C, as ONE spilled formula DRIFT.RESISTOR(DRIFT.RESISTIVITY(…)).`,
+    `• ${SHEETS.wafers}: each supplier wafer's ordered resistivity window turned into a doping window with ` +
+      `one spilled DRIFT.DOPING per row, the measured value's doping, and a window check.`,
+    `• ${SHEETS.sweep}: a boron-diffused bar resistor's value from −40 to 150 °C, as ONE spilled formula ` +
+      `DRIFT.RESISTOR(DRIFT.RESISTIVITY(…)).`,
     `• ${SHEETS.table}: resistivity for a doping column against a temperature row, from one spilled DRIFT.RESISTIVITY.`,
     `• ${SHEETS.models}: DRIFT.MODELS(), every model code with its citation and validity range.`,
     '',
     valuesForm
-      ? 'Yellow cells are inputs; blue cells hold the results of formulas as plain values (this is the values form); the formulas are listed on sheet "Formulas". Editing an input here updates nothing: use the live demo (driftcell demo without --values).'
+      ? 'Yellow cells are inputs; blue cells hold the results of formulas as plain values (this is the ' +
+        'values form); the formulas are listed on sheet "Formulas". Editing an input here updates nothing: ' +
+        'use the live demo (driftcell demo without --values).'
       : 'Yellow cells are inputs; blue cells hold live formulas (with cached results), so editing an input and recalculating updates them.',
-    'The resistor is treated as a uniform bar at an effective doping: a first sizing estimate, not an integration over a diffusion profile.',
+    'The resistor is treated as a uniform bar at an effective doping: a first sizing estimate, not an ' +
+      'integration over a diffusion profile.',
   ];
   lines.forEach((text, i) => (sheet.getCell(3 + i, 1).value = text));
   const countRow = 4 + lines.length;
@@ -229,7 +234,11 @@ function tableSheet(workbook: ExcelJS.Workbook): void {
   formula(sheet.getCell(headerRow, 2), `B${headerRow - 1}:${lastColumn}${headerRow - 1}+${CELSIUS_TO_KELVIN}`, '0.00');
   spillArea(sheet, headerRow, 3, 1, TABLE_CELSIUS.length - 1, '0.00');
   TABLE_DOPING.forEach((n, i) => input(sheet.getCell(firstRow + i, 1), n, '0.0E+00'));
-  formula(sheet.getCell(firstRow, 2), `DRIFT.RESISTIVITY(A${firstRow}:A${lastRow},$B$3,B${headerRow}:${lastColumn}${headerRow})`, '0.000E+00');
+  formula(
+    sheet.getCell(firstRow, 2),
+    `DRIFT.RESISTIVITY(A${firstRow}:A${lastRow},$B$3,B${headerRow}:${lastColumn}${headerRow})`,
+    '0.000E+00',
+  );
   spillArea(sheet, firstRow, 2, TABLE_DOPING.length, TABLE_CELSIUS.length, '0.000E+00');
   sheet.getColumn(1).width = 22;
   for (let c = 2; c <= 1 + TABLE_CELSIUS.length; c++) sheet.getColumn(c).width = 12;

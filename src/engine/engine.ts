@@ -80,7 +80,10 @@ function limitResultSizes(): void {
   const ArraySizePredictor = internals._crudOperations.operations.arraySizePredictor.constructor as typeof ArraySizePredictorClass;
   probe.destroy();
   const predict = ArraySizePredictor.prototype.checkArraySize;
-  ArraySizePredictor.prototype.checkArraySize = function checkedArraySize(this: ArraySizePredictorClass, ...args: Parameters<typeof predict>) {
+  ArraySizePredictor.prototype.checkArraySize = function checkedArraySize(
+    this: ArraySizePredictorClass,
+    ...args: Parameters<typeof predict>
+  ) {
     const size = predict.apply(this, args);
     if (!size.isRef && size.width * size.height > MAX_RESULT_CELLS) throw new ResultTooLarge(args[1], size.height, size.width);
     return size;
@@ -103,7 +106,10 @@ function limitResultSizes(): void {
 export function predictedResultSize(engine: HyperFormula, text: string, sheetId = 0): { rows: number; columns: number } | undefined {
   // Internal like limitResultSizes: extractTemporaryFormula is how calculateFormula itself parses.
   const internals = engine as unknown as {
-    extractTemporaryFormula(formula: string, sheetId: number): { ast?: Parameters<ArraySizePredictorClass['checkArraySize']>[0]; address: SimpleCellAddress };
+    extractTemporaryFormula(
+      formula: string,
+      sheetId: number,
+    ): { ast?: Parameters<ArraySizePredictorClass['checkArraySize']>[0]; address: SimpleCellAddress };
     _crudOperations: { operations: { arraySizePredictor: ArraySizePredictorClass } };
   };
   const { ast, address } = internals.extractTemporaryFormula(text, sheetId);
@@ -173,7 +179,8 @@ interface ParsedDependency {
 }
 
 function referenceText(dep: ParsedDependency): string | undefined {
-  if (dep.dependency !== undefined) return `cell ${cellName(dep.dependency.row, dep.dependency.col)}${dep.dependency.sheet ? ' of another sheet' : ''}`;
+  if (dep.dependency !== undefined) return `cell ` +
+    `${cellName(dep.dependency.row, dep.dependency.col)}${dep.dependency.sheet ? ' of another sheet' : ''}`;
   const { start, end } = dep;
   if (start === undefined || end === undefined) return undefined;
   if (start.row !== undefined && start.col !== undefined && end.row !== undefined && end.col !== undefined) {
@@ -190,8 +197,12 @@ function referenceText(dep: ParsedDependency): string | undefined {
  */
 function cellReferences(engine: HyperFormula, text: string): string[] {
   // Internal like checkFormulaResultSize: the parser's dependency list is the one exact account of references.
-  const internals = engine as unknown as { extractTemporaryFormula(formula: string, sheetId: number): { dependencies?: readonly ParsedDependency[] } };
-  const found = (internals.extractTemporaryFormula(text, 0).dependencies ?? []).map(referenceText).filter((t): t is string => t !== undefined);
+  const internals = engine as unknown as {
+    extractTemporaryFormula(formula: string, sheetId: number): { dependencies?: readonly ParsedDependency[] };
+  };
+  const found = (internals.extractTemporaryFormula(text, 0).dependencies ?? [])
+    .map(referenceText)
+    .filter((t): t is string => t !== undefined);
   return [...new Set(found)];
 }
 
@@ -221,14 +232,23 @@ export function evaluateFormula(formula: string): FormulaResult {
           code: '#REF!',
           message:
             `the formula refers to ${references.join(', ')}, but a formula evaluated on its own has no workbook and no cells ` +
-            '(a reference would read as a blank cell, 0). Write the value in its place, or put the formula in a workbook and run driftcell recalc',
+            '(a reference would read as a blank cell, 0). Write the value in its place, or put the formula ' +
+              'in a workbook and run driftcell recalc',
         };
       }
       predictedResultSize(engine, text);
       value = engine.calculateFormula(text, 0);
     } catch (e) {
-      if (e instanceof ResultTooLarge) return { kind: 'error', code: '#VALUE!', message: e.message.replace(/^the formula in \S+ gives/, 'the formula gives') };
-      if (e instanceof RangeError) return { kind: 'error', code: '#VALUE!', message: 'the formula is too long or too deeply nested for the headless engine' };
+      if (e instanceof ResultTooLarge) return {
+        kind: 'error',
+        code: '#VALUE!',
+        message: e.message.replace(/^the formula in \S+ gives/, 'the formula gives'),
+      };
+      if (e instanceof RangeError) return {
+        kind: 'error',
+        code: '#VALUE!',
+        message: 'the formula is too long or too deeply nested for the headless engine',
+      };
       throw e;
     }
     return Array.isArray(value) ? value.map((row) => row.map(toResultElement)) : toResultElement(value);

@@ -70,7 +70,8 @@ export async function preparePackage(bytes: Buffer): Promise<PreparedPackage> {
       const id = ATTRIBUTE('r:id').exec(tag)?.[1];
       if ([...name].length > MAX_SHEET_NAME_LENGTH) {
         throw new ForeignPackageRefused(
-          `sheet name "${name}" has ${[...name].length} characters; Excel allows at most ${MAX_SHEET_NAME_LENGTH}: rename the sheet and save again`,
+          `sheet name "${name}" has ${[...name].length} characters; Excel allows at most ` +
+            `${MAX_SHEET_NAME_LENGTH}: rename the sheet and save again`,
         );
       }
       if (id !== undefined) sheetNames.set(id, name);
@@ -124,7 +125,8 @@ export async function preparePackage(bytes: Buffer): Promise<PreparedPackage> {
       if (DRAWING_TYPE.test(type) && (await drawingHasChart(zip, part))) {
         const charts = await chartCount(zip, part);
         const sheet = sheetOfPart.get(sourcePart);
-        notices.push(`${sheet !== undefined ? `sheet "${sheet}": ` : ''}${charts} chart${charts === 1 ? '' : 's'} not carried into the copy`);
+        notices.push(`${sheet !== undefined ? `sheet "${sheet}": ` : ''}${charts} ` +
+          `chart${charts === 1 ? '' : 's'} not carried into the copy`);
         rewritten = rewritten.replace(tag, '');
         const id = ATTRIBUTE('Id').exec(tag)?.[1];
         await unhookDrawing(zip, sourcePart, id);
@@ -164,7 +166,8 @@ export async function preparePackage(bytes: Buffer): Promise<PreparedPackage> {
       let next = types;
       for (const [from, to] of renames) next = next.split(`PartName="/${from}"`).join(`PartName="/${to}"`);
       if (!/Extension="vml"/.test(next) && [...renames.values()].some((p) => p.endsWith('.vml'))) {
-        next = next.replace('<Default ', '<Default Extension="vml" ContentType="application/vnd.openxmlformats-officedocument.vmlDrawing"/><Default ');
+        next = next.replace('<Default ', '<Default Extension="vml" ' +
+          'ContentType="application/vnd.openxmlformats-officedocument.vmlDrawing"/><Default ');
       }
       zip.file('[Content_Types].xml', next);
     }

@@ -98,7 +98,10 @@ export function engineFormula(stored: string): string {
 export function storedFormula(text: string): string {
   const body = text.startsWith('=') ? text.slice(1) : text;
   return segments(body)
-    .map((part) => (part.quoted ? part.text : part.text.replace(DRIFT_ANY_FORM, (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`)))
+    .map((part) => (part.quoted ? part.text : part.text.replace(
+      DRIFT_ANY_FORM,
+      (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`,
+    )))
     .join('');
 }
 
@@ -111,6 +114,10 @@ export function storedFormula(text: string): string {
 export function displayFormula(stored: string): string {
   const body = stored.startsWith('=') ? stored.slice(1) : stored;
   return `=${segments(body)
-    .map((part) => (part.quoted ? part.text : part.text.replace(BUILTIN_PREFIX, '').replace(DRIFT_ANY_FORM, (_m, name: string) => `DRIFT.${name.toUpperCase()}`)))
+    .map((part) =>
+      part.quoted
+        ? part.text
+        : part.text.replace(BUILTIN_PREFIX, '').replace(DRIFT_ANY_FORM, (_m, name: string) => `DRIFT.${name.toUpperCase()}`),
+    )
     .join('')}`;
 }

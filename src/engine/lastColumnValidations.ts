@@ -30,7 +30,8 @@ export function lastColumnValidationsAsRanges(workbook: ExcelJS.Workbook): void 
     rows.sort((a, b) => a.row - b.row);
     for (let i = 0; i < rows.length; ) {
       let j = i;
-      while (j + 1 < rows.length && rows[j + 1].row === rows[j].row + 1 && JSON.stringify(rows[j + 1].rule) === JSON.stringify(rows[i].rule)) j++;
+      const sameRule = (k: number) => JSON.stringify(rows[k].rule) === JSON.stringify(rows[i].rule);
+      while (j + 1 < rows.length && rows[j + 1].row === rows[j].row + 1 && sameRule(j + 1)) j++;
       model[`${LAST_COLUMN}${rows[i].row}:${LAST_COLUMN}${rows[j].row}`] = rows[i].rule;
       i = j + 1;
     }

@@ -32,7 +32,9 @@ function escaped(name: string): string {
  * @param value - the engine's value of the cell
  * @param formula - the cell's formula as the engine has it (`=…`)
  * @returns a reason for the user, e.g. "the headless engine has no INDIRECT"
- * @example unevaluableReason(engine, nameError('Function name INDIRECT not recognized.'), '=INDIRECT("A1")') // 'the headless engine has no INDIRECT'
+ * @example
+ * const error = nameError('Function name INDIRECT not recognized.');
+ * unevaluableReason(engine, error, '=INDIRECT("A1")') // 'the headless engine has no INDIRECT'
  */
 export function unevaluableReason(engine: HyperFormula, value: CellValue, formula: string): string | undefined {
   if (!(value instanceof DetailedCellError)) return undefined;

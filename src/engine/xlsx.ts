@@ -129,7 +129,9 @@ export async function loadWorkbook(bytes: Buffer): Promise<ExcelJS.Workbook> {
     checkPackage(bytes);
   } catch (e) {
     if (e instanceof PackageRejected) {
-      throw new WorkbookReadError(e.reason === 'limit' ? `too large to recalculate (${e.message})` : `not an .xlsx workbook (${e.message})`);
+      throw new WorkbookReadError(
+        e.reason === 'limit' ? `too large to recalculate (${e.message})` : `not an .xlsx workbook (${e.message})`,
+      );
     }
     throw e;
   }
@@ -213,7 +215,8 @@ export async function readWorkbookFile(path: string): Promise<ExcelJS.Workbook> 
     // Refused before reading: the file would be held in memory whole.
     const { size } = await stat(path);
     if (size > MAX_PACKAGE_BYTES) {
-      throw new WorkbookReadError(`${path}: too large to recalculate (it is ${(size / 2 ** 20).toFixed(1)} MB, more than the ${MAX_PACKAGE_BYTES / 2 ** 20} MB Driftcell reads)`);
+      throw new WorkbookReadError(`${path}: too large to recalculate (it is ${(size / 2 ** 20).toFixed(1)} ` +
+        `MB, more than the ${MAX_PACKAGE_BYTES / 2 ** 20} MB Driftcell reads)`);
     }
     bytes = await readFile(path);
   } catch (e) {
@@ -344,7 +347,10 @@ function mergedCellsSpillError(): DetailedCellError {
  * @returns sheets, formula count, where arrays were placed, and every cell that shows an error
  * @example const summary = recalculateWorkbook(await readWorkbookFile('in.xlsx'))
  */
-export function recalculateWorkbook(workbook: ExcelJS.Workbook, options: { onPlaced?: (placed: number, total: number) => void } = {}): RecalcSummary {
+export function recalculateWorkbook(
+  workbook: ExcelJS.Workbook,
+  options: { onPlaced?: (placed: number, total: number) => void } = {},
+): RecalcSummary {
   const dynamic = DYNAMIC_ANCHORS.get(workbook);
   // A workbook not read by loadWorkbook: nothing says which arrays are legacy, so all count as spills.
   const inputs = workbook.worksheets.map((worksheet) =>
@@ -455,7 +461,10 @@ function cachedContent(cell: ExcelJS.Cell): RawCellContent {
  * its dependents and the rest of the workbook still recalculate. A result
  * beyond MAX_RESULT_CELLS refuses the workbook, naming the cell.
  */
-function buildWorkbookEngine(inputs: readonly SheetInput[], names: { name: string; expression: string }[]): { engine: HyperFormula; kept: Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }> } {
+function buildWorkbookEngine(
+  inputs: readonly SheetInput[],
+  names: { name: string; expression: string }[],
+): { engine: HyperFormula; kept: Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }> } {
   const kept = new Map<FormulaCell, { sheet: string; formula: FormulaCell; reason: string }>();
   const sheets = () => Object.fromEntries(inputs.map((input) => [input.name, input.content]));
   const keep = (input: SheetInput, formula: FormulaCell, reason: string) => {
@@ -507,7 +516,9 @@ const MAX_KEEP_ROUNDS = 8;
 /** Whether the file's cached value is already the error the engine gives (then recalculating changes nothing). */
 function cachedIsSameError(cell: ExcelJS.Cell, value: CellValue): boolean {
   const result = (cell.value as ExcelJS.CellFormulaValue).result;
-  return value instanceof DetailedCellError && typeof result === 'object' && result !== null && 'error' in result && result.error === value.value;
+  return (
+    value instanceof DetailedCellError && typeof result === 'object' && result !== null && 'error' in result && result.error === value.value
+  );
 }
 
 /**
@@ -531,7 +542,11 @@ function withStackUsed<T>(frames: number, run: () => T): T {
  * Finds the formulas that overflow the engine's stack on their own (parsing
  * or evaluating them over empty sheets of the same names) and keeps them.
  */
-function keepOverflowingFormulas(inputs: readonly SheetInput[], keep: (input: SheetInput, formula: FormulaCell, reason: string) => void, reserve: number): void {
+function keepOverflowingFormulas(
+  inputs: readonly SheetInput[],
+  keep: (input: SheetInput, formula: FormulaCell, reason: string) => void,
+  reserve: number,
+): void {
   const probe = createEngine(Object.fromEntries(inputs.map((input) => [input.name, []])));
   try {
     for (const [index, input] of inputs.entries()) {
@@ -596,7 +611,10 @@ function legacyArrayRange(input: SheetInput, formula: FormulaCell, box: Box, res
 export function legacyArrayFill(values: readonly (readonly CellValue[])[], rows: number, columns: number): CellValue[][] {
   const resultRows = values.length;
   const resultColumns = values[0]?.length ?? 0;
-  const notAvailable = new DetailedCellError(new CellError(ErrorType.NA, 'the legacy array formula’s range is larger than its result'), fileErrorText(ErrorType.NA));
+  const notAvailable = new DetailedCellError(
+    new CellError(ErrorType.NA, 'the legacy array formula’s range is larger than its result'),
+    fileErrorText(ErrorType.NA),
+  );
   return Array.from({ length: rows }, (_, r) =>
     Array.from({ length: columns }, (_, c) => {
       const sourceRow = resultRows === 1 ? 0 : r;

@@ -74,14 +74,22 @@ function call(name: string, args: Readonly<Record<string, OptionValue>>, optionN
   const [[result]] = evaluate(spec, values);
   if (isFailure(result)) {
     // The catalog names its arguments (doping_min); the library user typed options (dopingMin).
-    const message = Object.entries(optionNames).reduce((text, [parameter, option]) => text.replace(new RegExp(`\\b${parameter}\\b`, 'g'), option), result.message);
+    const message = Object.entries(optionNames).reduce(
+      (text, [parameter, option]) => text.replace(new RegExp(`\\b${parameter}\\b`, 'g'), option),
+      result.message,
+    );
     throw new DriftcellError(`${name.toLowerCase()}: ${message}`, name, result.code);
   }
   if (typeof result !== 'number') throw new Error(`driftcell: ${name} returned ${JSON.stringify(result)}, not a number`);
   return result;
 }
 
-const SAMPLE_NAMES = { temperature_K: 'temperature', counter_doping: 'counterDoping', doping_min: 'dopingMin', doping_max: 'dopingMax' } as const;
+const SAMPLE_NAMES = {
+  temperature_K: 'temperature',
+  counter_doping: 'counterDoping',
+  doping_min: 'dopingMin',
+  doping_max: 'dopingMax',
+} as const;
 
 function sampleArguments(options: SampleOptions): Record<string, OptionValue> {
   return {
@@ -152,7 +160,17 @@ export function mobility(options: { readonly doping: number; readonly carrier?: 
  * @example temperatureCoefficient({ doping: 1e15, dopant: 'phosphorus' }) // ≈ 7.3e3 ppm/K
  */
 export function temperatureCoefficient(options: { readonly doping: number } & Omit<SampleOptions, 'counterDoping'>): number {
-  return call('TCR', { doping: options.doping, dopant: options.dopant, temperature_K: options.temperature, model: options.model, material: options.material }, SAMPLE_NAMES);
+  return call(
+    'TCR',
+    {
+      doping: options.doping,
+      dopant: options.dopant,
+      temperature_K: options.temperature,
+      model: options.model,
+      material: options.material,
+    },
+    SAMPLE_NAMES,
+  );
 }
 
 /**
@@ -166,7 +184,8 @@ export function temperatureCoefficient(options: { readonly doping: number } & Om
  * @example resistivityAtTemperature({ resistivity: 10.2, dopant: 'B', measuredTemperature: 298.15 }) // ≈ 10.06 Ω·cm
  */
 export function resistivityAtTemperature(
-  options: { readonly resistivity: number; readonly measuredTemperature: number; readonly targetTemperature?: number } & Omit<SampleOptions, 'temperature'> &
+  options: { readonly resistivity: number; readonly measuredTemperature: number; readonly targetTemperature?: number } &
+    Omit<SampleOptions, 'temperature'> &
     DopingWindowOptions,
 ): number {
   return call(

@@ -264,7 +264,9 @@ function solveNeutrality(
  * @param fermiLevel Ef − Ei in eV
  * @param intrinsicModel ni model code used for the Fermi level (default: the material's first)
  * @returns ionised fraction, 0–1
- * @example ionizedFraction(SILICON, 300, phosphorus, 1e16, solveEquilibrium(SILICON, 300, [{ dopant: phosphorus, density: 1e16 }]).fermiLevel) // ≈ 0.996
+ * @example
+ * const { fermiLevel } = solveEquilibrium(SILICON, 300, [{ dopant: phosphorus, density: 1e16 }]);
+ * ionizedFraction(SILICON, 300, phosphorus, 1e16, fermiLevel) // ≈ 0.996
  */
 export function ionizedFraction(
   material: Material,

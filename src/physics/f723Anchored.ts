@@ -129,7 +129,9 @@ const edge = memoize(
  * @param direction - 'forward' for ρ from N (RESISTIVITY), 'reverse' for N from ρ (DOPING)
  * @param physics - the physics resistivity (silicon's default mobility model)
  * @returns k, dimensionless
- * @example anchorFactor(boron1e18At300K, 'forward', (sample) => resistivity(sample, 'masetti')) // ≈ 1.1 (F723 is about 11 % above the physics at 1e18 B)
+ * @example
+ * // F723 is about 11 % above the physics at 1e18 cm⁻³ boron:
+ * anchorFactor(boron1e18At300K, 'forward', (sample) => resistivity(sample, 'masetti')) // ≈ 1.1
  */
 export function anchorFactor(sample: Sample, direction: AnchorDirection, physics: PhysicsResistivity): number {
   const species = anchoredSpecies(sample);

@@ -37,7 +37,16 @@ export {
   effectiveIntrinsicDensity,
   resolveBandgapNarrowingModel,
 } from './bands';
-export { dopantCodes, typedDopantCodes, dopantCodeProblem, readDopant, resolveDopant, genericDopant, type Dopant, type DopantKind } from './dopants';
+export {
+  dopantCodes,
+  typedDopantCodes,
+  dopantCodeProblem,
+  readDopant,
+  resolveDopant,
+  genericDopant,
+  type Dopant,
+  type DopantKind,
+} from './dopants';
 export { solveEquilibrium, ionizedFraction, type DopantDensity, type Equilibrium } from './equilibrium';
 
 // Samples, mobility, transport, inverse.
@@ -90,7 +99,14 @@ export {
   type MaterialHighFieldTables,
 } from './highField';
 export { resistivityTemperatureCoefficient, temperatureDerivative, type TemperatureBounds } from './temperatureCoefficient';
-export { dopingForResistivity, dopingSolutions, AmbiguousDopingError, type DensityWindow, type DensityWindowNames, type DopingSolution } from './inverse';
+export {
+  dopingForResistivity,
+  dopingSolutions,
+  AmbiguousDopingError,
+  type DensityWindow,
+  type DensityWindowNames,
+  type DopingSolution,
+} from './inverse';
 export { f723Resistivity, f723Density, f723SpeciesFor, F723_VALIDITY, type F723Species } from './astmF723';
 export { F723_ANCHOR_TEMPERATURE } from './f723Anchored';
 export { resistivitySpread, dopingSpread, type ModelSpread } from './modelSpread';

@@ -341,7 +341,10 @@ export function scanEvaluations(sample: Omit<Sample, 'density'>, model?: string)
   return scan.grid.length + scan.turningPoints.length * (PEAK_SEARCH_ITERATIONS + 2);
 }
 
-function scanFor(sample: Omit<Sample, 'density'>, code: string): { scan: Scan; maxNet: number; densityOf: (u: number) => number; logResistivityAt: (u: number) => number } {
+function scanFor(
+  sample: Omit<Sample, 'density'>,
+  code: string,
+): { scan: Scan; maxNet: number; densityOf: (u: number) => number; logResistivityAt: (u: number) => number } {
   const { material, dopant, temperature, counterDensity } = sample;
   const conditions = scanConditionsOf(material, dopant, temperature, counterDensity, code);
   const scan = scanOf(material, dopant, temperature, counterDensity, code);
@@ -478,7 +481,8 @@ function checkWindow(window: DensityWindow, names: DensityWindowNames): void {
   }
   if (window.min !== undefined && window.max !== undefined && window.min > window.max) {
     throw new PhysicsDomainError(
-      `${names.min} ${formatDensity(window.min, 3)} cm⁻³ is above ${names.max} ${formatDensity(window.max, 3)} cm⁻³: give the low end first.`,
+      `${names.min} ${formatDensity(window.min, 3)} cm⁻³ is above ${names.max} ` +
+        `${formatDensity(window.max, 3)} cm⁻³: give the low end first.`,
     );
   }
 }
@@ -498,14 +502,17 @@ function windowText(window: DensityWindow, names: DensityWindowNames): string {
  *
  * @param target - resistivity, Ω·cm (finite, > 0)
  * @param sample - material, temperature, dopant and counterDensity (density is the unknown)
- * @param model - resistivity model code (blank: the material's default, 'f723-anchored' in silicon, which inverts ASTM F723's N-from-ρ equation; 'astm-f723' uses the standard's reverse equation)
+ * @param model - resistivity model code (blank: the material's default, 'f723-anchored' in silicon, which inverts
+ *   ASTM F723's N-from-ρ equation; 'astm-f723' uses the standard's reverse equation)
  * @param window - optional density window, cm⁻³ (ends included), to pick one of several solutions
  * @param names - how messages name the window's ends (default window.min, window.max)
  * @returns { density in cm⁻³, iterations }
  * @throws PhysicsDomainError when the target is out of the reachable range (the message gives the range) or
  *   no solution lies in the window (the message lists the solutions); AmbiguousDopingError when several do
  * @example dopingForResistivity(1, boronAt300K).density // ≈ 1.50e16 cm⁻³
- * @example dopingForResistivity(resistivity(phosphorus1e17At77K, 'masetti'), phosphorusAt77K, 'masetti', { min: 1e16, max: 3e17 }).density // ≈ 1.000e17 cm⁻³ (the window picks one of three)
+ * @example
+ * const target = resistivity(phosphorus1e17At77K, 'masetti');
+ * dopingForResistivity(target, phosphorusAt77K, 'masetti', { min: 1e16, max: 3e17 }).density // ≈ 1.000e17 cm⁻³ (one of three)
  */
 export function dopingForResistivity(
   target: number,

@@ -90,7 +90,12 @@ export function resistivitySpread(sample: Sample): ModelSpread {
  * @throws PhysicsDomainError naming the model when a covering model refuses (e.g. several densities at 77 K)
  * @example dopingSpread(10, boronAt296K).lowest // ≈ 1.3e15
  */
-export function dopingSpread(target: number, sample: Omit<Sample, 'density'>, window: DensityWindow = {}, names?: DensityWindowNames): ModelSpread {
+export function dopingSpread(
+  target: number,
+  sample: Omit<Sample, 'density'>,
+  window: DensityWindow = {},
+  names?: DensityWindowNames,
+): ModelSpread {
   const species = f723Species(sample);
   const values: { model: string; value: number }[] = [];
   for (const model of resistivityModelCodes(sample.material)) {

@@ -93,7 +93,8 @@ export function resistorAtTemperature(
   const factor = 1 + coefficients.linearPpmPerK * PER_PPM * delta + coefficients.quadraticPpmPerK2 * PER_PPM * delta * delta;
   if (!(factor > 0)) {
     throw new PhysicsDomainError(
-      `the TCR polynomial 1 + α·ΔT + β·ΔT² is ${factor} at ${temperature} K (ΔT = ${delta} K): it must be > 0; the coefficients do not describe the layer this far from the reference temperature`,
+      `the TCR polynomial 1 + α·ΔT + β·ΔT² is ${factor} at ${temperature} K (ΔT = ${delta} K): it must be > ` +
+        `0; the coefficients do not describe the layer this far from the reference temperature`,
     );
   }
   return sheetResistance * (lengthUm / widthUm + endSquares) * factor;

@@ -37,7 +37,9 @@ export const CARRIER_ROLES: readonly CarrierRole[] = ['majority', 'minority', 'e
  *
  * @param sample - the sample
  * @returns one or two dopant densities, cm⁻³
- * @example sampleDopants({ ...boron1e16At300K, counterDensity: 1e15 }).map((d) => d.dopant.symbol) // → ['B', 'donor'] (boron and the generic donor)
+ * @example
+ * const compensated = { ...boron1e16At300K, counterDensity: 1e15 };
+ * sampleDopants(compensated).map((d) => d.dopant.symbol) // → ['B', 'donor'] (boron and the generic donor)
  */
 export function sampleDopants(sample: Sample): DopantDensity[] {
   const dopants: DopantDensity[] = [{ dopant: sample.dopant, density: sample.density }];

@@ -51,7 +51,8 @@ export function conversionModel(model: string | undefined, sample: Pick<Sample, 
   if (code === ASTM_F723_CODE) {
     throw new PhysicsDomainError(
       `'astm-f723' is a conversion at 290–305 K with no temperature dependence, so it cannot move a resistivity to another temperature; ` +
-        `use a mobility-based resistivity model (blank: ${defaultMobilityModel(sample.material)} with the default model's temperature dependence)`,
+        `use a mobility-based resistivity model (blank: ${defaultMobilityModel(sample.material)} with the ` +
+          `default model's temperature dependence)`,
     );
   }
   return code === F723_ANCHORED_CODE ? defaultMobilityModel(sample.material) : code;
@@ -70,7 +71,9 @@ export function conversionModel(model: string | undefined, sample: Pick<Sample, 
  * @returns the resistivity at targetTemperature, Ω·cm
  * @throws AmbiguousDopingError when several densities give the reading at the measurement temperature
  *   (the message lists them; a window picks one); PhysicsDomainError for an unreachable reading or a bad model
- * @example resistivityAtTemperature(10.2, { material: SILICON, temperature: 298.15, dopant: boron, counterDensity: 0 }) // ≈ 10.06 Ω·cm at 23 °C
+ * @example
+ * const measured = { material: SILICON, temperature: 298.15, dopant: boron, counterDensity: 0 };
+ * resistivityAtTemperature(10.2, measured) // ≈ 10.06 Ω·cm at 23 °C
  */
 export function resistivityAtTemperature(
   measured: number,

@@ -70,7 +70,8 @@ export function resolveResistivityModel(code?: string, material: Material = SILI
   const allowed = resistivityModelCodes(material);
   if (allowed.includes(normalized)) return normalized;
   if (ALL_RESISTIVITY_MODEL_CODES.includes(normalized)) {
-    const owners = normalized === ASTM_F723_CODE || normalized === F723_ANCHORED_CODE ? SILICON.name : materialsWithMobilityModel(normalized);
+    const owners =
+      normalized === ASTM_F723_CODE || normalized === F723_ANCHORED_CODE ? SILICON.name : materialsWithMobilityModel(normalized);
     throw new PhysicsDomainError(
       `resistivity model '${normalized}' has parameters for ${owners} only; ${material.name} supports: ${allowed.join(', ')}.`,
     );

@@ -33,7 +33,9 @@ export interface EnginePort extends WorkbookPort {
  *
  * @param sheets - sheet name → rows of cell contents (numbers, text, `=formulas`); default one empty 'Sheet1'
  * @returns the port, with the selection at A1 of the first sheet
- * @example const port = createEnginePort({ Sheet1: [[1e15]] }); await port.write({ sheet: 'Sheet1', row: 0, column: 1, rowCount: 1, columnCount: 1 }, [['=DRIFT.RESISTIVITY(A1,"B")']])
+ * @example
+ * const port = createEnginePort({ Sheet1: [[1e15]] });
+ * await port.write({ sheet: 'Sheet1', row: 0, column: 1, rowCount: 1, columnCount: 1 }, [['=DRIFT.RESISTIVITY(A1,"B")']]);
  */
 export function createEnginePort(sheets?: Record<string, (string | number | boolean | null)[][]>): EnginePort {
   const engine = createEngine(sheets ?? { Sheet1: [] });
@@ -96,7 +98,8 @@ export function createEnginePort(sheets?: Record<string, (string | number | bool
     },
     async write(block, cells) {
       if (cells.length !== block.rowCount || cells.some((row) => row.length !== block.columnCount)) {
-        throw new RangeError(`write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} cells, got ${cells.length}×${cells[0]?.length ?? 0}`);
+        throw new RangeError(`write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} ` +
+          `cells, got ${cells.length}×${cells[0]?.length ?? 0}`);
       }
       const sheet = sheetId(block.sheet, true);
       cells.forEach((row, r) =>

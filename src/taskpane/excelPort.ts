@@ -42,7 +42,8 @@ function checkShape(block: CellBlock, cells: readonly (readonly CellInput[])[]):
   const rowsOk = cells.length === block.rowCount;
   const columnsOk = cells.every((row) => row.length === block.columnCount);
   if (!rowsOk || !columnsOk) {
-    throw new RangeError(`write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} cells, got ${cells.length}×${cells[0]?.length ?? 0}`);
+    throw new RangeError(`write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} ` +
+      `cells, got ${cells.length}×${cells[0]?.length ?? 0}`);
   }
 }
 
@@ -55,7 +56,8 @@ export type RequirementCheck = (set: string, version: string) => boolean;
 
 /** The host's own check, or "assume yes" where Office does not offer one. */
 function officeRequirements(): RequirementCheck {
-  const requirements = (globalThis as { Office?: { context?: { requirements?: { isSetSupported?: RequirementCheck } } } }).Office?.context?.requirements;
+  const office = (globalThis as { Office?: { context?: { requirements?: { isSetSupported?: RequirementCheck } } } }).Office;
+  const requirements = office?.context?.requirements;
   return typeof requirements?.isSetSupported === 'function' ? (set, version) => requirements.isSetSupported!(set, version) : () => true;
 }
 
@@ -65,7 +67,8 @@ const CHART_REQUIREMENT = ['ExcelApi', '1.7'] as const;
 const HIGHLIGHT_REQUIREMENT = ['ExcelApi', '1.6'] as const;
 
 function requireSet(supports: RequirementCheck, [set, version]: readonly [string, string], what: string): void {
-  if (!supports(set, version)) throw new Error(`${what} needs ${set} ${version} (Excel 2019, Excel 2021 or Microsoft 365); this Excel does not offer it`);
+  if (!supports(set, version)) throw new Error(`${what} needs ${set} ${version} (Excel 2019, Excel 2021 or ` +
+    `Microsoft 365); this Excel does not offer it`);
 }
 
 /**
@@ -76,7 +79,10 @@ function requireSet(supports: RequirementCheck, [set, version]: readonly [string
  * @returns a WorkbookPort whose calls go to the open workbook
  * @example const port = createExcelPort(); await port.selection()
  */
-export function createExcelPort(excel: ExcelHost = (globalThis as unknown as { Excel: ExcelHost }).Excel, supports: RequirementCheck = officeRequirements()): WorkbookPort {
+export function createExcelPort(
+  excel: ExcelHost = (globalThis as unknown as { Excel: ExcelHost }).Excel,
+  supports: RequirementCheck = officeRequirements(),
+): WorkbookPort {
   return {
     selection: () =>
       excel.run(async (context) => {
@@ -84,7 +90,13 @@ export function createExcelPort(excel: ExcelHost = (globalThis as unknown as { E
         range.load('rowIndex,columnIndex,rowCount,columnCount');
         range.worksheet.load('name');
         await context.sync();
-        return { sheet: range.worksheet.name, row: range.rowIndex, column: range.columnIndex, rowCount: range.rowCount, columnCount: range.columnCount };
+        return {
+          sheet: range.worksheet.name,
+          row: range.rowIndex,
+          column: range.columnIndex,
+          rowCount: range.rowCount,
+          columnCount: range.columnCount,
+        };
       }),
 
     read: (block) =>
@@ -111,7 +123,10 @@ export function createExcelPort(excel: ExcelHost = (globalThis as unknown as { E
         if (plan.bold !== undefined) range.format.font.bold = plan.bold;
         if (plan.numberFormat !== undefined) {
           const format = plan.numberFormat;
-          range.numberFormat = Array.from({ length: plan.block.rowCount }, () => Array.from({ length: plan.block.columnCount }, () => format));
+          range.numberFormat = Array.from(
+            { length: plan.block.rowCount },
+            () => Array.from({ length: plan.block.columnCount }, () => format),
+          );
         }
         await context.sync();
       }),
@@ -123,7 +138,11 @@ export function createExcelPort(excel: ExcelHost = (globalThis as unknown as { E
         const sheet = context.workbook.worksheets.getItem(plan.sheet);
         const first = plan.series[0];
         // The chart starts from the first series' values; every series then gets explicit x and y ranges.
-        const chart = sheet.charts.add(CHART_TYPE_XY_LINES as Excel.ChartType.xyscatterLines, sheet.getRange(blockAddress(first.y)), SERIES_BY_COLUMNS as Excel.ChartSeriesBy.columns);
+        const chart = sheet.charts.add(
+          CHART_TYPE_XY_LINES as Excel.ChartType.xyscatterLines,
+          sheet.getRange(blockAddress(first.y)),
+          SERIES_BY_COLUMNS as Excel.ChartSeriesBy.columns,
+        );
         chart.title.text = plan.title;
         plan.series.forEach((series, index) => {
           const target = index === 0 ? chart.series.getItemAt(0) : chart.series.add(series.name);

@@ -52,11 +52,19 @@ function percent(x: number): string {
 export function renderF723Agreement(): string {
   const models = [F723_ANCHORED_CODE, ...MOBILITY_MODEL_CODES];
   const rows = models.map((model) => {
-    const cells = (['B', 'P'] as const).flatMap((species) => [percent(f723Deviation(model, species, 'resistivity')), percent(f723Deviation(model, species, 'doping'))]);
+    const cells = (['B', 'P'] as const).flatMap((species) => [
+      percent(f723Deviation(model, species, 'resistivity')),
+      percent(f723Deviation(model, species, 'doping')),
+    ]);
     return `| \`${model}\`${model === F723_ANCHORED_CODE ? ' (default)' : ''} | ${cells.join(' | ')} |`;
   });
   return [
-    `Largest deviation from ASTM F723 at 23 °C (296.15 K), uncompensated silicon, over the standard's whole range (B: ${F723_VALIDITY.B.density.min.toExponential(0)}–${F723_VALIDITY.B.density.max.toExponential(2)} cm⁻³, P: ${F723_VALIDITY.P.density.min.toExponential(0)}–${F723_VALIDITY.P.density.max.toExponential(0)} cm⁻³), measured by \`npm run docs\`:`,
+    `Largest deviation from ASTM F723 at 23 °C (296.15 K), uncompensated silicon, over the standard's whole ` +
+      `range (B: ` +
+      `${F723_VALIDITY.B.density.min.toExponential(0)}–${F723_VALIDITY.B.density.max.toExponential(2)} ` +
+      `cm⁻³, P: ` +
+      `${F723_VALIDITY.P.density.min.toExponential(0)}–${F723_VALIDITY.P.density.max.toExponential(0)} ` +
+      `cm⁻³), measured by \`npm run docs\`:`,
     '',
     '| Model | B: RESISTIVITY vs ρ(N) | B: DOPING vs N(ρ) | P: RESISTIVITY vs ρ(N) | P: DOPING vs N(ρ) |',
     '| --- | --- | --- | --- | --- |',

@@ -7,6 +7,7 @@
 import { modelInfo, type ModelInfo } from '../../physics';
 import type { FunctionSpec, ParameterSpec } from '../types';
 import { qualifiedName, signature } from './signature';
+import { prose } from '../../text/prose';
 
 /** Looks a model code up in the physics model registry. */
 export type ModelLookup = (code: string) => ModelInfo;
@@ -60,13 +61,22 @@ function paragraphs(text: string, linked: ReadonlySet<string>): string {
     .join('\n');
 }
 
+/** The page colours, light and dark, as CSS custom properties. */
+const LIGHT_COLOURS =
+  '--bg: #fdfdfb; --fg: #1c1f24; --muted: #4f5661; --rule: #d5d9de; --accent: #0b5d6b; --code-bg: #eef1f3; ' +
+  '--caution-bg: #fff6e0; --caution-rule: #b7791f;';
+const DARK_COLOURS =
+  '--bg: #15181c; --fg: #e6e8eb; --muted: #a9b0ba; --rule: #39404a; --accent: #6cc5d3; --code-bg: #232830; ' +
+  '--caution-bg: #2b2414; --caution-rule: #d9a441;';
+const BODY_FONT = '1rem/1.55 system-ui, -apple-system, "Segoe UI", Roboto, "Noto Sans", sans-serif';
+
 const STYLE = `
-:root { color-scheme: light dark; --bg: #fdfdfb; --fg: #1c1f24; --muted: #4f5661; --rule: #d5d9de; --accent: #0b5d6b; --code-bg: #eef1f3; --caution-bg: #fff6e0; --caution-rule: #b7791f; }
+:root { color-scheme: light dark; ${LIGHT_COLOURS} }
 @media (prefers-color-scheme: dark) {
-  :root { --bg: #15181c; --fg: #e6e8eb; --muted: #a9b0ba; --rule: #39404a; --accent: #6cc5d3; --code-bg: #232830; --caution-bg: #2b2414; --caution-rule: #d9a441; }
+  :root { ${DARK_COLOURS} }
 }
 * { box-sizing: border-box; }
-body { margin: 0; background: var(--bg); color: var(--fg); font: 1rem/1.55 system-ui, -apple-system, "Segoe UI", Roboto, "Noto Sans", sans-serif; }
+body { margin: 0; background: var(--bg); color: var(--fg); font: ${BODY_FONT}; }
 .skip { position: absolute; left: -999px; }
 .skip:focus { left: 1rem; top: 1rem; background: var(--bg); padding: .25rem .5rem; }
 header, main, footer { max-width: 52rem; margin: 0 auto; padding: 0 1.25rem; }
@@ -94,6 +104,9 @@ dl.model dd { margin-left: 1.25rem; }
 /** Help pages contain no script and load nothing: only their own inline stylesheet is allowed. */
 const CSP = "default-src 'none'; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'";
 
+const FOOTER_TEXT = prose`${PRODUCT} — semiconductor transport physics as spreadsheet functions. Free software under
+  the GNU GPL, version 3 or later.`;
+
 function page(title: string, body: string): string {
   return `<!doctype html>
 <html lang="en">
@@ -108,7 +121,7 @@ function page(title: string, body: string): string {
 <body>
 <a class="skip" href="#content">Skip to content</a>
 ${body}
-<footer><p>${PRODUCT} — semiconductor transport physics as spreadsheet functions. Free software under the GNU GPL, version 3 or later.</p></footer>
+<footer><p>${FOOTER_TEXT}</p></footer>
 </body>
 </html>
 `;
@@ -119,8 +132,14 @@ function cautionBlock(): string {
 }
 
 function parameterRow(param: ParameterSpec, linked: ReadonlySet<string>): string {
-  const defaultCell = param.optional ? (param.defaultText !== undefined ? `<code>${escapeHtml(param.defaultText)}</code>` : 'blank') : 'required';
-  return `<tr><th scope="row"><code>${escapeHtml(param.name)}</code></th><td>${param.unit === null ? '—' : escapeHtml(param.unit)}</td><td>${inline(escapeHtml(param.details === undefined ? param.description : `${param.description} ${param.details}`), linked)}</td><td>${defaultCell}</td></tr>`;
+  const optionalCell = param.defaultText !== undefined ? `<code>${escapeHtml(param.defaultText)}</code>` : 'blank';
+  const defaultCell = param.optional ? optionalCell : 'required';
+  const unitCell = param.unit === null ? '—' : escapeHtml(param.unit);
+  const description = param.details === undefined ? param.description : `${param.description} ${param.details}`;
+  return (
+    `<tr><th scope="row"><code>${escapeHtml(param.name)}</code></th><td>${unitCell}</td>` +
+    `<td>${inline(escapeHtml(description), linked)}</td><td>${defaultCell}</td></tr>`
+  );
 }
 
 function parameterTable(spec: FunctionSpec, linked: ReadonlySet<string>): string {
@@ -138,7 +157,10 @@ ${(spec.parameters as readonly ParameterSpec[]).map((p) => parameterRow(p, linke
 function blankCellNote(spec: FunctionSpec): string {
   const names = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.zeroIsBlank).map((p) => p.name);
   if (names.length === 0) return '';
-  return `\n<p>Blank cells: some Excel versions pass an empty cell as 0. In ${escapeHtml(names.join(', '))}, where 0 is never a valid value, a 0 is read as a blank cell, so an optional argument takes its default and a required one reports that it is missing. Elsewhere 0 is a value.</p>`;
+  return `\n<p>Blank cells: some Excel versions pass an empty cell as 0. In ` +
+    `${escapeHtml(names.join(', '))}, where 0 is never a valid value, a 0 is read as a blank cell, so an ` +
+    `optional argument takes its default and a required one reports that it is missing. Elsewhere 0 is a ` +
+    `value.</p>`;
 }
 
 function resultBlock(spec: FunctionSpec): string {
@@ -147,12 +169,18 @@ function resultBlock(spec: FunctionSpec): string {
     spec.kind === 'table'
       ? 'It spills a table.'
       : spec.kind === 'tuple'
-        ? `It spills one row of ${spec.columns.length} values: ${spec.columns.join(', ')}. Given columns instead of single values, it spills one such row per element; a bad element gets an error with a message across its row, and the other rows still compute.`
+        ? `It spills one row of ${spec.columns.length} values: ${spec.columns.join(', ')}. Given columns ` +
+          `instead of single values, it spills one such row per element; a bad element gets an error with ` +
+          `a message across its row, and the other rows still compute.`
         : spec.kind === 'row'
-          ? 'It spills one row, as long as its arguments’ values make it; every argument is one value, and a range is refused with an error.'
-          : 'Given ranges or arrays, it spills one result per element, broadcasting as Excel’s own functions do; a bad element gets an error with a message, and the other elements still compute.';
+          ? 'It spills one row, as long as its arguments’ values make it; every argument is one value, and ' +
+            'a range is refused with an error.'
+          : 'Given ranges or arrays, it spills one result per element, broadcasting as Excel’s own ' +
+            'functions do; a bad element gets an error with a message, and the other elements still ' +
+            'compute.';
   const reducing = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.reduce).map((p) => p.name);
-  const whole = reducing.length === 0 ? '' : ` ${reducing.join(', ')} is taken whole, as one argument: a range there is reduced to one value, not broadcast.`;
+  const whole = reducing.length === 0 ? '' : ` ${reducing.join(', ')} is taken whole, as one argument: a ` +
+    `range there is reduced to one value, not broadcast.`;
   return `<p>${escapeHtml(spec.result.description)}${unit}. ${escapeHtml(shape + whole)}</p>`;
 }
 
@@ -191,11 +219,13 @@ function modelsBlock(spec: FunctionSpec, lookup: ModelLookup): string {
       info = lookup(code);
     } catch (e) {
       // A page that cites a model the registry lacks must not be built.
-      throw new Error(`help page for ${qualifiedName(spec)}: model code "${code}" is not in the model registry (${e instanceof Error ? e.message : String(e)})`);
+      throw new Error(`help page for ${qualifiedName(spec)}: model code "${code}" is not in the model ` +
+        `registry (${e instanceof Error ? e.message : String(e)})`);
     }
     return modelBlock(info);
   });
-  return `<h2>Models used</h2>\n<p>Model codes are typed in the <code>model</code> argument where the function has one; the first listed is the default.</p>\n${blocks.join('\n')}`;
+  return `<h2>Models used</h2>\n<p>Model codes are typed in the <code>model</code> argument where the ` +
+    `function has one; the first listed is the default.</p>\n${blocks.join('\n')}`;
 }
 
 /**
@@ -235,17 +265,26 @@ ${cautionBlock()}
  * @param catalog - the functions, in the order to list them
  * @returns a complete HTML document linking each function's page
  */
+const INDEX_SUMMARY = prose`Spreadsheet functions for doped-semiconductor transport: carrier densities, mobility,
+  resistivity and back, sheet resistance and resistor values.`;
+const INDEX_USAGE = prose`Type a function in a cell as <code>=DRIFT.NAME(…)</code>. Every argument takes a single value
+  or a range or array; results spill. Densities are in cm⁻³, temperatures in K (default 300 K), lengths in µm.
+  Codes such as dopants and model names are case-insensitive.`;
+
 export function renderHelpIndex(catalog: readonly FunctionSpec[]): string {
   const rows = catalog
     .map(
-      (spec) =>
-        `<tr><th scope="row"><a href="${helpFileName(spec.name)}"><code>${escapeHtml(qualifiedName(spec))}</code></a></th><td>${escapeHtml(spec.summary)}</td><td>${spec.result.unit === null ? '—' : escapeHtml(spec.result.unit)}</td></tr>`,
+      (spec) => {
+        const link = `<a href="${helpFileName(spec.name)}"><code>${escapeHtml(qualifiedName(spec))}</code></a>`;
+        const unit = spec.result.unit === null ? '—' : escapeHtml(spec.result.unit);
+        return `<tr><th scope="row">${link}</th><td>${escapeHtml(spec.summary)}</td><td>${unit}</td></tr>`;
+      },
     )
     .join('\n');
   const body = `<main id="content">
 <h1>${PRODUCT} functions</h1>
-<p class="summary">Spreadsheet functions for doped-semiconductor transport: carrier densities, mobility, resistivity and back, sheet resistance and resistor values.</p>
-<p>Type a function in a cell as <code>=DRIFT.NAME(…)</code>. Every argument takes a single value or a range or array; results spill. Densities are in cm⁻³, temperatures in K (default 300 K), lengths in µm. Codes such as dopants and model names are case-insensitive.</p>
+<p class="summary">${INDEX_SUMMARY}</p>
+<p>${INDEX_USAGE}</p>
 <table>
 <caption>All functions</caption>
 <thead><tr><th scope="col">Function</th><th scope="col">What it gives</th><th scope="col">Result unit</th></tr></thead>

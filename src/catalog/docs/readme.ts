@@ -35,7 +35,9 @@ export function renderCodeTable(): string {
     ['material', MATERIAL_CODES.join(', '), MATERIAL_CODES[0]],
     [
       'dopant',
-      `${perMaterial(typedDopantCodes)}. Symbols or element names; donor / acceptor (or n-type / p-type) are a generic donor / acceptor. A lone P or N is refused: it could mean the element or the conductivity type.`,
+      `${perMaterial(typedDopantCodes)}. Symbols or element names; donor / acceptor (or n-type / p-type) ` +
+        `are a generic donor / acceptor. A lone P or N is refused: it could mean the element or the ` +
+        `conductivity type.`,
       'required',
     ],
     ['carrier', `${CARRIER_ROLES.join(', ')} (also electrons, holes, n / e, p / h)`, CARRIER_ROLES[0]],

@@ -2,11 +2,14 @@ import { bandgap as bandgapModel } from '../../physics';
 import { material, requiredTemperature } from '../common';
 import { elementwise } from '../types';
 import { BANDGAP_MODELS } from '../citedModels';
+import { prose } from '../../text/prose';
 
 export const BANDGAP = elementwise({
   name: 'BANDGAP',
   summary: 'Band gap Eg of the semiconductor at a temperature, in eV.',
-  help: `Returns the fundamental (indirect, for Si) band gap at the given lattice temperature from the published temperature fit listed below. The gap shrinks as the lattice warms; the fit is valid over the range in the model table.`,
+  help: prose`Returns the fundamental (indirect, for Si) band gap at the given lattice temperature from the
+    published temperature fit listed below. The gap shrinks as the lattice warms; the fit is valid over the
+    range in the model table.`,
   result: { unit: 'eV', description: 'Band gap Eg' },
   parameters: [requiredTemperature, material] as const,
   examples: [

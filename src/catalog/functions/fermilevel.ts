@@ -1,11 +1,14 @@
 import { acceptors, donors, genericEquilibrium, material, temperature } from '../common';
 import { elementwise } from '../types';
 import { EQUILIBRIUM_MODELS } from '../citedModels';
+import { prose } from '../../text/prose';
 
 export const FERMILEVEL = elementwise({
   name: 'FERMILEVEL',
   summary: 'Equilibrium Fermi level relative to the intrinsic level, Ef − Ei, in eV.',
-  help: `Solves charge neutrality with incomplete ionization and returns the Fermi level measured from the intrinsic level Ei: positive in n-type material, negative in p-type, zero when intrinsic. With Boltzmann statistics Ef − Ei = kT·ln(n/ni).`,
+  help: prose`Solves charge neutrality with incomplete ionization and returns the Fermi level measured from
+    the intrinsic level Ei: positive in n-type material, negative in p-type, zero when intrinsic. With
+    Boltzmann statistics Ef − Ei = kT·ln(n/ni).`,
   result: { unit: 'eV', description: 'Ef − Ei' },
   parameters: [donors, acceptors, temperature, material] as const,
   examples: [

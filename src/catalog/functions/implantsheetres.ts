@@ -3,6 +3,7 @@ import { dopant, temperature } from '../common';
 import { requiredNumber } from '../parameters';
 import { elementwise } from '../types';
 import { background, layerLength } from './layerParameters';
+import { prose } from '../../text/prose';
 
 const dose = requiredNumber({
   name: 'dose_cm2',
@@ -19,9 +20,19 @@ const straggle = layerLength('straggle_um', 'Straggle ΔRp (standard deviation o
 export const IMPLANTSHEETRES = elementwise({
   name: 'IMPLANTSHEETRES',
   summary: 'Sheet resistance of an as-implanted Gaussian layer from dose, range and straggle, in Ω/sq.',
-  help: `Returns Rs = 1/∫σ(x)dx of an implanted silicon layer with the Gaussian profile N(x) = Φ/(√(2π)ΔRp)·exp(−(x−Rp)²/(2ΔRp²)). The Gaussian is truncated at the surface: the part that would lie above x = 0 is lost, not reflected back, so for a shallow implant (Rp less than about 2ΔRp) the dose retained in the silicon is less than Φ. The layer conducts where N(x) exceeds the opposite-type background: from the surface down to one junction, or, when N(0) is below the background, a buried layer between two junctions. The local conductivity is that of uniform silicon with the named dopant at N(x) over the background (incomplete ionization, compensation, the default mobility model), integrated to better than 0.1 %.
+  help: prose`Returns Rs = 1/∫σ(x)dx of an implanted silicon layer with the Gaussian profile N(x) =
+    Φ/(√(2π)ΔRp)·exp(−(x−Rp)²/(2ΔRp²)). The Gaussian is truncated at the surface: the part that would lie
+    above x = 0 is lost, not reflected back, so for a shallow implant (Rp less than about 2ΔRp) the dose
+    retained in the silicon is less than Φ. The layer conducts where N(x) exceeds the opposite-type
+    background: from the surface down to one junction, or, when N(0) is below the background, a buried layer
+    between two junctions. The local conductivity is that of uniform silicon with the named dopant at N(x)
+    over the background (incomplete ionization, compensation, the default mobility model), integrated to
+    better than 0.1 %.
 
-Assumption: as-implanted, fully activated, no damage. A real implant needs an anneal to activate it, which also moves the profile; amorphous-target Gaussians ignore channelling tails and the skew of light ions such as boron. Carrier densities use Fermi–Dirac statistics; band-gap narrowing is not applied to them (DRIFT.NIEFF reports it separately), so peaks above about 1e19 cm⁻³ give approximate results.`,
+    Assumption: as-implanted, fully activated, no damage. A real implant needs an anneal to activate it, which
+    also moves the profile; amorphous-target Gaussians ignore channelling tails and the skew of light ions
+    such as boron. Carrier densities use Fermi–Dirac statistics; band-gap narrowing is not applied to them
+    (DRIFT.NIEFF reports it separately), so peaks above about 1e19 cm⁻³ give approximate results.`,
   result: { unit: 'Ω/sq', description: 'Sheet resistance Rs of the implanted layer' },
   parameters: [dose, range, straggle, background, dopant, temperature] as const,
   examples: [

@@ -6,10 +6,12 @@
 import { DEFAULT_PROFILE, PROFILE_CODES, type ProfileCode } from '../../physics';
 import { MAX_DENSITY } from '../common';
 import { codeParameter, requiredNumber } from '../parameters';
+import { prose } from '../../text/prose';
 
 export const profile = codeParameter<ProfileCode>({
   name: 'profile',
-  description: `Diffusion profile: gaussian (limited-source drive-in) or erfc (constant-source predeposition); blank means ${DEFAULT_PROFILE}.`,
+  description: prose`Diffusion profile: gaussian (limited-source drive-in) or erfc (constant-source
+    predeposition); blank means ${DEFAULT_PROFILE}.`,
   choices: () => PROFILE_CODES,
   defaultCode: DEFAULT_PROFILE,
   resolve: (code) => code as ProfileCode,

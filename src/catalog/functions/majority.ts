@@ -1,11 +1,16 @@
 import { counterDoping, dopant, doping, material, sampleCarrierDensity, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { EQUILIBRIUM_MODELS } from '../citedModels';
+import { prose } from '../../text/prose';
 
 export const MAJORITY = elementwise({
   name: 'MAJORITY',
   summary: 'Density of the carriers the dopant supplies (electrons for donors, holes for acceptors), in cm⁻³.',
-  help: `Solves charge neutrality with incomplete ionization for a sample doped with the given dopant (and, optionally, counter-doped with the opposite type) and returns the density of the carrier type that dopant supplies: electrons for donors (in silicon P, As, Sb and n), holes for acceptors (B, Al, Ga, In and p); the material's dopant table decides which codes are donors (in GaAs, Si is a donor and C an acceptor). If counter_doping exceeds doping the sample changes type and this carrier is then the minority one.`,
+  help: prose`Solves charge neutrality with incomplete ionization for a sample doped with the given dopant
+    (and, optionally, counter-doped with the opposite type) and returns the density of the carrier type that
+    dopant supplies: electrons for donors (in silicon P, As, Sb and n), holes for acceptors (B, Al, Ga, In and
+    p); the material's dopant table decides which codes are donors (in GaAs, Si is a donor and C an acceptor).
+    If counter_doping exceeds doping the sample changes type and this carrier is then the minority one.`,
   result: { unit: 'cm⁻³', description: 'Majority-carrier density' },
   parameters: [doping, dopant, temperature, material, counterDoping] as const,
   examples: [

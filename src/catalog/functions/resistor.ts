@@ -1,11 +1,13 @@
 import { resistorValue } from '../../physics';
 import { length, resistivity } from '../common';
 import { elementwise } from '../types';
+import { prose } from '../../text/prose';
 
 export const RESISTOR = elementwise({
   name: 'RESISTOR',
   summary: 'Resistance R = ρL/(W·t) of a uniform rectangular bar, in Ω.',
-  help: `Returns the resistance of a uniform bar with current along its length: R = ρ·L/(W·t) = Rs·(L/W). Contact and end effects are not included.`,
+  help: prose`Returns the resistance of a uniform bar with current along its length: R = ρ·L/(W·t) = Rs·(L/W).
+    Contact and end effects are not included.`,
   result: { unit: 'Ω', description: 'Resistance R' },
   parameters: [
     resistivity,

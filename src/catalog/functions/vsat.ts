@@ -4,6 +4,7 @@ import { codeParameter } from '../parameters';
 import { elementwise, type ParameterSpec } from '../types';
 import { InputError } from '../values';
 import { SATURATION_VELOCITY_MODELS } from '../citedModels';
+import { prose } from '../../text/prose';
 
 /** Carrier types only: without a dopant, 'majority' and 'minority' name nothing. */
 const CARRIER_TYPES: readonly Carrier[] = ['electron', 'hole'];
@@ -42,17 +43,30 @@ function si(carrier: Carrier, temperatureK: number): string {
 export const SILICON_HOLE_VSAT_300K_TEXT = si('hole', 300);
 
 /** Canali's 300 K field exponents, for VELOCITY's help text. */
-export const SILICON_FIELD_EXPONENTS_TEXT = `β = ${canaliExponentAt300K('electron').toFixed(3)} (electrons) and ${canaliExponentAt300K('hole').toFixed(3)} (holes)`;
+export const SILICON_FIELD_EXPONENTS_TEXT = `β = ${canaliExponentAt300K('electron').toFixed(3)} (electrons) ` +
+  `and ${canaliExponentAt300K('hole').toFixed(3)} (holes)`;
 
 /** The temperatures at which Si saturation velocities are given, for help texts. */
-export const SILICON_HIGH_FIELD_RANGE_TEXT = `electrons ${SI_ELECTRON.evaluationRange.min}–${SI_ELECTRON.evaluationRange.max} K, holes ${SI_HOLE.evaluationRange.min}–${SI_HOLE.evaluationRange.max} K`;
+export const SILICON_HIGH_FIELD_RANGE_TEXT = `electrons ` +
+  `${SI_ELECTRON.evaluationRange.min}–${SI_ELECTRON.evaluationRange.max} K, holes ` +
+  `${SI_HOLE.evaluationRange.min}–${SI_HOLE.evaluationRange.max} K`;
 
 export const VSAT = elementwise({
   name: 'VSAT',
   summary: 'Saturation drift velocity of electrons or holes, in cm/s.',
-  help: `Returns the saturation velocity v_sat of the velocity–field relation DRIFT.VELOCITY uses, for the lattice temperature and material.
+  help: prose`Returns the saturation velocity v_sat of the velocity–field relation DRIFT.VELOCITY uses, for
+    the lattice temperature and material.
 
-Si: v_sat(T) = v_sat,300/((1 − A) + A·T/300 K) after Quay et al. (2000): ${si('electron', 300)} cm/s for electrons and ${si('hole', 300)} cm/s for holes at 300 K, ${si('electron', 77)} cm/s for electrons at 77 K (measured about 1.2–1.4e7). Fitted roughly 77–500 K and extrapolated to 1000 K. Electrons are accepted from ${SI_ELECTRON.evaluationRange.min} K; holes only from ${SI_HOLE.evaluationRange.min} K, because below that Quay's hole law would exceed the electron one while measured hole velocities in Si stay below electron ones. Electron ≥ hole at every temperature accepted. (Canali et al.'s 1975 v_m = 1.53e9·T^−0.87 is a fit parameter, not the saturation velocity: it gives 3.5e7 cm/s at 77 K, so it is not used.) Ge and GaAs: Quay et al. (2000), 20–1000 K (fitted roughly 77–500 K). For GaAs electrons this is the high-field value beyond the transferred-electron velocity peak, not the peak. 4H-SiC: electrons 2.2e7 cm/s (Khan & Cooper 2000), at 300 K only; no hole value is tabulated, so holes give an error.`,
+    Si: v_sat(T) = v_sat,300/((1 − A) + A·T/300 K) after Quay et al. (2000): ${si('electron', 300)} cm/s for
+    electrons and ${si('hole', 300)} cm/s for holes at 300 K, ${si('electron', 77)} cm/s for electrons at 77 K
+    (measured about 1.2–1.4e7). Fitted roughly 77–500 K and extrapolated to 1000 K. Electrons are accepted
+    from ${SI_ELECTRON.evaluationRange.min} K; holes only from ${SI_HOLE.evaluationRange.min} K, because below
+    that Quay's hole law would exceed the electron one while measured hole velocities in Si stay below
+    electron ones. Electron ≥ hole at every temperature accepted. (Canali et al.'s 1975 v_m = 1.53e9·T^−0.87
+    is a fit parameter, not the saturation velocity: it gives 3.5e7 cm/s at 77 K, so it is not used.) Ge and
+    GaAs: Quay et al. (2000), 20–1000 K (fitted roughly 77–500 K). For GaAs electrons this is the high-field
+    value beyond the transferred-electron velocity peak, not the peak. 4H-SiC: electrons 2.2e7 cm/s (Khan &
+    Cooper 2000), at 300 K only; no hole value is tabulated, so holes give an error.`,
   result: { unit: 'cm/s', description: 'Saturation velocity' },
   parameters: [temperature, carrierType, material] as const,
   examples: [

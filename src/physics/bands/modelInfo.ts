@@ -66,8 +66,10 @@ export const BAND_MODELS: readonly ModelInfo[] = [
     name: FERMI_DIRAC_STATISTICS.name,
     citation:
       'F½ as normalised by J. S. Blakemore, Solid-State Electron. 25, 1067 (1982); computed by its alternating ' +
-      `series (η ≤ ${t(SERIES_LIMIT)}), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, SIAM Review 56, 385 ` +
-      `(2014)), tabulated once as Chebyshev interpolants of degree ${FERMI_DIRAC_TABLE_DEGREE} on unit intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ ${t(SOMMERFELD_LIMIT)} (citations from memory); ` +
+      `series (η ≤ ${t(SERIES_LIMIT)}), the trapezoidal rule after x = t² (L. N. Trefethen & J. A. C. Weideman, ` +
+      `SIAM Review 56, 385 (2014)), tabulated once as Chebyshev interpolants of degree ${FERMI_DIRAC_TABLE_DEGREE} ` +
+      `on unit intervals, and the Sommerfeld expansion (R. B. Dingle, Appl. Sci. Res. B 6, 225 (1957)) for η ≥ ` +
+      `${t(SOMMERFELD_LIMIT)} (citations from memory); ` +
       'checked against mpmath polylog values',
     validity:
       'parabolic bands with the densities of states of the material; any Fermi level (F½ to 1e-13 relative for ' +

@@ -19,7 +19,8 @@ export const CAUGHEY_THOMAS_FIELD_EXPONENTS = { electron: 2, hole: 1 } as const;
 export const CAUGHEY_THOMAS_FIELD_SOURCE = {
   citation:
     'D. M. Caughey, R. E. Thomas, Proc. IEEE 55, 2192 (1967): v = μ0E/(1 + (μ0E/v_sat)^β)^(1/β); ' +
-    `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} for electrons, ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} for holes in Si at 300 K (from memory)`,
+    `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} for electrons, ` +
+    `${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} for holes in Si at 300 K (from memory)`,
   validity:
     'fitted to silicon at 300 K; used with material- and temperature-dependent μ0, v_sat and β from the tables of each material',
 } as const;

@@ -30,7 +30,8 @@ function quayParameterText(): string {
 const SATURATION = 'saturation velocity';
 
 /** "β = 2 (e), 1 (h)": the Caughey–Thomas exponents as the notes quote them, from the table. */
-const CAUGHEY_THOMAS_EXPONENTS_TEXT = `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} (e), ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} (h)`;
+const CAUGHEY_THOMAS_EXPONENTS_TEXT = `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} (e), ` +
+  `${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} (h)`;
 
 /**
  * "2.57e-2·T^0.66 (e), 0.46·T^0.17 (h)": Canali's β(T) laws from the table.
@@ -59,7 +60,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
   {
     code: CANALI_MODEL_CODE,
     quantity: 'field exponent of the velocity–field relation, Si',
-    name: `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ${canaliExponentAt300K('hole').toFixed(3)} (h), held constant`,
+    name: `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ` +
+      `${canaliExponentAt300K('hole').toFixed(3)} (h), held constant`,
     citation: CANALI_SOURCE.citation,
     validity: CANALI_SOURCE.validity,
     notes:
@@ -79,7 +81,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     notes:
       `${quayParameterText()} (read in Palankovski 2000, Table 3.31). Si electrons 77–1000 K, Si holes from ` +
       `${Math.ceil(SILICON_HOLE_LAW_CROSSING_K)} K (below, Quay’s hole law would exceed the electron one); Ge, GaAs 20–1000 K. ` +
-      `Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs ${CAUGHEY_THOMAS_EXPONENTS_TEXT} from Caughey–Thomas, not fitted to these materials. ` +
+      `Si field exponent from Canali et al. (1975) at 300 K; Ge and GaAs ${CAUGHEY_THOMAS_EXPONENTS_TEXT} from ` +
+      'Caughey–Thomas, not fitted to these materials. ' +
       (QUAY_GALLIUM_ARSENIDE.limitations ?? ''),
     equation: 'src/physics/highField/saturationVelocity.ts',
     parameterTable: 'src/physics/highField/quay.ts',
@@ -96,7 +99,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
     citation: KHAN_COOPER_SOURCE.citation,
     validity: KHAN_COOPER_SOURCE.validity,
     notes:
-      `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} from Caughey–Thomas, not fitted to 4H-SiC. No hole value is tabulated. ${KHAN_COOPER_SILICON_CARBIDE.limitations ?? ''}`,
+      `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} from Caughey–Thomas, not fitted to 4H-SiC. No ` +
+      `hole value is tabulated. ${KHAN_COOPER_SILICON_CARBIDE.limitations ?? ''}`,
     equation: 'src/physics/highField/saturationVelocity.ts',
     parameterTable: 'src/physics/highField/siliconCarbide.ts',
     tests: ['tests/physics/reference/khan-cooper-2000.reference.test.ts', 'tests/physics/highField/saturationVelocity.test.ts'],

@@ -22,6 +22,7 @@ import { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE } from './c
 import { CANALI_MODEL_CODE, CANALI_SOURCE, canaliExponentAt300K } from './canali';
 import type { CarrierHighFieldTable, EvaluationRange, MaterialHighFieldTables, VelocitySource } from './types';
 import type { Carrier } from '../sample';
+import { prose } from '../../text/prose';
 
 /** Registry code of the Quay et al. (2000) saturation velocities. */
 export const QUAY_MODEL_CODE = 'quay-2000';
@@ -56,7 +57,8 @@ const QUAY_EVALUATION_RANGE: EvaluationRange = {
 /** Why β comes from Caughey & Thomas for Ge and GaAs. */
 function assumedExponentSource(carrier: Carrier): VelocitySource {
   return {
-    citation: `${CAUGHEY_THOMAS_FIELD_SOURCE.citation}; β = ${CAUGHEY_THOMAS_FIELD_EXPONENTS[carrier]} transferred from Si (our assumption)`,
+    citation: prose`${CAUGHEY_THOMAS_FIELD_SOURCE.citation}; β = ${CAUGHEY_THOMAS_FIELD_EXPONENTS[carrier]}
+      transferred from Si (our assumption)`,
     validity: 'not fitted to this material: Quay et al. give v_sat only; the shape of the knee is an estimate',
   };
 }

@@ -43,7 +43,8 @@ function exponentFromLaw(law: FieldExponentLaw): number {
  *
  * @param materialCode - 'Si', 'Ge', 'GaAs' or '4H-SiC' (case-insensitive)
  * @param carrier - 'electron' or 'hole'
- * @param temperature - T, K, inside the table's evaluation range (Si electrons 77–1000 K, holes 102–1000 K; Ge/GaAs 20–1000 K; 4H-SiC 300 K)
+ * @param temperature - T, K, inside the table's evaluation range (Si electrons 77–1000 K, holes 102–1000 K;
+ *   Ge/GaAs 20–1000 K; 4H-SiC 300 K)
  * @returns v_sat in cm/s
  * @throws PhysicsDomainError for an unknown material, a carrier without data, or a temperature outside the range
  * @example saturationVelocity('Si', 'electron', 300) // ≈ 1.0e7 cm/s (Quay et al. 2000)

@@ -10,6 +10,7 @@
 import { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE } from './caugheyThomasField';
 import type { MaterialHighFieldTables, VelocitySource } from './types';
 import { parameterText as t } from '../parameterText';
+import { prose } from '../../text/prose';
 
 /** Registry code of the Khan & Cooper (2000) 4H-SiC electron saturation velocity. */
 export const KHAN_COOPER_MODEL_CODE = 'khan-cooper-2000';
@@ -37,7 +38,8 @@ export const KHAN_COOPER_SILICON_CARBIDE: MaterialHighFieldTables = {
     saturationSource: KHAN_COOPER_SOURCE,
     fieldExponent: { form: 'constant', value: CAUGHEY_THOMAS_FIELD_EXPONENTS.electron },
     fieldExponentSource: {
-      citation: `${CAUGHEY_THOMAS_FIELD_SOURCE.citation}; β = ${CAUGHEY_THOMAS_FIELD_EXPONENTS.electron} transferred from Si (our assumption)`,
+      citation: prose`${CAUGHEY_THOMAS_FIELD_SOURCE.citation}; β = ${CAUGHEY_THOMAS_FIELD_EXPONENTS.electron}
+        transferred from Si (our assumption)`,
       validity: 'not fitted to 4H-SiC: the shape of the knee is an estimate',
     },
     evaluationRange: {

@@ -19,7 +19,8 @@
  */
 import { PhysicsDomainError } from '../errors';
 
-/* eslint-disable no-loss-of-precision -- coefficients as their source prints them, more digits than a double holds; the nearest double is what runs, and cutting digits by hand could round differently */
+/* eslint-disable no-loss-of-precision -- coefficients as their source prints them, more digits than a double
+   holds; the nearest double is what runs, and cutting digits by hand could round differently */
 /** Kronrod abscissae on [−1, 1], positive half, decreasing; odd indices are the Gauss nodes. */
 const KRONROD_NODES = [
   0.991455371120812639206854697526329, 0.949107912342758524526189684047851, 0.864864423359769072789712788640926,

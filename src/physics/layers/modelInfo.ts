@@ -1,6 +1,7 @@
 import type { ModelInfo } from '../modelInfo';
 import { parameterText as t } from '../parameterText';
 import { LAYER_INTEGRATION } from './sheetResistance';
+import { prose } from '../../text/prose';
 
 /**
  * Descriptions of the layer models (Irvin's integration, the diffusion
@@ -8,10 +9,12 @@ import { LAYER_INTEGRATION } from './sheetResistance';
  */
 
 const IRVIN_CITATION =
-  'J. C. Irvin, "Resistivity of bulk silicon and of diffused layers in silicon", Bell Syst. Tech. J. 41, 387–410 (1962) (citation from memory)';
+  'J. C. Irvin, "Resistivity of bulk silicon and of diffused layers in silicon", Bell Syst. Tech. J. 41, ' +
+    '387–410 (1962) (citation from memory)';
 
 const AS_DIFFUSED =
-  'Ideal as-diffused profile: no concentration-dependent diffusion, no kink-and-tail, no surface pile-up or depletion; Ns up to about solid solubility (≈ 1e20–5e20 cm⁻³).';
+  'Ideal as-diffused profile: no concentration-dependent diffusion, no kink-and-tail, no surface pile-up or ' +
+    'depletion; Ns up to about solid solubility (≈ 1e20–5e20 cm⁻³).';
 
 /** Every model owned by the layer part of the core, lower-case codes. */
 export const LAYER_MODELS: readonly ModelInfo[] = [
@@ -21,9 +24,14 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     name: 'Irvin (1962) integration: Rs = 1/∫q(nμn + pμp)dx from the surface to the junction',
     citation: IRVIN_CITATION,
     validity:
-      'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about 1e19 cm⁻³ results are approximate.',
+      'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; ' +
+        'Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about ' +
+        '1e19 cm⁻³ results are approximate.',
     notes:
-      `Each depth is treated as a uniform sample of the layer dopant over the opposite-type background (incomplete ionization, compensation, default mobility model), where Irvin used his bulk resistivity curve and full ionization; depletion at the junction is ignored. Adaptive Gauss–Kronrod (7/15) quadrature, target ${t(LAYER_INTEGRATION.relativeTolerance)} relative.`,
+      'Each depth is treated as a uniform sample of the layer dopant over the opposite-type background ' +
+        '(incomplete ionization, compensation, default mobility model), where Irvin used his bulk ' +
+        'resistivity curve and full ionization; depletion at the junction is ignored. Adaptive ' +
+        `Gauss–Kronrod (7/15) quadrature, target ${t(LAYER_INTEGRATION.relativeTolerance)} relative.`,
     equation: 'src/physics/layers/sheetResistance.ts',
     parameterTable: 'src/physics/layers/sheetResistance.ts',
     tests: [
@@ -50,7 +58,8 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     code: 'erfc',
     quantity: 'diffused dopant profile',
     name: 'Complementary error function N(x) = Ns·erfc(x/L), constant-source predeposition',
-    citation: `Solution of Fick's second law for a fixed surface concentration, common practice, no source; used for layers by ${IRVIN_CITATION}. erfc from W. J. Cody, Math. Comp. 23, 631 (1969)`,
+    citation: prose`Solution of Fick's second law for a fixed surface concentration, common practice, no
+      source; used for layers by ${IRVIN_CITATION}. erfc from W. J. Cody, Math. Comp. 23, 631 (1969)`,
     validity: AS_DIFFUSED,
     notes: 'L = 2·sqrt(D·t); junction at xj = L·erfcinv(NB/Ns).',
     equation: 'src/physics/layers/profiles.ts',
@@ -62,11 +71,13 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     quantity: 'implanted dopant profile',
     name: 'As-implanted Gaussian N(x) = Φ/(√(2π)ΔRp)·exp(−(x−Rp)²/2ΔRp²) from range Rp and straggle ΔRp',
     citation:
-      'J. Lindhard, M. Scharff, H. E. Schiøtt, Mat. Fys. Medd. Dan. Vid. Selsk. 33, no. 14 (1963) (range theory giving Rp and ΔRp; citation from memory); Gaussian form: common practice, no source',
+      'J. Lindhard, M. Scharff, H. E. Schiøtt, Mat. Fys. Medd. Dan. Vid. Selsk. 33, no. 14 (1963) (range ' +
+        'theory giving Rp and ΔRp; citation from memory); Gaussian form: common practice, no source',
     validity:
       'Amorphous-target approximation: no channelling tail, no skew (light ions such as B are skewed); as implanted, before any anneal.',
     notes:
-      'Truncated at the surface: the part of the Gaussian above x = 0 is lost, not reflected. Assumed fully electrically activated with no implant damage (as-implanted, fully activated, no damage).',
+      'Truncated at the surface: the part of the Gaussian above x = 0 is lost, not reflected. Assumed fully ' +
+        'electrically activated with no implant damage (as-implanted, fully activated, no damage).',
     equation: 'src/physics/layers/profiles.ts',
     parameterTable: 'src/physics/layers/profiles.ts',
     tests: ['tests/physics/layers/profiles.test.ts', 'tests/physics/layers/sheetResistance.test.ts'],

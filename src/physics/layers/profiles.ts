@@ -87,7 +87,9 @@ function checkSurfaceAndBackground(surfaceConcentration: number, background: num
   }
   if (!(surfaceConcentration > background) || !Number.isFinite(surfaceConcentration)) {
     throw new PhysicsDomainError(
-      `surface concentration ${surfaceConcentration.toPrecision(4)} cm⁻³ must exceed the background ${background.toPrecision(4)} cm⁻³: otherwise the layer never overcompensates it and there is no junction`,
+      `surface concentration ${surfaceConcentration.toPrecision(4)} cm⁻³ must exceed the background ` +
+        `${background.toPrecision(4)} cm⁻³: otherwise the layer never overcompensates it and there is no ` +
+        `junction`,
     );
   }
 }
@@ -110,7 +112,12 @@ function checkLength(name: string, value: number): void {
  * @throws PhysicsDomainError when Ns ≤ NB, NB ≤ 0 or L ≤ 0
  * @example junctionDepth('gaussian', 1e19, 1, 1e15) // ≈ 3.035
  */
-export function junctionDepth(profile: ProfileCode, surfaceConcentration: number, characteristicLength: number, background: number): number {
+export function junctionDepth(
+  profile: ProfileCode,
+  surfaceConcentration: number,
+  characteristicLength: number,
+  background: number,
+): number {
   checkSurfaceAndBackground(surfaceConcentration, background);
   checkLength('characteristic length', characteristicLength);
   return characteristicLength * PROFILE_SHAPES[profile].inverse(background / surfaceConcentration);
@@ -199,7 +206,8 @@ export function implantSpan(implant: ImplantProfile, peakDensity: number, backgr
   }
   if (!(peakDensity > background)) {
     throw new PhysicsDomainError(
-      `the implant's peak density ${peakDensity.toExponential(3)} cm⁻³ does not exceed the background ${background.toPrecision(4)} cm⁻³: no layer of the implanted type forms`,
+      `the implant's peak density ${peakDensity.toExponential(3)} cm⁻³ does not exceed the background ` +
+        `${background.toPrecision(4)} cm⁻³: no layer of the implanted type forms`,
     );
   }
   const halfWidth = implant.straggle * Math.sqrt(2 * Math.log(peakDensity / background));

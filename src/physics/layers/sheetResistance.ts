@@ -150,7 +150,9 @@ function checkDopantType(conditions: LayerConditions): void {
  * @param layer - profile, Ns (cm⁻³), xj (µm), dopant, background (cm⁻³), temperature (K)
  * @returns G□ in S with the quadrature's error estimate
  * @throws PhysicsDomainError when Ns ≤ background, xj ≤ 0, or the core rejects a local sample
- * @example diffusedLayerConductance({ profile: 'gaussian', surfaceConcentration: 1e19, junctionDepthUm: 2, background: 1e15, dopant: boron, temperature: 300 }).sheetConductance // ≈ 7.74e-3 S
+ * @example
+ * const layer = { surfaceConcentration: 1e19, junctionDepthUm: 2, background: 1e15, dopant: boron, temperature: 300 };
+ * diffusedLayerConductance({ profile: 'gaussian', ...layer }).sheetConductance // ≈ 7.74e-3 S
  */
 export function diffusedLayerConductance(layer: DiffusedLayer): LayerConductance {
   checkDopantType(layer);
@@ -168,7 +170,9 @@ export function diffusedLayerConductance(layer: DiffusedLayer): LayerConductance
  * @param layer - profile ('gaussian' | 'erfc'), Ns (cm⁻³), xj (µm), dopant, background NB (cm⁻³), temperature (K)
  * @returns Rs in Ω/sq
  * @throws PhysicsDomainError when Ns ≤ NB, xj ≤ 0, or a local sample is outside the core's range
- * @example diffusedLayerSheetResistance({ profile: 'gaussian', surfaceConcentration: 1e19, junctionDepthUm: 2, background: 1e15, dopant: boron, temperature: 300 }) // ≈ 129 Ω/sq
+ * @example
+ * const layer = { surfaceConcentration: 1e19, junctionDepthUm: 2, background: 1e15, dopant: boron, temperature: 300 };
+ * diffusedLayerSheetResistance({ profile: 'gaussian', ...layer }) // ≈ 129 Ω/sq
  */
 export function diffusedLayerSheetResistance(layer: DiffusedLayer): number {
   return 1 / diffusedLayerConductance(layer).sheetConductance;
@@ -181,7 +185,9 @@ export function diffusedLayerSheetResistance(layer: DiffusedLayer): number {
  * @param layer - dose (cm⁻²), Rp and ΔRp (µm), dopant, background (cm⁻³), temperature (K)
  * @returns G□ in S with the quadrature's error estimate and the conducting span
  * @throws PhysicsDomainError for a non-positive dose or straggle, a negative range, or a peak at or below the background
- * @example implantedLayerConductance({ dose: 1e14, rangeUm: 0.1, straggleUm: 0.04, background: 1e15, dopant: boron, temperature: 300 }).bottomUm // ≈ 0.272 µm
+ * @example
+ * const implant = { dose: 1e14, rangeUm: 0.1, straggleUm: 0.04, background: 1e15, dopant: boron, temperature: 300 };
+ * implantedLayerConductance(implant).bottomUm // ≈ 0.272 µm
  */
 export function implantedLayerConductance(layer: ImplantedLayer): LayerConductance {
   checkDopantType(layer);
@@ -222,7 +228,9 @@ export function implantedLayerConductance(layer: ImplantedLayer): LayerConductan
  * @param layer - dose Φ (cm⁻²), Rp ≥ 0 and ΔRp > 0 (µm), dopant, background NB (cm⁻³), temperature (K)
  * @returns Rs in Ω/sq
  * @throws PhysicsDomainError as implantedLayerConductance
- * @example implantedLayerSheetResistance({ dose: 1e14, rangeUm: 0.1, straggleUm: 0.04, background: 1e15, dopant: boron, temperature: 300 }) // ≈ 769 Ω/sq
+ * @example
+ * const implant = { dose: 1e14, rangeUm: 0.1, straggleUm: 0.04, background: 1e15, dopant: boron, temperature: 300 };
+ * implantedLayerSheetResistance(implant) // ≈ 769 Ω/sq
  */
 export function implantedLayerSheetResistance(layer: ImplantedLayer): number {
   return 1 / implantedLayerConductance(layer).sheetConductance;

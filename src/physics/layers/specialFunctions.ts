@@ -20,7 +20,8 @@
 import { PhysicsDomainError } from '../errors';
 import { findRoot } from '../solve';
 
-/* eslint-disable no-loss-of-precision -- coefficients as their source prints them, more digits than a double holds; the nearest double is what runs, and cutting digits by hand could round differently */
+/* eslint-disable no-loss-of-precision -- coefficients as their source prints them, more digits than a double
+   holds; the nearest double is what runs, and cutting digits by hand could round differently */
 /** Cody (1969) coefficients, |x| ≤ 0.46875: erf(x) = x·P(x²)/Q(x²). */
 const SMALL_ARGUMENT = {
   upper: 0.46875,

@@ -51,5 +51,7 @@ export function absolutePowerLawText(band: DensityOfStatesModel['conductionBand'
 export function intrinsicFitText(
   fit: Pick<IntrinsicDensityFit, 'prefactor' | 'referenceTemperature' | 'exponent' | 'activationTemperature'>,
 ): string {
-  return `ni = ${t(fit.prefactor)}·(T/${t(fit.referenceTemperature)})^${exponentText(fit.exponent)}·exp(−${t(fit.activationTemperature)}/T) cm⁻³`;
+  return `ni = ` +
+    `${t(fit.prefactor)}·(T/${t(fit.referenceTemperature)})^${exponentText(fit.exponent)}·exp(−${t(fit.activationTemperature)}/T) ` +
+    `cm⁻³`;
 }

@@ -74,13 +74,15 @@ export const GALLIUM_ARSENIDE: Material = {
     min: LOWEST_NUMERIC_TEMPERATURE,
     max: GALLIUM_ARSENIDE_MELTING_POINT,
     reason:
-      `from 1 K (below, the exponentials leave double-precision range) to the melting point of GaAs, ${t(GALLIUM_ARSENIDE_MELTING_POINT)} K ` +
+      `from 1 K (below, the exponentials leave double-precision range) to the melting point of GaAs, ` +
+      `${t(GALLIUM_ARSENIDE_MELTING_POINT)} K ` +
       '(free surfaces lose arsenic well below it); each model’s own validated range is narrower (see DRIFT.MODELS)',
   },
   atomicDensity: GALLIUM_ARSENIDE_ATOMIC_DENSITY,
   relativePermittivity: GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY,
   hostPropertiesCitation:
-    `atomic density ${t(GALLIUM_ARSENIDE_ATOMIC_DENSITY)} cm⁻³ and melting point ${t(GALLIUM_ARSENIDE_MELTING_POINT)} K: common practice, no source; ` +
+    `atomic density ${t(GALLIUM_ARSENIDE_ATOMIC_DENSITY)} cm⁻³ and melting point ` +
+    `${t(GALLIUM_ARSENIDE_MELTING_POINT)} K: common practice, no source; ` +
     `εr = ${t(GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY)}: ` +
     'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)',
   bandgap: THURMOND_1975_GALLIUM_ARSENIDE_BANDGAP,

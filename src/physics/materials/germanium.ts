@@ -49,7 +49,8 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
   ...GERMANIUM_BANDS,
   citation:
     'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix, properties of Ge ' +
-    `at 300 K: Nc = ${densityOfStatesText(GERMANIUM_BANDS.conductionBand)} cm⁻³, Nv = ${densityOfStatesText(GERMANIUM_BANDS.valenceBand, 2)} cm⁻³ ` +
+    `at 300 K: Nc = ${densityOfStatesText(GERMANIUM_BANDS.conductionBand)} cm⁻³, Nv = ` +
+    `${densityOfStatesText(GERMANIUM_BANDS.valenceBand, 2)} cm⁻³ ` +
     `(from memory); T^${exponentText(GERMANIUM_BANDS.conductionBand.exponent)} law: constant effective masses ` +
     '(common practice, no source)',
   validity:

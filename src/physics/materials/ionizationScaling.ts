@@ -127,7 +127,10 @@ export function mottScaledIonization(
   };
 }
 
-/** Degeneracy factors of donor and acceptor levels: 2 (spin) and 4 (spin and the two degenerate valence-band maxima); common practice, no source. */
+/**
+ * Degeneracy factors of donor and acceptor levels: 2 (spin) and 4 (spin and the two degenerate valence-band
+ * maxima); common practice, no source.
+ */
 export const LEVEL_DEGENERACY: Readonly<Record<DopantKind, number>> = { donor: 2, acceptor: 4 };
 
 /** What one host's Mott-scaled dopant table shares. */
@@ -150,7 +153,9 @@ export interface MottScaledHost {
  * @param isolatedEnergy ΔE0, eV
  * @param energySource citation of ΔE0
  * @returns the dopant's table row
- * @example mottScaledDopant({ relativePermittivity: 16, mobilitySpeciesNote: '…' }, 'P', 'phosphorus', 'donor', 0.012, 'Sze & Ng 2007').degeneracy // → 2
+ * @example
+ * const host = { relativePermittivity: 16, mobilitySpeciesNote: '…' };
+ * mottScaledDopant(host, 'P', 'phosphorus', 'donor', 0.012, 'Sze & Ng 2007').degeneracy // → 2
  */
 export function mottScaledDopant(
   host: MottScaledHost,

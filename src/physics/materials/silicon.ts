@@ -79,7 +79,9 @@ export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
 const MISIAKOS_CONSTANTS = { prefactor: 5.29e19, referenceTemperature: 300, exponent: 2.54, activationTemperature: 6726 } as const;
 
 /** ni of a fit at its reference temperature, A·exp(−Θ/Tref), in the form help texts print (e.g. 9.70e9). */
-function atReference(fit: { readonly prefactor: number; readonly referenceTemperature: number; readonly activationTemperature: number }): string {
+function atReference(
+  fit: { readonly prefactor: number; readonly referenceTemperature: number; readonly activationTemperature: number },
+): string {
   return (fit.prefactor * Math.exp(-fit.activationTemperature / fit.referenceTemperature)).toExponential(2).replace('e+', 'e');
 }
 
@@ -114,7 +116,8 @@ export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
   ...SPROUL_GREEN_CONSTANTS,
   citation:
     `A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ${intrinsicFitText(SPROUL_GREEN_CONSTANTS)}; ` +
-    `these constants give ${atReference(SPROUL_GREEN_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 1.00e10 (fit constants and quote from memory)`,
+    `these constants give ${atReference(SPROUL_GREEN_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 1.00e10 ` +
+      `(fit constants and quote from memory)`,
   validity: 'measured 275–375 K; extrapolated outside',
   notes:
     'About 5% above the default at 300 K; Altermatt et al., J. Appl. Phys. 93, 1598 (2003) attribute the ' +
@@ -152,7 +155,8 @@ export const SILICON: Material = {
   relativePermittivity: SILICON_RELATIVE_PERMITTIVITY,
   hostPropertiesCitation:
     `atomic density (8 atoms per 5.431 Å cubic cell) and melting point ${t(SILICON_MELTING_POINT)} K: common practice, no source; ` +
-    `εr = ${t(SILICON_RELATIVE_PERMITTIVITY)}: S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, Appendix (from memory)`,
+    `εr = ${t(SILICON_RELATIVE_PERMITTIVITY)}: S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ` +
+    `ed., Wiley 2007, Appendix (from memory)`,
   bandgap: THURMOND_1975_BANDGAP,
   densityOfStates: GREEN_1990_DENSITY_OF_STATES,
   intrinsicFits: [MISIAKOS_TSAMAKIS_1993_FIT, SPROUL_GREEN_1991_FIT],

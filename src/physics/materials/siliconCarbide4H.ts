@@ -48,7 +48,8 @@ export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES: DensityOfSta
   citation:
     `${LEVINSHTEIN_2001}: Nc ≈ ${absolutePowerLawText(SILICON_CARBIDE_4H_BANDS.conductionBand, 3)}, ` +
     `Nv ≈ ${absolutePowerLawText(SILICON_CARBIDE_4H_BANDS.valenceBand, 2)} cm⁻³, i.e. ` +
-    `${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.conductionBand)} and ${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.valenceBand)} cm⁻³ at 300 K ` +
+    `${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.conductionBand)} and ` +
+    `${densityOfStatesText(SILICON_CARBIDE_4H_BANDS.valenceBand)} cm⁻³ at 300 K ` +
     '(values from memory)',
   validity: 'constant-mass estimate; ni at 300 K (about 1e-8 cm⁻³) is an order-of-magnitude value',
   equation: 'src/physics/bands/densityOfStates.ts',

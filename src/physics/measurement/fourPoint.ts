@@ -125,7 +125,8 @@ function checkReading(voltage: number, current: number): number {
   const ratio = voltage / current;
   if (!(ratio > 0)) {
     throw new PhysicsDomainError(
-      `voltage ${voltage} V and current ${current} A give V/I = ${ratio} Ω; V/I must be > 0 (voltage and current of the same sign, voltage not 0)`,
+      `voltage ${voltage} V and current ${current} A give V/I = ${ratio} Ω; V/I must be > 0 (voltage and ` +
+        `current of the same sign, voltage not 0)`,
     );
   }
   return ratio;
@@ -169,7 +170,8 @@ export function fourPointResistivity(voltage: number, current: number, geometry:
   if (thicknessUm === undefined) {
     if (diameterUm !== undefined) {
       throw new PhysicsDomainError(
-        'a diameter correction needs the slice thickness: the circular-slice factor (Smits 1958) holds for thin slices, not for semi-infinite samples',
+        'a diameter correction needs the slice thickness: the circular-slice factor (Smits 1958) holds for ' +
+          'thin slices, not for semi-infinite samples',
       );
     }
     return 2 * Math.PI * spacingCm * resistance;

@@ -50,7 +50,8 @@ export function vanDerPauwSheetResistance(resistanceA: number, resistanceB: numb
   const ratio = Math.max(resistanceA, resistanceB) / small;
   if (!(ratio <= MAX_RESISTANCE_RATIO)) {
     throw new PhysicsDomainError(
-      `r_a/r_b = ${resistanceA}/${resistanceB} is too far from 1 for a van der Pauw measurement: the larger may be at most ${MAX_RESISTANCE_RATIO} times the smaller; check the contacts and readings`,
+      `r_a/r_b = ${resistanceA}/${resistanceB} is too far from 1 for a van der Pauw measurement: the larger ` +
+        `may be at most ${MAX_RESISTANCE_RATIO} times the smaller; check the contacts and readings`,
     );
   }
   if (ratio === 1) return (Math.PI * small) / Math.LN2;

@@ -86,11 +86,29 @@ export function roleFromHeader(header: string): ColumnRole {
 }
 
 /** Words a type column of a certificate holds; used when no header says "type". */
-const TYPE_VALUES = new Set(['p', 'n', 'p type', 'n type', 'ptype', 'ntype', 'donor', 'acceptor', 'boron', 'phosphorus', 'arsenic', 'antimony', 'b', 'as', 'sb']);
+const TYPE_VALUES = new Set([
+  'p',
+  'n',
+  'p type',
+  'n type',
+  'ptype',
+  'ntype',
+  'donor',
+  'acceptor',
+  'boron',
+  'phosphorus',
+  'arsenic',
+  'antimony',
+  'b',
+  'as',
+  'sb',
+]);
 
 function looksLikeTypeColumn(values: readonly unknown[]): boolean {
   const texts = values.filter((value) => value !== null && value !== '');
-  return texts.length > 0 && texts.every((value) => typeof value === 'string' && TYPE_VALUES.has(value.trim().toLowerCase().replace(/[-_]/g, ' ')));
+  return texts.length > 0 && texts.every((value) => typeof value === 'string' && TYPE_VALUES.has(
+    value.trim().toLowerCase().replace(/[-_]/g, ' '),
+  ));
 }
 
 /**

@@ -7,7 +7,8 @@
  * here touches a workbook.
  *
  * Layout, left to right, starting in the first column after the table:
- *   [dopant code] | doping at ρmax | doping at ρmin | window check | [model spread at ρmax, at ρmin] | [corrected readings] | [readings check] | [Rs] | [radial variation] | pass/fail
+ *   [dopant code] | doping at ρmax | doping at ρmin | window check | [model spread at ρmax, at ρmin] |
+ *   [corrected readings] | [readings check] | [Rs] | [radial variation] | pass/fail
  *   (one empty column) | parameter label | parameter value
  *
  * Model spread (settings.modelSpread, off by default): three columns for each
@@ -157,12 +158,20 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     ...(has('type') ? [] : [{ key: 'dopant', label: 'Dopant (no type column)', value: settings.dopant.trim() }]),
     { key: 'temperature', label: `Temperature (${parameterNamed(doping, 'temperature_K').unit ?? 'K'})`, value: settings.temperatureK },
     // Written in K whatever unit was typed, so the formulas reference it without a conversion.
-    ...(correcting ? [{ key: 'measuredAt', label: `Readings measured at (${parameterNamed(resistivityAt, 'measured_temperature_K').unit ?? 'K'})`, value: kelvinOf(measuredAt!.value, measuredAt!.unit) }] : []),
+    ...(correcting ? [
+      {
+        key: 'measuredAt',
+        label: `Readings measured at (${parameterNamed(resistivityAt, 'measured_temperature_K').unit ?? 'K'})`,
+        value: kelvinOf(measuredAt!.value, measuredAt!.unit),
+      },
+    ] : []),
     // A model or material left to its default gets no cell: the formulas then omit the argument, rather than
     // pass a reference to a blank cell (how Excel hands a blank cell to a custom function is not documented).
     ...(settings.model.trim() === '' ? [] : [{ key: 'model', label: 'Doping model', value: settings.model.trim() }]),
     ...(settings.material.trim() === '' ? [] : [{ key: 'material', label: 'Material', value: settings.material.trim() }]),
-    ...(radialLimit === null ? [] : [{ key: 'radialLimit', label: `Max |radial variation| (${radial.result.unit ?? '%'})`, value: radialLimit }]),
+    ...(radialLimit === null ? [] : [
+      { key: 'radialLimit', label: `Max |radial variation| (${radial.result.unit ?? '%'})`, value: radialLimit },
+    ]),
   ];
 
   const columns: PlannedColumn[] = [];
@@ -203,19 +212,23 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
 
   const windowColumn = columns.length;
   columns.push({
-    header: settings.windowRule === 'certified-inside-needed' ? 'Certified doping inside needed window' : 'Needed window inside certified doping',
+    header:
+      settings.windowRule === 'certified-inside-needed' ? 'Certified doping inside needed window' : 'Needed window inside certified doping',
     formula: (row) => {
       const pair = `${newCell(atRhoMaxColumn, row)},${newCell(atRhoMinColumn, row)}`;
       const [low, high] = [`MIN(${pair})`, `MAX(${pair})`];
       const [min, max] = [parameterRef('neededMin'), parameterRef('neededMax')];
-      const inside = settings.windowRule === 'certified-inside-needed' ? `AND(${low}>=${min},${high}<=${max})` : `AND(${low}<=${min},${high}>=${max})`;
+      const inside =
+        settings.windowRule === 'certified-inside-needed' ? `AND(${low}>=${min},${high}<=${max})` : `AND(${low}<=${min},${high}>=${max})`;
       return `IF(${inside},"${VERDICT.yes}","${VERDICT.no}")`;
     },
   });
 
   if (settings.modelSpread === true) {
     // The spilled row's names come from the catalog entry; the relative spread has no unit (shown as %).
-    if (dopingSpread.kind !== 'tuple' || dopingSpread.columns.length !== 3) throw new Error(`${dopingSpread.name} is not a row of three values`);
+    if (dopingSpread.kind !== 'tuple' || dopingSpread.columns.length !== 3) throw new Error(
+      `${dopingSpread.name} is not a row of three values`,
+    );
     const [lowest, highest, relative] = dopingSpread.columns;
     const spreadUnit = dopingSpread.result.unit ?? densityUnit;
     for (const [role, end] of [['rho-max', 'ρmax'], ['rho-min', 'ρmin']] as const) {
@@ -244,7 +257,8 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
       const header = headers[column - block.column] ?? '';
       correctedOffset.set(column, columns.length);
       columns.push({
-        header: `${header === '' ? `Column ${columnName(column)}` : header} at certificate temperature (${resistivityAt.result.unit ?? 'Ω·cm'})`,
+        header: `${header === '' ? `Column ${columnName(column)}` : header} at certificate temperature ` +
+          `(${resistivityAt.result.unit ?? 'Ω·cm'})`,
         numberFormat: FORMATS.resistivity,
         formula: (row) => {
           const reading = cellName(row, column);
@@ -264,7 +278,10 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
   }
   /** References of reading cells in a row, corrected where correcting (then in Ω·cm). */
   const readingRefs = (columnsWanted: readonly number[], row: number): string =>
-    correcting ? rowReferences(columnsWanted.map((column) => firstNew + correctedOffset.get(column)!), row) : rowReferences(columnsWanted, row);
+    correcting ? rowReferences(
+      columnsWanted.map((column) => firstNew + correctedOffset.get(column)!),
+      row,
+    ) : rowReferences(columnsWanted, row);
   const readingRef = (role: ColumnRole, row: number): string => readingRefs([sheetColumn(role)], row);
 
   const readingsColumn = readingColumns.length > 0 ? columns.length : -1;
@@ -277,7 +294,8 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
         const window = correcting
           ? `${scaled(ref('rho-min', row), rhoFactor)},${scaled(ref('rho-max', row), rhoFactor)}`
           : `${ref('rho-min', row)},${ref('rho-max', row)}`;
-        return `IF(COUNT(${readings})=0,"${VERDICT.none}",IF(AND(MIN(${readings})>=MIN(${window}),MAX(${readings})<=MAX(${window})),"${VERDICT.yes}","${VERDICT.no}"))`;
+        const inside = `AND(MIN(${readings})>=MIN(${window}),MAX(${readings})<=MAX(${window}))`;
+        return `IF(COUNT(${readings})=0,"${VERDICT.none}",IF(${inside},"${VERDICT.yes}","${VERDICT.no}"))`;
       },
     });
   }
@@ -286,10 +304,14 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     const thicknessFactor = unitByCode(THICKNESS_UNITS, settings.thicknessUnit ?? '').factor;
     const fromReadings = readingColumns.length > 0;
     columns.push({
-      header: `Rs at nominal thickness, ${fromReadings ? (correcting ? 'mean corrected reading' : 'mean reading') : 'mid-window ρ'} (${sheetRes.result.unit ?? 'Ω/sq'})`,
+      header: `Rs at nominal thickness, ` +
+        `${fromReadings ? (correcting ? 'mean corrected reading' : 'mean reading') : 'mid-window ρ'} ` +
+        `(${sheetRes.result.unit ?? 'Ω/sq'})`,
       numberFormat: FORMATS.sheetResistance,
       formula: (row) => {
-        const rho = fromReadings ? `AVERAGE(${readingRefs(readingColumns, row)})` : `AVERAGE(${ref('rho-min', row)},${ref('rho-max', row)})`;
+        const rho = fromReadings
+          ? `AVERAGE(${readingRefs(readingColumns, row)})`
+          : `AVERAGE(${ref('rho-min', row)},${ref('rho-max', row)})`;
         const inOhmCm = fromReadings && correcting ? rho : scaled(rho, rhoFactor);
         return callText(sheetRes, { resistivity: inOhmCm, thickness_um: scaled(ref('thickness', row), thicknessFactor) });
       },
@@ -324,8 +346,20 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
 
   parameterColumn = firstNew + columns.length + 1;
   const dataRows = block.rowCount - 1;
-  const columnsBlock: CellBlock = { sheet: block.sheet, row: block.row, column: firstNew, rowCount: block.rowCount, columnCount: columns.length };
-  const parameterBlock: CellBlock = { sheet: block.sheet, row: block.row, column: parameterColumn, rowCount: parameters.length, columnCount: 2 };
+  const columnsBlock: CellBlock = {
+    sheet: block.sheet,
+    row: block.row,
+    column: firstNew,
+    rowCount: block.rowCount,
+    columnCount: columns.length,
+  };
+  const parameterBlock: CellBlock = {
+    sheet: block.sheet,
+    row: block.row,
+    column: parameterColumn,
+    rowCount: parameters.length,
+    columnCount: 2,
+  };
   const cells: CellInput[][] = [
     columns.map((column) => column.header),
     ...Array.from({ length: dataRows }, (_, index) =>
@@ -335,15 +369,32 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
       }),
     ),
   ];
-  const passFailBlock: CellBlock = { sheet: block.sheet, row: block.row + 1, column: firstNew + passColumn, rowCount: dataRows, columnCount: 1 };
+  const passFailBlock: CellBlock = {
+    sheet: block.sheet,
+    row: block.row + 1,
+    column: firstNew + passColumn,
+    rowCount: dataRows,
+    columnCount: 1,
+  };
 
-  const dataColumn = (offset: number): CellBlock => ({ sheet: block.sheet, row: block.row + 1, column: firstNew + offset, rowCount: dataRows, columnCount: 1 });
+  const dataColumn = (offset: number): CellBlock => ({
+    sheet: block.sheet,
+    row: block.row + 1,
+    column: firstNew + offset,
+    rowCount: dataRows,
+    columnCount: 1,
+  });
   const styles = [
     { block: { ...columnsBlock, rowCount: 1 }, bold: true },
     { block: { ...parameterBlock, rowCount: 1, columnCount: 1 }, bold: true },
     ...columns.flatMap((column, offset) => (column.numberFormat ? [{ block: dataColumn(offset), numberFormat: column.numberFormat }] : [])),
     ...parameters.flatMap((parameter, index) =>
-      parameter.numberFormat ? [{ block: { sheet: block.sheet, row: block.row + index, column: parameterColumn + 1, rowCount: 1, columnCount: 1 }, numberFormat: parameter.numberFormat }] : [],
+      parameter.numberFormat ? [
+        {
+          block: { sheet: block.sheet, row: block.row + index, column: parameterColumn + 1, rowCount: 1, columnCount: 1 },
+          numberFormat: parameter.numberFormat,
+        },
+      ] : [],
     ),
   ];
 

@@ -39,7 +39,13 @@ export const MULTI_COLUMN_ROLES: ReadonlySet<ColumnRole> = new Set<ColumnRole>([
 export const READING_ROLES: ReadonlySet<ColumnRole> = new Set<ColumnRole>(['rho-center', 'rho-edge', 'rho-reading']);
 
 /** Roles whose columns hold a resistivity (certified bounds and readings). */
-export const RESISTIVITY_ROLES: ReadonlySet<ColumnRole> = new Set<ColumnRole>(['rho-min', 'rho-max', 'rho-center', 'rho-edge', 'rho-reading']);
+export const RESISTIVITY_ROLES: ReadonlySet<ColumnRole> = new Set<ColumnRole>([
+  'rho-min',
+  'rho-max',
+  'rho-center',
+  'rho-edge',
+  'rho-reading',
+]);
 
 /**
  * Checks that single roles are given to at most one column.

@@ -22,8 +22,20 @@ export interface ColumnUnit {
 
 /** Thickness units; the DRIFT functions take µm. */
 export const THICKNESS_UNITS: readonly ColumnUnit[] = [
-  { code: 'um', label: 'µm', factor: 1, source: 'the functions’ own unit', spellings: ['um', 'micron', 'microns', 'micrometre', 'micrometer', 'micrometres', 'micrometers'] },
-  { code: 'mm', label: 'mm', factor: 1000, source: 'SI prefixes: 1 mm = 1000 µm', spellings: ['mm', 'millimetre', 'millimeter', 'millimetres', 'millimeters'] },
+  {
+    code: 'um',
+    label: 'µm',
+    factor: 1,
+    source: 'the functions’ own unit',
+    spellings: ['um', 'micron', 'microns', 'micrometre', 'micrometer', 'micrometres', 'micrometers'],
+  },
+  {
+    code: 'mm',
+    label: 'mm',
+    factor: 1000,
+    source: 'SI prefixes: 1 mm = 1000 µm',
+    spellings: ['mm', 'millimetre', 'millimeter', 'millimetres', 'millimeters'],
+  },
   {
     code: 'mil',
     label: 'mil (0.001 inch)',

@@ -40,7 +40,8 @@ export function materialCode(settings: CertificateSettings): string {
  */
 export function requireTableRows(block: CellBlock): void {
   if (block.rowCount < 2) {
-    throw new PaneRefusal(`Select the whole certificate table, header row included: the selection ${sheetAddress(block)} has only one row.`);
+    throw new PaneRefusal(`Select the whole certificate table, header row included: the selection ` +
+      `${sheetAddress(block)} has only one row.`);
   }
 }
 
@@ -74,8 +75,11 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
   if (neededMin > neededMax) {
     throw new PaneRefusal(`Needed doping min (${neededMin}) is above needed doping max (${neededMax}); swap them.`);
   }
-  if (!Number.isFinite(settings.temperatureK) || settings.temperatureK < TEMPERATURE_RANGE_K.min || settings.temperatureK > TEMPERATURE_RANGE_K.max) {
-    throw new PaneRefusal(`Temperature must be ${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K; got ${String(settings.temperatureK)}.`);
+  if (!Number.isFinite(
+    settings.temperatureK,
+  ) || settings.temperatureK < TEMPERATURE_RANGE_K.min || settings.temperatureK > TEMPERATURE_RANGE_K.max) {
+    throw new PaneRefusal(`Temperature must be ${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K; got ` +
+      `${String(settings.temperatureK)}.`);
   }
   const doping = catalogEntry('DOPING');
   for (const name of ['model', 'material'] as const) {
@@ -88,12 +92,14 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
     }
   }
   if (!settings.mapping.includes('type') && knownDopant(settings.dopant, materialCode(settings)) === null) {
-    throw new PaneRefusal(`No column is mapped to 'Type or dopant', and the dopant '${settings.dopant}' is unknown; choose one of the listed dopants.`);
+    throw new PaneRefusal(`No column is mapped to 'Type or dopant', and the dopant '${settings.dopant}' is ` +
+      `unknown; choose one of the listed dopants.`);
   }
   if (settings.mapping.includes('thickness') && settings.thicknessUnit === null) {
     const header = headers[settings.mapping.indexOf('thickness')];
     throw new PaneRefusal(
-      `The thickness column '${header}' names no unit the check knows; choose its unit (${THICKNESS_UNITS.map((unit) => unit.label).join(', ')}) or set the column to 'not used'.`,
+      `The thickness column '${header}' names no unit the check knows; choose its unit ` +
+        `(${THICKNESS_UNITS.map((unit) => unit.label).join(', ')}) or set the column to 'not used'.`,
     );
   }
   if (!RESISTIVITY_UNITS.some((unit) => unit.code === settings.resistivityUnit)) {
@@ -102,22 +108,30 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
   const measuredAt = settings.measuredAt ?? null;
   if (measuredAt !== null) {
     const unit = TEMPERATURE_UNITS.find((candidate) => candidate.code === measuredAt.unit);
-    if (unit === undefined) throw new PaneRefusal(`Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((u) => u.label).join(' or ')}).`);
+    if (unit === undefined) throw new PaneRefusal(
+      `Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((u) => u.label).join(' or ')}).`,
+    );
     const kelvin = kelvinOf(measuredAt.value, measuredAt.unit);
     if (!Number.isFinite(kelvin) || kelvin < TEMPERATURE_RANGE_K.min || kelvin > TEMPERATURE_RANGE_K.max) {
+      const celsius = (kelvinValue: number) => (kelvinValue - CELSIUS_ZERO_K).toFixed(2);
+      const celsiusRangeText = ` (${celsius(TEMPERATURE_RANGE_K.min)} to ${celsius(TEMPERATURE_RANGE_K.max)} °C)`;
       throw new PaneRefusal(
-        `Readings measured at ${String(measuredAt.value)} ${unit.label} is outside ${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K` +
-          `${measuredAt.unit === 'C' ? ` (${(TEMPERATURE_RANGE_K.min - CELSIUS_ZERO_K).toFixed(2)} to ${(TEMPERATURE_RANGE_K.max - CELSIUS_ZERO_K).toFixed(2)} °C)` : ''}; is the unit right?`,
+        `Readings measured at ${String(measuredAt.value)} ${unit.label} is outside ` +
+          `${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K` +
+          `${measuredAt.unit === 'C' ? celsiusRangeText : ''}; ` +
+            `is the unit right?`,
       );
     }
     if (settings.model.trim().toLowerCase() === 'astm-f723') {
       throw new PaneRefusal(
-        `The doping model astm-f723 has no temperature dependence, so readings measured at another temperature cannot be corrected with it; choose another model or clear 'Readings measured at'.`,
+        `The doping model astm-f723 has no temperature dependence, so readings measured at another ` +
+          `temperature cannot be corrected with it; choose another model or clear 'Readings measured at'.`,
       );
     }
   }
   if (settings.radialLimitPercent !== null && (!Number.isFinite(settings.radialLimitPercent) || settings.radialLimitPercent < 0)) {
-    throw new PaneRefusal(`The radial variation limit must be a number ≥ 0 (%), or left blank; got ${String(settings.radialLimitPercent)}.`);
+    throw new PaneRefusal(`The radial variation limit must be a number ≥ 0 (%), or left blank; got ` +
+      `${String(settings.radialLimitPercent)}.`);
   }
 }
 
@@ -155,11 +169,15 @@ export function rowWarnings(table: CertificateTable, settings: CertificateSettin
   }
   if (usable === 0) {
     throw new PaneRefusal(
-      `No row of ${sheetAddress(block)} has positive numbers in both the ρ min and ρ max columns; check the mapping (the first row must be the header row).`,
+      `No row of ${sheetAddress(block)} has positive numbers in both the ρ min and ρ max columns; check the ` +
+        `mapping (the first row must be the header row).`,
     );
   }
-  if (notNumbers.length > 0) warnings.push(`Rows ${notNumbers.join(', ')}: ρ min or ρ max is not a positive number, so their doping shows an error.`);
-  if (swapped.length > 0) warnings.push(`Rows ${swapped.join(', ')}: ρ min is above ρ max; the check uses the lower and higher of the two.`);
+  if (notNumbers.length > 0) warnings.push(`Rows ${notNumbers.join(', ')}: ρ min or ρ max is not a positive ` +
+    `number, so their doping shows an error.`);
+  if (swapped.length > 0) warnings.push(
+    `Rows ${swapped.join(', ')}: ρ min is above ρ max; the check uses the lower and higher of the two.`,
+  );
   if (unknownTypes.length > 0) {
     warnings.push(
       `Type not known as a dopant in ${unknownTypes.join(', ')}; those rows show an error. ` +

@@ -46,28 +46,62 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   let table: { block: CellBlock; guess: CertificateGuess } | null = null;
 
   const readButton = element(doc, 'button', { type: 'button', id: `${ID}-read`, class: 'dc-button', text: 'Read selected table' });
-  const mappingSection = element(doc, 'section', { id: `${ID}-mapping`, class: 'dc-group', 'aria-labelledby': `${ID}-mapping-title`, hidden: true });
+  const mappingSection = element(
+    doc,
+    'section',
+    { id: `${ID}-mapping`, class: 'dc-group', 'aria-labelledby': `${ID}-mapping-title`, hidden: true },
+  );
   const notes = element(doc, 'ul', { id: `${ID}-notes`, class: 'dc-notes' });
 
   // Units and type options, filled per table.
-  const rhoUnit = selectOf(doc, `${ID}-rho-unit`, [[CHOOSE, 'choose…'], ...RESISTIVITY_UNITS.map((unit) => [unit.code, unit.label] as const)], RESISTIVITY_UNITS[0].code);
-  const thicknessUnit = selectOf(doc, `${ID}-thickness-unit`, [[CHOOSE, 'choose…'], ...THICKNESS_UNITS.map((unit) => [unit.code, unit.label] as const)], CHOOSE);
+  const rhoUnit = selectOf(
+    doc,
+    `${ID}-rho-unit`,
+    [[CHOOSE, 'choose…'], ...RESISTIVITY_UNITS.map((unit) => [unit.code, unit.label] as const)],
+    RESISTIVITY_UNITS[0].code,
+  );
+  const thicknessUnit = selectOf(
+    doc,
+    `${ID}-thickness-unit`,
+    [[CHOOSE, 'choose…'], ...THICKNESS_UNITS.map((unit) => [unit.code, unit.label] as const)],
+    CHOOSE,
+  );
   const typeSwitch = element(doc, 'input', { type: 'checkbox', id: `${ID}-type-means-conductivity`, checked: true });
   typeSwitch.checked = true;
   const dopants = dopingChoices('dopant');
-  const dopantSelect = selectOf(doc, `${ID}-dopant`, dopants.codes.map((code) => [code, code] as const), dopants.codes.includes('B') ? 'B' : dopants.codes[0] ?? '');
-  const thicknessField = labelledControl(doc, 'Thickness unit', thicknessUnit, 'Converted to µm in the formulas: mm × 1000, mil × 25.4 (1 mil = 0.001 inch).');
+  const dopantSelect = selectOf(
+    doc,
+    `${ID}-dopant`,
+    dopants.codes.map((code) => [code, code] as const),
+    dopants.codes.includes('B') ? 'B' : dopants.codes[0] ?? '',
+  );
+  const thicknessField = labelledControl(
+    doc,
+    'Thickness unit',
+    thicknessUnit,
+    'Converted to µm in the formulas: mm × 1000, mil × 25.4 (1 mil = 0.001 inch).',
+  );
   const typeField = checkField(
     doc,
     typeSwitch,
     'Type column gives conductivity type: P means p-type, N means n-type',
-    'On: a lone P or N (any case) becomes the generic acceptor or donor (boron-like or phosphorus-like mobility). Off: P means phosphorus, N nitrogen. B, As, Sb, Boron, n-type… are read as written either way.',
+    'On: a lone P or N (any case) becomes the generic acceptor or donor (boron-like or phosphorus-like ' +
+      'mobility). Off: P means phosphorus, N nitrogen. B, As, Sb, Boron, n-type… are read as written ' +
+      'either way.',
   );
   const dopantField = labelledControl(doc, 'Dopant (no type column mapped)', dopantSelect);
 
   // Window and options.
-  const neededMin = element(doc, 'input', { type: 'text', id: `${ID}-needed-min`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 1e15' });
-  const neededMax = element(doc, 'input', { type: 'text', id: `${ID}-needed-max`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 2e15' });
+  const neededMin = element(
+    doc,
+    'input',
+    { type: 'text', id: `${ID}-needed-min`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 1e15' },
+  );
+  const neededMax = element(
+    doc,
+    'input',
+    { type: 'text', id: `${ID}-needed-max`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 2e15' },
+  );
   const windowRule = selectOf(doc, `${ID}-window-rule`, WINDOW_RULES, WINDOW_RULES[0][0]);
   const temperature = element(doc, 'input', { type: 'text', id: `${ID}-temperature`, inputmode: 'decimal', autocomplete: 'off' });
   // Certificates state resistivity at 23 °C (the temperature of ASTM F723 and F84), so the check starts
@@ -75,8 +109,24 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const defaultTemperature = String(F723_ANCHOR_TEMPERATURE);
   temperature.value = defaultTemperature;
   // Readings taken at the lab's temperature: optional; its unit is chosen by the user, never read from the number.
-  const measuredAt = element(doc, 'input', { type: 'text', id: `${ID}-measured-at`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'blank: at the certificate temperature' });
-  const measuredUnit = selectOf(doc, `${ID}-measured-unit`, [[CHOOSE, 'choose…'], ...TEMPERATURE_UNITS.map((unit) => [unit.code, unit.label] as const)], CHOOSE);
+  const measuredAt = element(
+    doc,
+    'input',
+    {
+      type: 'text',
+      id: `${ID}-measured-at`,
+      inputmode: 'decimal',
+      autocomplete: 'off',
+      spellcheck: 'false',
+      placeholder: 'blank: at the certificate temperature',
+    },
+  );
+  const measuredUnit = selectOf(
+    doc,
+    `${ID}-measured-unit`,
+    [[CHOOSE, 'choose…'], ...TEMPERATURE_UNITS.map((unit) => [unit.code, unit.label] as const)],
+    CHOOSE,
+  );
   measuredUnit.setAttribute('aria-label', 'Unit of readings measured at');
   const models = dopingChoices('model');
   const modelSelect = selectOf(doc, `${ID}-model`, [['', models.defaultCode], ...models.codes.map((code) => [code, code] as const)], '');
@@ -88,10 +138,16 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     doc,
     spreadSwitch,
     'Show the model spread: lowest and highest doping over the published models',
-    'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
-    'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
+    'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a ' +
+    'measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
+    'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever ' +
+    'doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
   );
-  const radialLimit = element(doc, 'input', { type: 'text', id: `${ID}-radial-limit`, inputmode: 'decimal', autocomplete: 'off', placeholder: 'no limit' });
+  const radialLimit = element(
+    doc,
+    'input',
+    { type: 'text', id: `${ID}-radial-limit`, inputmode: 'decimal', autocomplete: 'off', placeholder: 'no limit' },
+  );
   const addButton = element(doc, 'button', { type: 'button', id: `${ID}-add`, class: 'dc-button dc-primary', text: 'Add check columns' });
 
   const roleSelects: HTMLSelectElement[] = [];
@@ -117,7 +173,12 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     const body = element(doc, 'tbody');
     guess.headers.forEach((header, index) => {
       const letter = columnName(block.column + index);
-      const select = selectOf(doc, `${ID}-role-${index}`, COLUMN_ROLES.map((role) => [role, ROLE_LABELS[role]] as const), guess.mapping[index]);
+      const select = selectOf(
+        doc,
+        `${ID}-role-${index}`,
+        COLUMN_ROLES.map((role) => [role, ROLE_LABELS[role]] as const),
+        guess.mapping[index],
+      );
       select.setAttribute('aria-label', `Meaning of column ${letter}${header === '' ? '' : ` (${header})`}`);
       select.addEventListener('change', () => {
         refreshDependentFields();
@@ -168,9 +229,13 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     const temperatureK = parseNumberField(temperature.value, 'Temperature') ?? Number(defaultTemperature);
     const measuredValue = parseNumberField(measuredAt.value, 'Readings measured at');
     if (measuredValue !== null && measuredUnit.value === CHOOSE) {
-      throw new PaneRefusal(`Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((unit) => unit.label).join(' or ')}): ${measuredValue} could be either.`);
+      throw new PaneRefusal(`Choose the unit of 'Readings measured at' ` +
+        `(${TEMPERATURE_UNITS.map((unit) => unit.label).join(' or ')}): ${measuredValue} could be either.`);
     }
-    const measured: MeasuredAt | null = measuredValue === null ? null : { value: measuredValue, unit: measuredUnit.value as TemperatureUnit };
+    const measured: MeasuredAt | null = measuredValue === null ? null : {
+      value: measuredValue,
+      unit: measuredUnit.value as TemperatureUnit,
+    };
     return {
       mapping: currentMapping(),
       neededMin: min,
@@ -204,8 +269,10 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
         const mapped = guess.mapping.filter((role) => role !== 'ignore').length;
         context.announce(
           mapped === 0
-            ? `Read ${read.block.rowCount - 1} rows, but no header was recognised: is the first selected row the header row? Choose each column’s meaning by hand.`
-            : `Read ${read.block.rowCount - 1} wafer rows; ${mapped} of ${guess.headers.length} columns recognised. Check the mapping, then add the check.`,
+            ? `Read ${read.block.rowCount - 1} rows, but no header was recognised: is the first selected ` +
+              `row the header row? Choose each column’s meaning by hand.`
+            : `Read ${read.block.rowCount - 1} wafer rows; ${mapped} of ${guess.headers.length} columns ` +
+              `recognised. Check the mapping, then add the check.`,
           'info',
         );
         roleSelects[0]?.focus();
@@ -218,10 +285,14 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   addButton.addEventListener('click', () => {
     void (async () => {
       try {
-        if (table === null) throw new PaneRefusal('Select the certificate table in the sheet (header row included) and press “Read selected table” first.');
+        if (table === null) throw new PaneRefusal('Select the certificate table in the sheet (header row ' +
+          'included) and press “Read selected table” first.');
         const plan = await addCertificateCheck(context.port, table.block, readSettings());
         showNotes(plan.warnings);
-        context.announce(plan.warnings.length === 0 ? plan.summary : `${plan.summary} ${plan.warnings.length} warning(s) below.`, 'success');
+        context.announce(
+          plan.warnings.length === 0 ? plan.summary : `${plan.summary} ${plan.warnings.length} warning(s) below.`,
+          'success',
+        );
       } catch (error) {
         reportFailure(error);
       }
@@ -235,32 +306,43 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
       doc,
       'Pass when the',
       windowRule,
-      'Certified range inside needed window: every doping the certificate allows meets the design (higher ρ means lower doping). The other rule only asks that the certificate’s range covers the needed window.',
+      'Certified range inside needed window: every doping the certificate allows meets the design (higher ρ ' +
+        'means lower doping). The other rule only asks that the certificate’s range covers the needed ' +
+        'window.',
     ),
     spreadField,
   ]);
   const more = element(doc, 'details', { class: 'dc-group' }, [
     element(doc, 'summary', { text: 'More settings' }),
-    labelledControl(doc, 'Temperature (K)', temperature, 'Temperature at which the certificate’s resistivity values hold; blank means the functions’ default.'),
+    labelledControl(doc, 'Temperature (K)', temperature, 'Temperature at which the certificate’s ' +
+      'resistivity values hold; blank means the functions’ default.'),
     element(doc, 'div', { class: 'dc-row' }, [
       labelledControl(
         doc,
         'Readings measured at',
         measuredAt,
-        'Temperature of the lab when the centre, edge and other readings were taken. Each reading is then corrected to the temperature above with DRIFT.RESISTIVITYAT before it is checked. Blank: readings are taken as they are.',
+        'Temperature of the lab when the centre, edge and other readings were taken. Each reading is then ' +
+          'corrected to the temperature above with DRIFT.RESISTIVITYAT before it is checked. Blank: ' +
+          'readings are taken as they are.',
       ),
       labelledControl(doc, 'Unit', measuredUnit),
     ]),
     labelledControl(doc, 'Doping model', modelSelect),
     labelledControl(doc, 'Material', materialSelect),
-    labelledControl(doc, 'Max |radial variation| (%)', radialLimit, 'Blank: radial variation is shown but not part of pass/fail. Needs a centre and an edge column.'),
+    labelledControl(
+      doc,
+      'Max |radial variation| (%)',
+      radialLimit,
+      'Blank: radial variation is shown but not part of pass/fail. Needs a centre and an edge column.',
+    ),
   ]);
 
   panel.append(
     element(doc, 'h2', { text: 'Certificate check' }),
     element(doc, 'p', {
       class: 'dc-hint',
-      text: 'Select a supplier’s certificate table in the sheet, header row included. The check adds columns of live formulas to its right and never writes over your cells.',
+      text: 'Select a supplier’s certificate table in the sheet, header row included. The check adds ' +
+        'columns of live formulas to its right and never writes over your cells.',
     }),
     readButton,
     mappingSection,

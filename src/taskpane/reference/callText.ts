@@ -53,7 +53,8 @@ export function parameterNamed(spec: FunctionSpec, name: string): FunctionSpec['
   const found = spec.parameters.find((parameter) => parameter.name === name);
   if (found === undefined) {
     throw new Error(
-      `${qualifiedName(spec)} has no parameter '${name}'; its parameters are ${spec.parameters.map((parameter) => parameter.name).join(', ')}`,
+      `${qualifiedName(spec)} has no parameter '${name}'; its parameters are ` +
+        `${spec.parameters.map((parameter) => parameter.name).join(', ')}`,
     );
   }
   return found;

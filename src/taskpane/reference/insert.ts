@@ -32,7 +32,10 @@ export type ExampleArgument =
 export function exampleArguments(formula: string, spec: FunctionSpec): ExampleArgument[] | null {
   const call = readCall(formula);
   if (call === null || call.name.toUpperCase() !== qualifiedName(spec).toUpperCase()) return null;
-  return call.arguments.map((argument): ExampleArgument => (argument.kind === 'array' ? { kind: 'array', values: argument.rows.flat() } : argument));
+  return call.arguments.map((argument): ExampleArgument => (argument.kind === 'array' ? {
+    kind: 'array',
+    values: argument.rows.flat(),
+  } : argument));
 }
 
 /** What goes into one argument's value cells: one value, or a row of values for a reducing argument. */
@@ -55,7 +58,10 @@ function usable(argument: ExampleArgument | undefined, parameter: ParameterSpec)
  * @example prefillValues(DOPING) // [[10], ['B'], [null], [null], [null], [null]]
  */
 export function prefillValues(spec: FunctionSpec): Prefill[] {
-  const parsed = spec.examples.map((example) => exampleArguments(example.formula, spec)).filter((args): args is ExampleArgument[] => args !== null);
+  const parsed = spec.examples.map((example) => exampleArguments(
+    example.formula,
+    spec,
+  )).filter((args): args is ExampleArgument[] => args !== null);
   const complete = parsed.find((args) => spec.parameters.every((parameter, index) => usable(args[index], parameter) !== null));
   const chosen = complete ?? parsed[0] ?? [];
   return spec.parameters.map((parameter, index) => usable(chosen[index], parameter) ?? [null]);
@@ -129,7 +135,9 @@ export function planInsert(spec: FunctionSpec, at: CellBlock): InsertPlan {
   const block: CellBlock = { sheet: at.sheet, row: at.row, column: at.column, rowCount: argumentRows + 1, columnCount: width };
   const formulaCell: CellBlock = { sheet: at.sheet, row: at.row + argumentRows, column: at.column + 1, rowCount: 1, columnCount: 1 };
   const spill: CellBlock = { ...formulaCell, rowCount: resultRows, columnCount: resultColumns };
-  const missing = spec.parameters.filter((parameter, index) => !parameter.optional && prefill[index].every((value) => value === null)).map((parameter) => parameter.name);
+  const missing = spec.parameters
+    .filter((parameter, index) => !parameter.optional && prefill[index].every((value) => value === null))
+    .map((parameter) => parameter.name);
   return {
     writes: [{ block, cells }],
     alsoEmpty: resultRows > 1 || resultColumns > 1 ? [spill] : [],

@@ -16,7 +16,19 @@ import { citedModel } from './details';
  * @example foldSearchText('Ω·cm, cm⁻³') // 'ohm cm cm-3'
  */
 export function foldSearchText(text: string): string {
-  const superscripts: Record<string, string> = { '⁻': '-', '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9' };
+  const superscripts: Record<string, string> = {
+    '⁻': '-',
+    '⁰': '0',
+    '¹': '1',
+    '²': '2',
+    '³': '3',
+    '⁴': '4',
+    '⁵': '5',
+    '⁶': '6',
+    '⁷': '7',
+    '⁸': '8',
+    '⁹': '9',
+  };
   return text
     .replace(/[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (character) => superscripts[character])
     .replace(/[\u2126\u03A9\u03C9]/g, 'ohm')

@@ -29,7 +29,9 @@ function detailsContent(doc: Document, spec: FunctionSpec): Node[] {
       element(doc, 'td', {
         text:
           parameter.description +
-          (parameter.optional && parameter.defaultText !== null && !parameter.description.includes('blank means') ? ` Blank means ${parameter.defaultText}.` : ''),
+          (parameter.optional && parameter.defaultText !== null && !parameter.description.includes('blank means')
+            ? ` Blank means ${parameter.defaultText}.`
+            : ''),
       }),
     ]),
   );
@@ -126,19 +128,32 @@ export function mountFunctionReference(panel: HTMLElement, context: ToolContext)
     placeholder: 'name, quantity, unit or model',
   });
   const count = element(doc, 'p', { id: `${ID}-count`, class: 'dc-hint', 'aria-live': 'polite' });
-  const list = element(doc, 'ul', { id: `${ID}-results`, role: 'listbox', class: 'dc-listbox', tabindex: '0', 'aria-label': 'Matching functions' });
+  const list = element(
+    doc,
+    'ul',
+    { id: `${ID}-results`, role: 'listbox', class: 'dc-listbox', tabindex: '0', 'aria-label': 'Matching functions' },
+  );
   const detailsPanel = element(doc, 'section', { id: `${ID}-details`, class: 'dc-details', 'aria-labelledby': `${ID}-details-title` });
-  const insertButton = element(doc, 'button', { type: 'button', id: `${ID}-insert`, class: 'dc-button dc-primary', text: 'Insert at the active cell' });
+  const insertButton = element(
+    doc,
+    'button',
+    { type: 'button', id: `${ID}-insert`, class: 'dc-button dc-primary', text: 'Insert at the active cell' },
+  );
 
   let shown: FunctionSpec[] = [];
   let selected: FunctionSpec | null = null;
 
   function select(spec: FunctionSpec | null, scroll = true): void {
     selected = spec;
-    for (const option of Array.from(list.children)) option.setAttribute('aria-selected', String(option.id === (spec ? optionId(spec) : '')));
+    for (const option of Array.from(list.children)) option.setAttribute(
+      'aria-selected',
+      String(option.id === (spec ? optionId(spec) : '')),
+    );
     if (spec === null) {
       list.removeAttribute('aria-activedescendant');
-      detailsPanel.replaceChildren(element(doc, 'p', { class: 'dc-hint', text: 'No function matches; try a shorter word, a unit such as ohm cm, or a model name.' }));
+      detailsPanel.replaceChildren(
+        element(doc, 'p', { class: 'dc-hint', text: 'No function matches; try a shorter word, a unit such as ohm cm, or a model name.' }),
+      );
       insertButton.disabled = true;
       return;
     }

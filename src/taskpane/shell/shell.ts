@@ -78,7 +78,12 @@ export function mountShell(container: HTMLElement, port: WorkbookPort, tools: re
     tab.addEventListener('click', () => show(index, false));
     tab.addEventListener('keydown', (event) => {
       const last = tabs.length - 1;
-      const target = { ArrowRight: index === last ? 0 : index + 1, ArrowLeft: index === 0 ? last : index - 1, Home: 0, End: last }[event.key];
+      const target = {
+        ArrowRight: index === last ? 0 : index + 1,
+        ArrowLeft: index === 0 ? last : index - 1,
+        Home: 0,
+        End: last,
+      }[event.key];
       if (target === undefined) return;
       event.preventDefault();
       show(target, true);

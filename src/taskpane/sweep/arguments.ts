@@ -59,8 +59,14 @@ function argumentsFor(
   const given: (SweepArgument | null)[] = parameters.map((spec) => {
     if (feeds !== null && spec.name === feeds) return { kind: 'inner' };
     if (models !== null && models.key === settingKey(owner, spec.name)) return models.argument;
-    if (owner === 'inner' && spec.name === DOPING_PARAMETER) return fixed.doping === null ? { kind: 'doping-axis' } : { kind: 'number', value: fixed.doping };
-    if (owner === 'inner' && spec.name === TEMPERATURE_PARAMETER) return fixed.temperatureK === null ? { kind: 'temperature-axis' } : { kind: 'number', value: fixed.temperatureK };
+    if (owner === 'inner' && spec.name === DOPING_PARAMETER) return fixed.doping === null ? { kind: 'doping-axis' } : {
+      kind: 'number',
+      value: fixed.doping,
+    };
+    if (owner === 'inner' && spec.name === TEMPERATURE_PARAMETER) return fixed.temperatureK === null ? { kind: 'temperature-axis' } : {
+      kind: 'number',
+      value: fixed.temperatureK,
+    };
     const entered = enteredArgument(spec, values[settingKey(owner, spec.name)]);
     if (typeof entered === 'string') {
       problems.push(entered);
@@ -111,10 +117,27 @@ export function buildCall(
   const invalid: string[] = [];
   const innerArguments = argumentsFor(quantity.inner.parameters, 'inner', values, fixed, null, models, problems, invalid);
   if (quantity.throughParameter === null) {
-    return { call: { outerName: qualifiedName(quantity.outer), outerArguments: innerArguments, innerName: null, innerArguments: [] }, problems, invalid };
+    return {
+      call: { outerName: qualifiedName(quantity.outer), outerArguments: innerArguments, innerName: null, innerArguments: [] },
+      problems,
+      invalid,
+    };
   }
-  const outerArguments = argumentsFor(quantity.outer.parameters, 'outer', values, fixed, quantity.throughParameter, models, problems, invalid);
-  return { call: { outerName: qualifiedName(quantity.outer), outerArguments, innerName: qualifiedName(quantity.inner), innerArguments }, problems, invalid };
+  const outerArguments = argumentsFor(
+    quantity.outer.parameters,
+    'outer',
+    values,
+    fixed,
+    quantity.throughParameter,
+    models,
+    problems,
+    invalid,
+  );
+  return {
+    call: { outerName: qualifiedName(quantity.outer), outerArguments, innerName: qualifiedName(quantity.inner), innerArguments },
+    problems,
+    invalid,
+  };
 }
 
 /** A number as formula text: plain digits for everyday sizes, else an exponent as Excel writes it (1E+15). */

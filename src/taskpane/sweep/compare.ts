@@ -67,9 +67,13 @@ export interface ModelComparison {
  * @returns the comparison, or a problem saying why there is none
  * @example compareModels(rho, { 'inner:dopant': 'B' }) // codes f723-anchored … astm-f723, call DRIFT.MODELCODES("resistivity",,"B")
  */
-export function compareModels(quantity: SweepQuantity, values: SettingValues): { ok: true; comparison: ModelComparison } | { ok: false; problem: string } {
+export function compareModels(
+  quantity: SweepQuantity,
+  values: SettingValues,
+): { ok: true; comparison: ModelComparison } | { ok: false; problem: string } {
   const setting = modelSettingOf(quantity);
-  if (setting === null) return { ok: false, problem: `Compare models needs a model argument; ${quantity.label} (${qualifiedName(quantity.outer)}) has none.` };
+  if (setting === null) return { ok: false, problem: `Compare models needs a model argument; ` +
+    `${quantity.label} (${qualifiedName(quantity.outer)}) has none.` };
   const owner = setting.key.slice(0, setting.key.indexOf(':')) as 'inner' | 'outer';
   const function_ = owner === 'inner' ? quantity.inner : quantity.outer;
   const entered = (name: string): string | undefined => {
@@ -88,7 +92,11 @@ export function compareModels(quantity: SweepQuantity, values: SettingValues): {
   const spec = findFunction(MODEL_CODES_FUNCTION);
   if (spec === undefined) return { ok: false, problem: `Compare models needs DRIFT.${MODEL_CODES_FUNCTION}, which this catalog lacks.` };
   // Literal arguments only, trailing blanks dropped, a blank material before a dopant left empty: DRIFT.MODELCODES("resistivity",,"B").
-  const literals = [textLiteral(setting.modelQuantity), material === undefined ? '' : textLiteral(material), dopant === undefined ? '' : textLiteral(dopant)];
+  const literals = [
+    textLiteral(setting.modelQuantity),
+    material === undefined ? '' : textLiteral(material),
+    dopant === undefined ? '' : textLiteral(dopant),
+  ];
   while (literals[literals.length - 1] === '') literals.pop();
   const call = `${qualifiedName(spec)}(${literals.join(',')})`;
   return { ok: true, comparison: { setting, codes, call, argument: { key: setting.key, argument: { kind: 'models', codes, call } } } };

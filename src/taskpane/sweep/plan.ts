@@ -76,7 +76,9 @@ function kelvinName(kelvin: number): string {
  */
 export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan {
   const { quantity, call, doping, temperature } = input;
-  if (doping === null && temperature === null) throw new RangeError('Sweep doping, temperature or both: with both fixed there is nothing to tabulate.');
+  if (doping === null && temperature === null) throw new RangeError(
+    'Sweep doping, temperature or both: with both fixed there is nothing to tabulate.',
+  );
   if (input.models !== undefined && input.models !== null) return planModelComparison(input, input.models, anchor);
   const sheet = anchor.sheet;
   const top = anchor.row;
@@ -110,9 +112,16 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
     references = { doping: blockAddress(dopingCells), temperature: blockAddress(kelvinCells) };
     formulaCell = block(sheet, dataTop, left + 1);
     results = block(sheet, dataTop, left + 1, doping.length, temperature.kelvin.length);
-    series = temperature.kelvin.map((k, j) => ({ name: kelvinName(k), x: dopingCells, y: block(sheet, dataTop, left + 1 + j, doping.length, 1) }));
+    series = temperature.kelvin.map((k, j) => ({
+      name: kelvinName(k),
+      x: dopingCells,
+      y: block(sheet, dataTop, left + 1 + j, doping.length, 1),
+    }));
     xTitle = 'Doping (cm⁻³)';
-    styles.push({ block: block(sheet, top + 1, left, headerRows, columns), bold: true }, { block: dopingCells, numberFormat: DOPING_FORMAT });
+    styles.push(
+      { block: block(sheet, top + 1, left, headerRows, columns), bold: true },
+      { block: dopingCells, numberFormat: DOPING_FORMAT },
+    );
   } else if (doping !== null) {
     const dataTop = top + 2;
     footprint = block(sheet, top, left, 2 + doping.length, 2);
@@ -164,7 +173,9 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
 /** Refuses a table that would run off the sheet (one spare column for the chart beside it). */
 function checkFits(footprint: CellBlock): void {
   if (footprint.row + footprint.rowCount > SHEET_ROWS || footprint.column + footprint.columnCount + 1 > SHEET_COLUMNS) {
-    throw new RangeError(`The table needs ${footprint.rowCount} rows × ${footprint.columnCount} columns from ${cellName(footprint.row, footprint.column)}, which runs off the sheet; select a cell further up or left.`);
+    throw new RangeError(`The table needs ${footprint.rowCount} rows × ${footprint.columnCount} columns ` +
+      `from ${cellName(footprint.row, footprint.column)}, which runs off the sheet; select a cell further ` +
+      `up or left.`);
   }
 }
 
@@ -195,8 +206,14 @@ function planModelComparison(input: SweepLayoutInput, models: ModelComparison, a
   const valueLeft = left + axisColumns;
   const writes: BlockWrite[] = [];
   const styles: StylePlan[] = [{ block: block(sheet, top, left), bold: true }];
-  const labels: CellInput[] = doping !== null ? ['Doping (cm⁻³) ↓ · Model →'] : celsius ? ['Temperature (°C)', 'Temperature (K) ↓ · Model →'] : ['Temperature (K) ↓ · Model →'];
-  writes.push({ block: block(sheet, top, left, 2, axisColumns), cells: [[title, ...Array<CellInput>(axisColumns - 1).fill(null)], labels] });
+  const labels: CellInput[] = doping !== null ? ['Doping (cm⁻³) ↓ · Model →'] : celsius ? [
+    'Temperature (°C)',
+    'Temperature (K) ↓ · Model →',
+  ] : ['Temperature (K) ↓ · Model →'];
+  writes.push({
+    block: block(sheet, top, left, 2, axisColumns),
+    cells: [[title, ...Array<CellInput>(axisColumns - 1).fill(null)], labels],
+  });
   let axisCells: CellBlock;
   let references: { doping: string | null; temperature: string | null };
   if (doping !== null) {
@@ -206,7 +223,10 @@ function planModelComparison(input: SweepLayoutInput, models: ModelComparison, a
     styles.push({ block: axisCells, numberFormat: DOPING_FORMAT });
   } else {
     const axis = temperature!;
-    writes.push({ block: block(sheet, dataTop, left, rows, axisColumns), cells: axis.kelvin.map((k, i) => (celsius ? [axis.entered[i], k] : [k])) });
+    writes.push({
+      block: block(sheet, dataTop, left, rows, axisColumns),
+      cells: axis.kelvin.map((k, i) => (celsius ? [axis.entered[i], k] : [k])),
+    });
     axisCells = block(sheet, dataTop, valueLeft - 1, rows, 1);
     references = { doping: null, temperature: blockAddress(axisCells) };
   }
@@ -216,11 +236,19 @@ function planModelComparison(input: SweepLayoutInput, models: ModelComparison, a
   const formula = formulaText(call, references);
   writes.push({ block: formulaCell, cells: [[formula]] });
   const results = block(sheet, dataTop, valueLeft, rows, count);
-  styles.push({ block: block(sheet, top + 1, left, 1, axisColumns + count), bold: true }, { block: results, numberFormat: quantity.logValues ? LOG_RESULT_FORMAT : LINEAR_RESULT_FORMAT });
+  styles.push(
+    { block: block(sheet, top + 1, left, 1, axisColumns + count), bold: true },
+    { block: results, numberFormat: quantity.logValues ? LOG_RESULT_FORMAT : LINEAR_RESULT_FORMAT },
+  );
   const chart: ChartPlan = {
     sheet,
     title: `${resultHeader}, ${count} models`,
-    series: models.codes.map((code, j) => ({ name: code, x: axisCells, y: block(sheet, dataTop, valueLeft + j, rows, 1), ...(j === 0 ? { emphasised: true } : {}) })),
+    series: models.codes.map((code, j) => ({
+      name: code,
+      x: axisCells,
+      y: block(sheet, dataTop, valueLeft + j, rows, 1),
+      ...(j === 0 ? { emphasised: true } : {}),
+    })),
     xTitle: doping !== null ? 'Doping (cm⁻³)' : 'Temperature (K)',
     yTitle: resultHeader,
     xLogarithmic: doping !== null,

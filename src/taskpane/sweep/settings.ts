@@ -6,7 +6,16 @@
 import { parseDecimalText } from '../../catalog/parameters';
 import { buildCall, numberText, settingKey, type SettingValues } from './arguments';
 import { compareModels, type ModelComparison } from './compare';
-import { MAX_TEMPERATURE_COLUMNS, MAX_TEMPERATURE_POINTS, dopingAxis, dopingAxisProblems, temperatureAxis, temperatureAxisProblems, toKelvin, type TemperatureUnit } from './axes';
+import {
+  MAX_TEMPERATURE_COLUMNS,
+  MAX_TEMPERATURE_POINTS,
+  dopingAxis,
+  dopingAxisProblems,
+  temperatureAxis,
+  temperatureAxisProblems,
+  toKelvin,
+  type TemperatureUnit,
+} from './axes';
 import type { SweepLayoutInput } from './plan';
 import { settingParameters, type SweepQuantity } from './quantities';
 
@@ -55,13 +64,21 @@ function number(text: string): number {
  */
 export function resolveSweep(form: SweepForm, quantities: readonly SweepQuantity[]): ResolvedSweep {
   const quantity = quantities.find((q) => q.id === form.quantityId);
-  if (quantity === undefined) return { ok: false, problems: [`Choose a quantity; "${form.quantityId}" is not one of ${quantities.map((q) => q.id).join(', ')}.`], invalid: ['quantityId'] };
+  if (quantity === undefined) return {
+    ok: false,
+    problems: [`Choose a quantity; "${form.quantityId}" is not one of ${quantities.map((q) => q.id).join(', ')}.`],
+    invalid: ['quantityId'],
+  };
   const problems: string[] = [];
   const invalid: string[] = [];
   const dopingSwept = quantity.hasDoping && form.dopingSwept;
   const temperatureSwept = quantity.hasTemperature && form.temperatureSwept;
   if (!dopingSwept && !temperatureSwept) {
-    problems.push(quantity.hasDoping && quantity.hasTemperature ? 'Sweep doping, temperature or both.' : `Sweep ${quantity.hasDoping ? 'doping' : 'temperature'}: ${quantity.label} has no other axis.`);
+    problems.push(
+      quantity.hasDoping && quantity.hasTemperature
+        ? 'Sweep doping, temperature or both.'
+        : `Sweep ${quantity.hasDoping ? 'doping' : 'temperature'}: ${quantity.label} has no other axis.`,
+    );
   }
 
   let doping: number[] | null = null;
@@ -84,7 +101,12 @@ export function resolveSweep(form: SweepForm, quantities: readonly SweepQuantity
   let temperature: SweepLayoutInput['temperature'] = null;
   let fixedKelvin: number | null = null;
   if (temperatureSwept) {
-    const axis = { from: number(form.temperatureFrom), to: number(form.temperatureTo), step: number(form.temperatureStep), unit: form.temperatureUnit };
+    const axis = {
+      from: number(form.temperatureFrom),
+      to: number(form.temperatureTo),
+      step: number(form.temperatureStep),
+      unit: form.temperatureUnit,
+    };
     const limit = dopingSwept ? MAX_TEMPERATURE_COLUMNS : MAX_TEMPERATURE_POINTS;
     const axisProblems = temperatureAxisProblems(axis, limit);
     if (axisProblems.length > 0) {
@@ -111,12 +133,18 @@ export function resolveSweep(form: SweepForm, quantities: readonly SweepQuantity
       invalid.push(COMPARE_MODELS_FIELD);
     } else if (dopingSwept && temperatureSwept) {
       // Models × doping × temperature would need a table per model; one axis keeps one spilled formula and one chart.
-      problems.push('Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature (with both, each model would need a table of its own).');
+      problems.push('Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature (with both, ' +
+        'each model would need a table of its own).');
       invalid.push(COMPARE_MODELS_FIELD);
     } else models = compared.comparison;
   }
 
-  const { call, problems: callProblems, invalid: callInvalid } = buildCall(quantity, form.values, { doping: fixedDoping, temperatureK: fixedKelvin }, models?.argument ?? null);
+  const { call, problems: callProblems, invalid: callInvalid } = buildCall(
+    quantity,
+    form.values,
+    { doping: fixedDoping, temperatureK: fixedKelvin },
+    models?.argument ?? null,
+  );
   problems.push(...callProblems);
   invalid.push(...callInvalid);
   if (problems.length > 0) return { ok: false, problems, invalid };

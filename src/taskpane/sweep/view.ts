@@ -21,11 +21,23 @@ import { availableQuantities, settingParameters, TEMPERATURE_PARAMETER, type Swe
 import { COMPARE_MODELS_FIELD, resolveSweep, type SweepForm } from './settings';
 
 /** Starting values of the axis controls (a typical wafer range; common practice, no source). */
-const START = { dopingFrom: '1e14', dopingTo: '1e20', pointsPerDecade: '5', fixedDoping: '1e15', temperatureFrom: '250', temperatureTo: '400', temperatureStep: '50' };
+const START = {
+  dopingFrom: '1e14',
+  dopingTo: '1e20',
+  pointsPerDecade: '5',
+  fixedDoping: '1e15',
+  temperatureFrom: '250',
+  temperatureTo: '400',
+  temperatureStep: '50',
+};
 
 type Control = HTMLInputElement | HTMLSelectElement;
 
-function make<K extends keyof HTMLElementTagNameMap>(doc: Document, tag: K, props: Partial<Record<'id' | 'className' | 'textContent', string>> = {}): HTMLElementTagNameMap[K] {
+function make<K extends keyof HTMLElementTagNameMap>(
+  doc: Document,
+  tag: K,
+  props: Partial<Record<'id' | 'className' | 'textContent', string>> = {},
+): HTMLElementTagNameMap[K] {
   const node = doc.createElement(tag);
   if (props.id !== undefined) node.id = props.id;
   if (props.className !== undefined) node.className = props.className;
@@ -53,7 +65,14 @@ function field(doc: Document, id: string, label: string, value: string, hint?: s
   return { wrap, input };
 }
 
-function selectField(doc: Document, id: string, label: string, options: readonly (readonly [string, string])[], value: string, hint?: string): { wrap: HTMLElement; select: HTMLSelectElement } {
+function selectField(
+  doc: Document,
+  id: string,
+  label: string,
+  options: readonly (readonly [string, string])[],
+  value: string,
+  hint?: string,
+): { wrap: HTMLElement; select: HTMLSelectElement } {
   const wrap = make(doc, 'div', { className: 'sw-field' });
   const labelNode = make(doc, 'label', { textContent: label });
   labelNode.htmlFor = id;
@@ -112,8 +131,16 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
   const doc = context.doc;
   panel.classList.add('sw-tool');
   const quantities = availableQuantities();
-  const intro = make(doc, 'p', { className: 'sw-hint', textContent: 'Tabulates a quantity over doping and/or temperature at the selected cell: axis values as cells, one spilled DRIFT formula, and an XY chart.' });
-  const quantity = selectField(doc, 'sw-quantity', 'Quantity', quantities.map((q) => [q.id, withUnit(q.label, q.unit)] as const), quantities[0]?.id ?? '');
+  const intro = make(doc, 'p', { className: 'sw-hint', textContent: 'Tabulates a quantity over doping ' +
+    'and/or temperature at the selected cell: axis values as cells, one spilled DRIFT formula, and an XY ' +
+    'chart.' });
+  const quantity = selectField(
+    doc,
+    'sw-quantity',
+    'Quantity',
+    quantities.map((q) => [q.id, withUnit(q.label, q.unit)] as const),
+    quantities[0]?.id ?? '',
+  );
   const settingsBox = make(doc, 'div', { id: 'sw-settings', className: 'sw-settings' });
 
   const dopingBox = make(doc, 'fieldset', { id: 'sw-doping', className: 'sw-axis' });
@@ -130,7 +157,14 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
   const temperatureBox = make(doc, 'fieldset', { id: 'sw-temperature', className: 'sw-axis' });
   temperatureBox.append(make(doc, 'legend', { textContent: 'Temperature axis' }));
   const temperatureSweep = checkbox(doc, 'sw-temperature-sweep', 'Sweep temperature', false);
-  const unit = selectField(doc, 'sw-temperature-unit', 'Entered in', [['K', 'K'], ['°C', '°C']], 'K', 'Formulas always receive kelvin; °C values are converted in the table.');
+  const unit = selectField(
+    doc,
+    'sw-temperature-unit',
+    'Entered in',
+    [['K', 'K'], ['°C', '°C']],
+    'K',
+    'Formulas always receive kelvin; °C values are converted in the table.',
+  );
   const temperatureFrom = field(doc, 'sw-temperature-from', 'From', START.temperatureFrom);
   const temperatureTo = field(doc, 'sw-temperature-to', 'To', START.temperatureTo);
   const temperatureStep = field(doc, 'sw-temperature-step', 'Step', START.temperatureStep);
@@ -155,7 +189,20 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
   const caption = make(doc, 'figcaption', { id: 'sw-plot-summary', className: 'sw-plot-summary' });
   const insert = make(doc, 'button', { id: 'sw-insert', className: 'sw-insert', textContent: 'Insert table and chart' });
   insert.type = 'button';
-  panel.append(intro, quantity.wrap, settingsBox, compareBox, dopingBox, temperatureBox, problems, formulaLabel, modelCodesFormula, formula, plotHolder, insert);
+  panel.append(
+    intro,
+    quantity.wrap,
+    settingsBox,
+    compareBox,
+    dopingBox,
+    temperatureBox,
+    problems,
+    formulaLabel,
+    modelCodesFormula,
+    formula,
+    plotHolder,
+    insert,
+  );
 
   let settingControls = new Map<string, Control>();
   /** Whether the user wants the temperature swept (kept while a quantity without doping forces it on). */
@@ -280,8 +327,12 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
       const { plan, chartError } = await insertSweep(context.port, resolved.input);
       const where = sheetAddress(plan.footprint);
       const axes = `${plan.chart.xLogarithmic ? 'log' : 'linear'} x, ${plan.chart.yLogarithmic ? 'log' : 'linear'} y`;
-      const codes = plan.modelCodes === null ? '' : `, under ${plan.modelCodes.formula} in ${blockAddress(plan.modelCodes.cell)} (one model per column)`;
-      const table = `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ${plan.results.rowCount} × ${plan.results.columnCount} values${codes}`;
+      const codes =
+        plan.modelCodes === null
+          ? ''
+          : `, under ${plan.modelCodes.formula} in ${blockAddress(plan.modelCodes.cell)} (one model per column)`;
+      const table = `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ` +
+        `${plan.results.rowCount} × ${plan.results.columnCount} values${codes}`;
       if (chartError === null) context.announce(`${table}; chart added (${axes}).`, 'success');
       else context.announce(`${table}; the chart could not be added: ${chartError}.`, 'error');
     } catch (error) {
