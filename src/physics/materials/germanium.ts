@@ -50,8 +50,7 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
     `(from memory); T^${exponentText(GERMANIUM_BANDS.conductionBand.exponent)} law: constant effective masses ` +
     '(common practice, no source)',
   validity:
-    '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is ' +
-    'an estimate',
+    '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is an estimate',
 };
 
 /** Melting point of Ge, 938 °C: solid-state models end there (common practice, no source). */
