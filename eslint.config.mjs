@@ -5,10 +5,13 @@
  * point down, front ends reach physics only through the catalog, and the
  * catalog reaches physics only through its barrel, src/physics/index.ts.
  * `npm run lint` runs it; DEVELOPERS.md ("Lint and layers") explains the rules.
+ * Layout is Prettier's (.prettierrc.json): eslint-config-prettier, last, turns
+ * off every rule that would judge formatting, so the two never disagree.
  */
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import { importX, createNodeResolver } from 'eslint-plugin-import-x';
+import prettierCompatible from 'eslint-config-prettier/flat';
 
 /** The Node globals the CommonJS scripts and configs use (no `globals` package needed for so few). */
 const NODE_GLOBALS = {
@@ -118,4 +121,6 @@ export default tseslint.config(
     files: ['**/*.mjs'],
     languageOptions: { sourceType: 'module', globals: NODE_GLOBALS },
   },
+  // Last, so no formatting rule enabled above survives.
+  prettierCompatible,
 );

@@ -22,6 +22,8 @@ const MAX_ROW = 1048576;
  * reference for the full list, which is not in our reference text; these are
  * the ones that read like words a physics catalog might use (from memory).
  */
+// Layout kept: an alphabetical word list packed a row at a time; Prettier would give every name a line of its own.
+// prettier-ignore
 export const EXCEL4_MACRO_NAMES: ReadonlySet<string> = new Set([
   'ABSREF', 'ACTIVE.CELL', 'ADD.BAR', 'ADD.COMMAND', 'ADD.MENU', 'ADD.TOOLBAR', 'APP.TITLE', 'ARGUMENT', 'BREAK', 'CALLER',
   'CANCEL.KEY', 'CUSTOM.REPEAT', 'CUSTOM.UNDO', 'DEREF', 'DIRECTORY', 'DOCUMENTS', 'ECHO', 'ELSE', 'ELSE.IF', 'END.IF',

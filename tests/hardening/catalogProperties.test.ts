@@ -225,7 +225,10 @@ describe('every catalog function on the edges of the number line', () => {
         for (const edge of edges) {
           const args = plausible.map((v, j) => (j === i ? edge : v));
           const grid = checkedEvaluate(spec, args);
-          if (plainlyBad(p, edge)) grid.flat().forEach((v) => expect({ fn: spec.name, arg: p.name, edge, error: isFailure(v) }).toEqual({ fn: spec.name, arg: p.name, edge, error: true }));
+          if (plainlyBad(p, edge)) {
+            const where = { fn: spec.name, arg: p.name, edge };
+            for (const v of grid.flat()) expect({ ...where, error: isFailure(v) }).toEqual({ ...where, error: true });
+          }
         }
       });
     }

@@ -19,6 +19,8 @@ describe('constants', () => {
   });
 
   it('derives kT/q: 25.852 mV at 300 K (common practice, no source)', () => {
+    // Layout kept: the trailing 0 is the seventh decimal toBeCloseTo(…, 7) checks; Prettier would drop it.
+    // prettier-ignore
     expect(thermalVoltage(300)).toBeCloseTo(0.0258520, 7);
     expect(thermalVoltage(600)).toBeCloseTo(2 * thermalVoltage(300), 15);
   });

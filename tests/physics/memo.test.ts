@@ -5,6 +5,7 @@
  */
 import { readdirSync, readFileSync } from 'fs';
 import { join, relative } from 'path';
+import * as ts from 'typescript';
 import { memoize, type MemoKey } from '../../src/physics/memo';
 
 /** A memoized function that counts how often it really computes. */
@@ -115,23 +116,29 @@ describe('memoize', () => {
 describe('the physics core keeps no cache of its own beside memo.ts', () => {
   // One policy for every remembered answer: a module-level Map, WeakMap or Set elsewhere in src/physics is a
   // second cache with its own eviction rule (docs/physics.md, "Memos").
+  // Read from the syntax tree, not line by line, so a declaration wrapped over several lines is found too.
   it('has no module-level Map, WeakMap or Set outside memo.ts', () => {
     const root = join(__dirname, '../../src/physics');
     const offenders: string[] = [];
-    const visit = (dir: string): void => {
+    const scan = (file: string): void => {
+      const source = ts.createSourceFile(file, readFileSync(file, 'utf8'), ts.ScriptTarget.ES2020, true);
+      const visit = (node: ts.Node): void => {
+        if (ts.isFunctionLike(node)) return; // made per call, not kept by the module
+        if (ts.isNewExpression(node) && ts.isIdentifier(node.expression) && /^(Weak)?(Map|Set)$/.test(node.expression.text)) {
+          offenders.push(`${relative(root, file)}:${source.getLineAndCharacterOfPosition(node.getStart(source)).line + 1}`);
+        }
+        ts.forEachChild(node, visit);
+      };
+      source.statements.filter(ts.isVariableStatement).forEach(visit);
+    };
+    const walk = (dir: string): void => {
       for (const entry of readdirSync(dir, { withFileTypes: true })) {
         const file = join(dir, entry.name);
-        if (entry.isDirectory()) visit(file);
-        else if (entry.name.endsWith('.ts') && file !== join(root, 'memo.ts')) {
-          readFileSync(file, 'utf8')
-            .split('\n')
-            .forEach((line, i) => {
-              if (/^(export )?(const|let|var) .*new (Weak)?(Map|Set)\b/.test(line)) offenders.push(`${relative(root, file)}:${i + 1}`);
-            });
-        }
+        if (entry.isDirectory()) walk(file);
+        else if (entry.name.endsWith('.ts') && file !== join(root, 'memo.ts')) scan(file);
       }
     };
-    visit(root);
+    walk(root);
     expect(offenders).toEqual([]);
   });
 });

@@ -29,8 +29,7 @@ import type { Dopant, DopantKind } from './types';
 export const GALLIUM_ARSENIDE_RELATIVE_PERMITTIVITY = 12.9;
 
 const SZE_NG_2007_GAAS =
-  'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, ionization energies in ' +
-  'GaAs (from memory)';
+  'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, ionization energies in GaAs (from memory)';
 
 const SPECIES_NOTE = `the GaAs mobility fit (${GALLIUM_ARSENIDE_SOTOODEH_FIT.code}) does not depend on the dopant species`;
 

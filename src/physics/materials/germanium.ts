@@ -54,8 +54,7 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
     `(from memory); T^${exponentText(GERMANIUM_BANDS.conductionBand.exponent)} law: constant effective masses ` +
     '(common practice, no source)',
   validity:
-    '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is ' +
-    'an estimate',
+    '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is an estimate',
   equation: 'src/physics/bands/densityOfStates.ts',
   parameterTable: 'src/physics/materials/germanium.ts',
   tests: ['tests/physics/reference/sze-ng-2007-ge-gaas.reference.test.ts', 'tests/physics/materials/hosts.test.ts'],

@@ -22,8 +22,7 @@ export const THURMOND_1975_BANDGAP: VarshniBandgap = {
   name: 'Thurmond (1975) Varshni-form band gap',
   ...THURMOND_CONSTANTS,
   citation:
-    `C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); ${varshniText(THURMOND_CONSTANTS, 4)} ` +
-    '(values from memory)',
+    `C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); ${varshniText(THURMOND_CONSTANTS, 4)} (values from memory)`,
   validity:
     'fitted to Si gap data from near 0 K to well above room temperature (from memory); the physics core ' +
     'evaluates it over 1–1687 K (between 1.17 and 0.59 eV there), the spreadsheet functions at 20–1000 K',
@@ -55,8 +54,7 @@ export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
     `Nv(300 K) = ${densityOfStatesText(GREEN_BANDS.valenceBand, 3)} cm⁻³; ` +
     `temperature exponents ${t(GREEN_BANDS.conductionBand.exponent)} and ${t(GREEN_BANDS.valenceBand.exponent)} (from memory)`,
   validity:
-    '300 K values; power laws approximate Green’s masses over about 200–500 K (from memory) and are ' +
-    'extrapolated outside that range',
+    '300 K values; power laws approximate Green’s masses over about 200–500 K (from memory) and are extrapolated outside that range',
   equation: 'src/physics/bands/densityOfStates.ts',
   parameterTable: 'src/physics/materials/silicon.ts',
   tests: ['tests/physics/reference/green-1990.reference.test.ts', 'tests/physics/bands/densityOfStates.test.ts'],

@@ -52,8 +52,7 @@ const ARSENIC_IONIZATION: IonizationParameters = {
   localizationDensity: 8.5e18,
   localizationExponent: 2.3,
   citation:
-    'P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100, 113715 (2006), Si:As ' +
-    '(parameter values from memory)',
+    'P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100, 113715 (2006), Si:As (parameter values from memory)',
   validity: ALTERMATT_VALIDITY,
 };
 
@@ -65,8 +64,7 @@ const BORON_IONIZATION: IonizationParameters = {
   localizationDensity: 6.0e18,
   localizationExponent: 2.4,
   citation:
-    'P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100, 113715 (2006), Si:B ' +
-    '(parameter values from memory)',
+    'P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100, 113715 (2006), Si:B (parameter values from memory)',
   validity: ALTERMATT_VALIDITY,
 };
 

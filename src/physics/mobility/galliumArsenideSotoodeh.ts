@@ -60,8 +60,7 @@ export const GALLIUM_ARSENIDE_SOTOODEH_FIT: MaterialMobilityFit = {
     `μmin ${ELECTRON_MIN} cm²/(V·s), Nref ${ELECTRON_NREF} cm⁻³, λ ${ELECTRON_LAMBDA}, θ1 ${ELECTRON_THETA1}, θ2 ${ELECTRON_THETA2}; ` +
     `holes ${paperValues(PARAMETERS.hole).join(', ')} (values from memory)`,
   validity:
-    'fitted to published GaAs mobility data, about 1e14–1e19 cm⁻³ at 300 K and roughly 100–500 K (from memory); ' +
-    'extrapolated outside',
+    'fitted to published GaAs mobility data, about 1e14–1e19 cm⁻³ at 300 K and roughly 100–500 K (from memory); extrapolated outside',
   notes:
     'Default for GaAs. Not dopant-specific. Above about 1200 K (outside the validity) μmax·(300/T)^θ1 falls ' +
     'below μmin. The fit describes free-carrier mobility (used unchanged, no full-ionization correction).',

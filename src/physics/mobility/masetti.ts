@@ -40,6 +40,9 @@ export type MasettiSpecies = 'As' | 'P' | 'B';
  * agree with a third-party quotation of Table I that was consulted, the B row
  * was not cross-checked. Validity: 300 K, 1e13…1e21 cm⁻³.
  */
+// Layout kept: each species' row of Table I on two lines (mobilities, then densities and exponents), so the
+// three rows compare at a glance; Prettier would put each parameter on a line of its own.
+// prettier-ignore
 export const MASETTI_TABLE: Readonly<Record<MasettiSpecies, { carrier: 'electron' | 'hole'; parameters: MasettiParameters }>> = {
   As: {
     carrier: 'electron',

@@ -28,6 +28,8 @@ describe('Masetti et al. (1983)', () => {
     expect(electronFit('As', 1e15) / electronFit('P', 1e15)).toBeCloseTo(1, 1);
   });
 
+  // Layout kept: each row of Table I on two lines, as in src/physics/mobility/masetti.ts, so the rows compare at a glance.
+  // prettier-ignore
   it('Table I: every parameter of the As, P and B rows as read in Charon (typed here, not read from our table)', () => {
     // The transcription prints the paper's figures; agreement is exact.
     expect(MASETTI_TABLE.As.parameters).toEqual({

@@ -6,6 +6,8 @@
 import { fourPointResistivity, valdesDivisor } from '../../../src/physics/measurement/fourPoint';
 
 describe('Valdes (1954) non-conducting-bottom divisor G7(w/s)', () => {
+  // Layout kept: Prettier would print 2.780 as 2.78, dropping a digit of Valdes' table.
+  // prettier-ignore
   it.each([
     [0.1, 13.863],
     [0.2, 6.931],
