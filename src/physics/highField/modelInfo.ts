@@ -7,12 +7,7 @@ import type { ModelInfo } from '../modelInfo';
 import { CAUGHEY_THOMAS_FIELD_EXPONENTS, CAUGHEY_THOMAS_FIELD_SOURCE } from './caugheyThomasField';
 import { CANALI_FIELD_EXPONENT_LAWS, CANALI_MODEL_CODE, CANALI_SOURCE, canaliExponentAt300K } from './canali';
 import { QUAY_GALLIUM_ARSENIDE, QUAY_MODEL_CODE, QUAY_PARAMETERS, QUAY_SOURCE, SILICON_HOLE_LAW_CROSSING_K } from './quay';
-import {
-  KHAN_COOPER_MODEL_CODE,
-  KHAN_COOPER_SATURATION_VELOCITY,
-  KHAN_COOPER_SILICON_CARBIDE,
-  KHAN_COOPER_SOURCE,
-} from './siliconCarbide';
+import { KHAN_COOPER_MODEL_CODE, KHAN_COOPER_SATURATION_VELOCITY, KHAN_COOPER_SILICON_CARBIDE, KHAN_COOPER_SOURCE } from './siliconCarbide';
 import { parameterText as t } from '../parameterText';
 
 /** Registry code of the Caughey–Thomas velocity–field relation. */
@@ -23,15 +18,17 @@ const VELOCITY = 'drift velocity vs field';
 /** "Si: v_sat,300 = 1.00e7 (e), 7.04e6 (h) cm/s, A = 0.26, 0.63; …" from the table itself. */
 function quayParameterText(): string {
   return Object.entries(QUAY_PARAMETERS)
-    .map(([material, { electron, hole }]) =>
-      `${material}: v_sat,300 = ${electron[0].toExponential(2)} (e), ${hole[0].toExponential(2)} (h) cm/s, A = ${electron[1]}, ${hole[1]}`)
+    .map(([material, { electron, hole }]) => {
+      const saturation = `v_sat,300 = ${electron[0].toExponential(2)} (e), ${hole[0].toExponential(2)} (h) cm/s`;
+      return `${material}: ${saturation}, A = ${electron[1]}, ${hole[1]}`;
+    })
     .join('; ');
 }
 const SATURATION = 'saturation velocity';
 
 /** "β = 2 (e), 1 (h)": the Caughey–Thomas exponents as the notes quote them, from the table. */
-const CAUGHEY_THOMAS_EXPONENTS_TEXT = `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} (e), ` +
-  `${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} (h)`;
+const CAUGHEY_THOMAS_EXPONENTS_TEXT =
+  `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} (e), ` + `${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} (h)`;
 
 /**
  * "2.57e-2·T^0.66 (e), 0.46·T^0.17 (h)": Canali's β(T) laws from the table.
@@ -60,7 +57,8 @@ export const HIGH_FIELD_MODELS: readonly ModelInfo[] = [
   {
     code: CANALI_MODEL_CODE,
     quantity: 'field exponent of the velocity–field relation, Si',
-    name: `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ` +
+    name:
+      `Canali et al. (1975) β at 300 K: ${canaliExponentAt300K('electron').toFixed(3)} (e), ` +
       `${canaliExponentAt300K('hole').toFixed(3)} (h), held constant`,
     citation: CANALI_SOURCE.citation,
     validity: CANALI_SOURCE.validity,
