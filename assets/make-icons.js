@@ -26,8 +26,14 @@ const AMBER = [242, 163, 58];
 /** Geometry in unit coordinates (x right, y down). */
 const BACKGROUND = { half: 0.5, radius: 0.2 };
 const BAND_HALF_WIDTH = 0.055;
-const UPPER_BAND = [[0.14, 0.38], [0.86, 0.17]];
-const LOWER_BAND = [[0.14, 0.83], [0.86, 0.62]];
+const UPPER_BAND = [
+  [0.14, 0.38],
+  [0.86, 0.17],
+];
+const LOWER_BAND = [
+  [0.14, 0.83],
+  [0.86, 0.62],
+];
 const ARROW = { from: [0.2, 0.62], to: [0.66, 0.485], shaftHalfWidth: 0.04, headLength: 0.2, headHalfWidth: 0.11 };
 
 function roundedSquareDistance(x, y) {
@@ -65,8 +71,7 @@ const arrowShape = (() => {
   const tip = [baseX + ux * ARROW.headLength, baseY + uy * ARROW.headLength];
   const left = [baseX - uy * ARROW.headHalfWidth, baseY + ux * ARROW.headHalfWidth];
   const right = [baseX + uy * ARROW.headHalfWidth, baseY - ux * ARROW.headHalfWidth];
-  return (x, y) =>
-    segmentDistance(x, y, [ARROW.from, [baseX, baseY]]) <= ARROW.shaftHalfWidth || insideTriangle(x, y, tip, left, right);
+  return (x, y) => segmentDistance(x, y, [ARROW.from, [baseX, baseY]]) <= ARROW.shaftHalfWidth || insideTriangle(x, y, tip, left, right);
 })();
 
 /** Colour at one sample point, or null for transparent. */
@@ -83,7 +88,10 @@ function render(size) {
   const n = SUPERSAMPLE * SUPERSAMPLE;
   for (let py = 0; py < size; py++) {
     for (let px = 0; px < size; px++) {
-      let r = 0, g = 0, b = 0, a = 0;
+      let r = 0,
+        g = 0,
+        b = 0,
+        a = 0;
       for (let sy = 0; sy < SUPERSAMPLE; sy++) {
         for (let sx = 0; sx < SUPERSAMPLE; sx++) {
           const colour = sample((px + (sx + 0.5) / SUPERSAMPLE) / size, (py + (sy + 0.5) / SUPERSAMPLE) / size);

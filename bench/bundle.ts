@@ -35,9 +35,20 @@ function installFakeRuntime(): void {
       w.__benchLastBind = performance.now();
     },
     Error: class {
-      constructor(readonly code: string, readonly message?: string) {}
+      constructor(
+        readonly code: string,
+        readonly message?: string,
+      ) {}
     },
-    ErrorCode: { invalidValue: '#VALUE!', notAvailable: '#N/A', divisionByZero: '#DIV/0!', invalidNumber: '#NUM!', nullReference: '#NULL!', invalidName: '#NAME?', invalidReference: '#REF!' },
+    ErrorCode: {
+      invalidValue: '#VALUE!',
+      notAvailable: '#N/A',
+      divisionByZero: '#DIV/0!',
+      invalidNumber: '#NUM!',
+      nullReference: '#NULL!',
+      invalidName: '#NAME?',
+      invalidReference: '#REF!',
+    },
   };
 }
 
@@ -55,19 +66,22 @@ export async function runBundle(projectRoot: string): Promise<Section> {
   const paneGzipKB = gzipSync(paneBytes, { level: 9 }).length / 1000;
 
   // The bundle is served uncached, so every load downloads and compiles it anew.
-  const server = await startServer((req, res) => {
-    const url = req.url ?? '/';
-    if (url.startsWith(HOST_PAGE)) {
-      res.writeHead(200, { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'no-store' });
-      res.end(HOST_HTML);
-    } else if (url.startsWith('/functions.js')) {
-      res.writeHead(200, { 'Content-Type': 'text/javascript; charset=utf-8', 'Cache-Control': 'no-store' });
-      res.end(bytes);
-    } else {
-      res.writeHead(404, { 'Content-Type': 'text/plain' });
-      res.end('not found');
-    }
-  }, { port: 0, host: '127.0.0.1' });
+  const server = await startServer(
+    (req, res) => {
+      const url = req.url ?? '/';
+      if (url.startsWith(HOST_PAGE)) {
+        res.writeHead(200, { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'no-store' });
+        res.end(HOST_HTML);
+      } else if (url.startsWith('/functions.js')) {
+        res.writeHead(200, { 'Content-Type': 'text/javascript; charset=utf-8', 'Cache-Control': 'no-store' });
+        res.end(bytes);
+      } else {
+        res.writeHead(404, { 'Content-Type': 'text/plain' });
+        res.end('not found');
+      }
+    },
+    { port: 0, host: '127.0.0.1' },
+  );
   const profile = mkdtempSync(path.join(os.tmpdir(), 'driftcell-bench-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: chromiumPath,
@@ -87,7 +101,13 @@ export async function runBundle(projectRoot: string): Promise<Section> {
       const timing = await page.evaluate(() => {
         const w = window as unknown as Record<string, number> & { CustomFunctions: { bound: object } };
         const entry = performance.getEntriesByType('resource').find((e) => e.name.endsWith('/functions.js')) as PerformanceResourceTiming;
-        return { fetched: entry.responseEnd, end: w.__benchEnd, first: w.__benchFirstBind, last: w.__benchLastBind, bound: Object.keys(w.CustomFunctions.bound).length };
+        return {
+          fetched: entry.responseEnd,
+          end: w.__benchEnd,
+          first: w.__benchFirstBind,
+          last: w.__benchLastBind,
+          bound: Object.keys(w.CustomFunctions.bound).length,
+        };
       });
       boundCount = timing.bound;
       if (i === 0) continue; // the first load warms the browser up
@@ -99,7 +119,8 @@ export async function runBundle(projectRoot: string): Promise<Section> {
     await server.close();
     rmSync(profile, { recursive: true, force: true });
   }
-  if (boundCount !== metadata.functions.length) throw new Error(`${boundCount} functions bound, functions.json lists ${metadata.functions.length}`);
+  if (boundCount !== metadata.functions.length)
+    throw new Error(`${boundCount} functions bound, functions.json lists ${metadata.functions.length}`);
   const t = target('bundle_gzip_kb', gzipKB, BUNDLE_MAX_GZIP_KB, '≤ 150 kB gzipped');
   const runMedian = median(runMs);
   return {
@@ -116,9 +137,30 @@ export async function runBundle(projectRoot: string): Promise<Section> {
     },
     targets: [t],
     rows: [
-      { benchmark: `6. functions bundle, minified + gzip`, ours: show(gzipKB, 'kB'), other: `${show(bytes.length / 1000, 'kB')} minified`, ratio: '—', target: '≤ 150 kB', met: t.met ? 'yes' : 'no' },
-      { benchmark: `6. task pane bundle (shares the core with functions.js), minified + gzip`, ours: show(paneGzipKB, 'kB'), other: `${show(paneBytes.length / 1000, 'kB')} minified`, ratio: '—', target: '—', met: '—' },
-      { benchmark: `6. run bundle and register all ${boundCount} functions, headless Chromium`, ours: show(runMedian, 'ms'), other: '—', ratio: '—', target: '—', met: '—' },
+      {
+        benchmark: `6. functions bundle, minified + gzip`,
+        ours: show(gzipKB, 'kB'),
+        other: `${show(bytes.length / 1000, 'kB')} minified`,
+        ratio: '—',
+        target: '≤ 150 kB',
+        met: t.met ? 'yes' : 'no',
+      },
+      {
+        benchmark: `6. task pane bundle (shares the core with functions.js), minified + gzip`,
+        ours: show(paneGzipKB, 'kB'),
+        other: `${show(paneBytes.length / 1000, 'kB')} minified`,
+        ratio: '—',
+        target: '—',
+        met: '—',
+      },
+      {
+        benchmark: `6. run bundle and register all ${boundCount} functions, headless Chromium`,
+        ours: show(runMedian, 'ms'),
+        other: '—',
+        ratio: '—',
+        target: '—',
+        met: '—',
+      },
     ],
   };
 }

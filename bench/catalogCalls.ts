@@ -43,30 +43,62 @@ const niFit = SILICON.intrinsicFits[0];
 /** The cases: every elementwise catalog function, with representative inputs. */
 const CASES: readonly CallCase[] = [
   {
-    name: 'BANDGAP', varying: 0, value: temperatures, fixed: [null],
-    closedForm: (t, out) => { for (let i = 0; i < t.length; i++) out[i] = gapAtZero - (alpha * t[i] * t[i]) / (t[i] + beta); },
-  },
-  {
-    name: 'CONDUCTIONDOS', varying: 0, value: temperatures, fixed: [null],
-    closedForm: (t, out) => { for (let i = 0; i < t.length; i++) out[i] = conduction.valueAtReference * Math.pow(t[i] / conduction.referenceTemperature, conduction.exponent); },
-  },
-  {
-    name: 'VALENCEDOS', varying: 0, value: temperatures, fixed: [null],
-    closedForm: (t, out) => { for (let i = 0; i < t.length; i++) out[i] = valence.valueAtReference * Math.pow(t[i] / valence.referenceTemperature, valence.exponent); },
-  },
-  {
-    name: 'INTRINSIC', varying: 0, value: temperatures, fixed: [null],
+    name: 'BANDGAP',
+    varying: 0,
+    value: temperatures,
+    fixed: [null],
     closedForm: (t, out) => {
-      for (let i = 0; i < t.length; i++) out[i] = niFit.prefactor * Math.pow(t[i] / niFit.referenceTemperature, niFit.exponent) * Math.exp(-niFit.activationTemperature / t[i]);
+      for (let i = 0; i < t.length; i++) out[i] = gapAtZero - (alpha * t[i] * t[i]) / (t[i] + beta);
     },
   },
   {
-    name: 'SHEETRES', varying: 0, value: resistivities, fixed: [null, 10],
-    closedForm: (rho, out) => { for (let i = 0; i < rho.length; i++) out[i] = rho[i] / (10 * CM_PER_UM); },
+    name: 'CONDUCTIONDOS',
+    varying: 0,
+    value: temperatures,
+    fixed: [null],
+    closedForm: (t, out) => {
+      for (let i = 0; i < t.length; i++)
+        out[i] = conduction.valueAtReference * Math.pow(t[i] / conduction.referenceTemperature, conduction.exponent);
+    },
   },
   {
-    name: 'RESISTOR', varying: 0, value: resistivities, fixed: [null, 450, 15, 2.5],
-    closedForm: (rho, out) => { for (let i = 0; i < rho.length; i++) out[i] = (rho[i] * 450) / (15 * 2.5 * CM_PER_UM); },
+    name: 'VALENCEDOS',
+    varying: 0,
+    value: temperatures,
+    fixed: [null],
+    closedForm: (t, out) => {
+      for (let i = 0; i < t.length; i++)
+        out[i] = valence.valueAtReference * Math.pow(t[i] / valence.referenceTemperature, valence.exponent);
+    },
+  },
+  {
+    name: 'INTRINSIC',
+    varying: 0,
+    value: temperatures,
+    fixed: [null],
+    closedForm: (t, out) => {
+      for (let i = 0; i < t.length; i++)
+        out[i] =
+          niFit.prefactor * Math.pow(t[i] / niFit.referenceTemperature, niFit.exponent) * Math.exp(-niFit.activationTemperature / t[i]);
+    },
+  },
+  {
+    name: 'SHEETRES',
+    varying: 0,
+    value: resistivities,
+    fixed: [null, 10],
+    closedForm: (rho, out) => {
+      for (let i = 0; i < rho.length; i++) out[i] = rho[i] / (10 * CM_PER_UM);
+    },
+  },
+  {
+    name: 'RESISTOR',
+    varying: 0,
+    value: resistivities,
+    fixed: [null, 450, 15, 2.5],
+    closedForm: (rho, out) => {
+      for (let i = 0; i < rho.length; i++) out[i] = (rho[i] * 450) / (15 * 2.5 * CM_PER_UM);
+    },
   },
   { name: 'ELECTRONS', varying: 0, value: densities, fixed: [null, 1e15] },
   { name: 'HOLES', varying: 0, value: densities, fixed: [null, 1e15] },
@@ -98,12 +130,14 @@ function columnValues(c: CallCase, n: number): Float64Array {
 /** Arguments of one broadcast call: the column in the varying slot. */
 function columnArguments(c: CallCase, spec: FunctionSpec, x: Float64Array): ArgumentInput[] {
   const column: CellInput[][] = Array.from(x, (v) => [v]);
-  return spec.parameters.map((_, k) => (k === c.varying ? column : c.fixed[k] ?? null));
+  return spec.parameters.map((_, k) => (k === c.varying ? column : (c.fixed[k] ?? null)));
 }
 
 /** The physics without the catalog: compute() over the column with the other arguments parsed once. */
 function directPhysics(c: CallCase, spec: ElementwiseSpec): (x: Float64Array, out: Float64Array) => void {
-  const parsed = spec.parameters.map((p, k) => (k === c.varying ? 0 : p.parse((c.fixed[k] ?? null) as Exclude<CellInput, { kind: 'failure' }>)));
+  const parsed = spec.parameters.map((p, k) =>
+    k === c.varying ? 0 : p.parse((c.fixed[k] ?? null) as Exclude<CellInput, { kind: 'failure' }>),
+  );
   const compute = spec.compute as (...a: unknown[]) => number;
   return (x, out) => {
     const args = parsed.slice();
@@ -145,7 +179,7 @@ export function runCatalogCalls(): Section {
     const x = columnValues(c, elements);
     const out = new Float64Array(elements);
     const args = columnArguments(c, spec, x);
-    const scalarArgs = spec.parameters.map((_, k) => (k === c.varying ? 0 : c.fixed[k] ?? null)) as ArgumentInput[];
+    const scalarArgs = spec.parameters.map((_, k) => (k === c.varying ? 0 : (c.fixed[k] ?? null))) as ArgumentInput[];
     const baseline = c.closedForm ?? directPhysics(c, spec);
     const [broadcastMs, singleMs, baselineMs] = sideBySide(
       [
@@ -193,12 +227,30 @@ export function runCatalogCalls(): Section {
   // The table function has no elementwise baseline: its cost per call only.
   const models = specNamed('MODELS');
   const calls = 2000;
-  const [modelsMs] = sideBySide([() => { for (let i = 0; i < calls; i++) consume(evaluate(models, []).length); }], 5);
+  const [modelsMs] = sideBySide(
+    [
+      () => {
+        for (let i = 0; i < calls; i++) consume(evaluate(models, []).length);
+      },
+    ],
+    5,
+  );
   results.push({
-    name: 'MODELS', kind: 'table', elements: 1, broadcast_ns_per_element: 0,
-    single_call_ns: Number(((modelsMs * 1e6) / calls).toPrecision(4)), baseline: 'none',
+    name: 'MODELS',
+    kind: 'table',
+    elements: 1,
+    broadcast_ns_per_element: 0,
+    single_call_ns: Number(((modelsMs * 1e6) / calls).toPrecision(4)),
+    baseline: 'none',
   });
-  rows.push({ benchmark: '1. DRIFT.MODELS(), per call (whole table)', ours: show((modelsMs * 1e6) / calls, 'ns'), other: '—', ratio: '—', target: '—', met: '—' });
+  rows.push({
+    benchmark: '1. DRIFT.MODELS(), per call (whole table)',
+    ours: show((modelsMs * 1e6) / calls, 'ns'),
+    other: '—',
+    ratio: '—',
+    target: '—',
+    met: '—',
+  });
   return {
     title: 'Catalog functions in Node',
     description:

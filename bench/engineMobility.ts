@@ -43,7 +43,11 @@ function sheet(rows: number, columns: number, formula: (cell: string) => string)
 function buildAndCheck(sheets: Sheets, rows: number, columns: number, check: (doping: number, value: number) => void): void {
   const engine = createEngine(sheets);
   try {
-    for (const [r, c] of [[0, 0], [rows - 1, columns - 1], [rows >> 1, columns >> 1]]) {
+    for (const [r, c] of [
+      [0, 0],
+      [rows - 1, columns - 1],
+      [rows >> 1, columns >> 1],
+    ]) {
       const doping = engine.getCellValue({ sheet: 0, row: r, col: c }) as number;
       check(doping, engine.getCellValue({ sheet: 0, row: r, col: columns + c }) as number);
     }

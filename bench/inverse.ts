@@ -31,7 +31,9 @@ function stats(values: readonly number[]): { max: number; mean: number } {
 export function runInverse(elements = 100): Section {
   const phosphorus = resolveDopant(SILICON, 'phosphorus');
   const densities = Array.from({ length: elements }, (_, i) => dopingAt(i, elements));
-  const rhos = densities.map((n) => resistivity({ material: SILICON, temperature: 300, dopant: phosphorus, density: n, counterDensity: 0 }));
+  const rhos = densities.map((n) =>
+    resistivity({ material: SILICON, temperature: 300, dopant: phosphorus, density: n, counterDensity: 0 }),
+  );
   const densityColumn = densities.map((n) => [n]);
   const rhoColumn = rhos.map((r) => [r]);
   // Cold: every element under conditions never seen before (its own temperature,

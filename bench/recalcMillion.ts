@@ -77,8 +77,22 @@ export async function runRecalcMillion(projectRoot: string, rows = MAX_CELLS / C
       },
       targets: [t],
       rows: [
-        { benchmark: `7. driftcell recalc, ${cells} cells (${formulas} DRIFT formulas): wall time`, ours: show(run.wallMs, 'ms'), other: '—', ratio: '—', target: '—', met: '—' },
-        { benchmark: `7. driftcell recalc, ${cells} cells: peak RSS`, ours: show(peakMiB, 'MiB'), other: '—', ratio: '—', target: '< 4096 MiB', met: t.met ? 'yes' : 'no' },
+        {
+          benchmark: `7. driftcell recalc, ${cells} cells (${formulas} DRIFT formulas): wall time`,
+          ours: show(run.wallMs, 'ms'),
+          other: '—',
+          ratio: '—',
+          target: '—',
+          met: '—',
+        },
+        {
+          benchmark: `7. driftcell recalc, ${cells} cells: peak RSS`,
+          ours: show(peakMiB, 'MiB'),
+          other: '—',
+          ratio: '—',
+          target: '< 4096 MiB',
+          met: t.met ? 'yes' : 'no',
+        },
       ],
     };
   } finally {

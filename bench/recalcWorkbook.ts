@@ -20,7 +20,17 @@ const FORMULAS_PER_ROW = 4;
 export async function writeWaferLog(file: string, rows: number): Promise<void> {
   const workbook = new ExcelJS.Workbook();
   const sheet = workbook.addWorksheet('Wafers');
-  sheet.addRow(['Lot', 'Wafer', 'Dopant', 'Resistivity (Ω·cm)', 'Thickness (µm)', 'Doping (cm⁻³)', 'Sheet resistance (Ω/sq)', 'Majority mobility (cm²/(V·s))', 'Resistivity check (Ω·cm)']);
+  sheet.addRow([
+    'Lot',
+    'Wafer',
+    'Dopant',
+    'Resistivity (Ω·cm)',
+    'Thickness (µm)',
+    'Doping (cm⁻³)',
+    'Sheet resistance (Ω/sq)',
+    'Majority mobility (cm²/(V·s))',
+    'Resistivity check (Ω·cm)',
+  ]);
   for (let i = 0; i < rows; i++) {
     const r = i + 2;
     const boron = i % 3 !== 0;
@@ -112,8 +122,22 @@ export async function runRecalcWorkbook(projectRoot: string, rows = 20000): Prom
       },
       targets: [],
       rows: [
-        { benchmark: `5. driftcell recalc, ${rows}-row wafer log (${formulas} formulas): wall time`, ours: show(run.wallMs, 'ms'), other: '—', ratio: '—', target: '—', met: '—' },
-        { benchmark: `5. driftcell recalc, ${rows}-row wafer log: peak RSS`, ours: show(peakMiB, 'MiB'), other: '—', ratio: '—', target: '—', met: '—' },
+        {
+          benchmark: `5. driftcell recalc, ${rows}-row wafer log (${formulas} formulas): wall time`,
+          ours: show(run.wallMs, 'ms'),
+          other: '—',
+          ratio: '—',
+          target: '—',
+          met: '—',
+        },
+        {
+          benchmark: `5. driftcell recalc, ${rows}-row wafer log: peak RSS`,
+          ours: show(peakMiB, 'MiB'),
+          other: '—',
+          ratio: '—',
+          target: '—',
+          met: '—',
+        },
       ],
     };
   } finally {

@@ -62,7 +62,8 @@ async function main(): Promise<void> {
   const stored: Record<string, StoredSection> = {};
   for (const [key] of steps) {
     const s = sections[key];
-    if (s !== undefined) stored[key] = { title: s.title, description: s.description, measured: measuredAt, ...s.figures, targets: s.targets, table: s.rows };
+    if (s !== undefined)
+      stored[key] = { title: s.title, description: s.description, measured: measuredAt, ...s.figures, targets: s.targets, table: s.rows };
     else if (previous[key] !== undefined) stored[key] = previous[key];
   }
   const rows = Object.values(sections).flatMap((s) => s.rows);
@@ -80,11 +81,17 @@ async function main(): Promise<void> {
   };
   writeAtomically(RESULTS, `${JSON.stringify(results, null, 2)}\n`);
   console.log(textTable(rows));
-  console.log(`\n${results.targets_met} of ${results.targets_total} targets met; ${machine}; wrote ${path.relative(PROJECT_ROOT, RESULTS)}`);
+  console.log(
+    `\n${results.targets_met} of ${results.targets_total} targets met; ${machine}; wrote ${path.relative(PROJECT_ROOT, RESULTS)}`,
+  );
   if (!process.argv.includes('--no-readme')) {
-    const missing = Object.entries(stored).filter(([, s]) => s.table === undefined).map(([key]) => key);
+    const missing = Object.entries(stored)
+      .filter(([, s]) => s.table === undefined)
+      .map(([key]) => key);
     if (missing.length > 0) {
-      console.log(`README.md not updated: results.json has no table rows for ${missing.join(', ')} (measured before sections kept them); run the whole bench once`);
+      console.log(
+        `README.md not updated: results.json has no table rows for ${missing.join(', ')} (measured before sections kept them); run the whole bench once`,
+      );
       return;
     }
     const allRows = Object.values(stored).flatMap((s) => s.table ?? []);
@@ -115,7 +122,9 @@ function onlyKeys(known: readonly string[]): string[] | undefined {
   const keys = (process.argv[at + 1] ?? '').split(',').filter(Boolean);
   const unknown = keys.filter((k) => !known.includes(k));
   if (keys.length === 0 || unknown.length > 0) {
-    throw new Error(`--only takes section keys separated by commas, from: ${known.join(', ')}${unknown.length > 0 ? ` (not ${unknown.join(', ')})` : ''}`);
+    throw new Error(
+      `--only takes section keys separated by commas, from: ${known.join(', ')}${unknown.length > 0 ? ` (not ${unknown.join(', ')})` : ''}`,
+    );
   }
   return keys;
 }
@@ -129,6 +138,6 @@ function previousSections(): Record<string, StoredSection> {
 }
 
 main().catch((e: unknown) => {
-  console.error(`bench failed: ${e instanceof Error ? e.stack ?? e.message : String(e)}`);
+  console.error(`bench failed: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
   process.exit(1);
 });

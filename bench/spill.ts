@@ -64,7 +64,8 @@ export function runSpill(rows = 1000, columns = 100): Section {
   );
   // Both must give the same numbers everywhere.
   for (let i = 0; i < spillValues.length; i++) {
-    if (!(spillValues[i] === singleValues[i])) throw new Error(`spill and single cells differ at element ${i}: ${spillValues[i]} vs ${singleValues[i]}`);
+    if (!(spillValues[i] === singleValues[i]))
+      throw new Error(`spill and single cells differ at element ${i}: ${spillValues[i]} vs ${singleValues[i]}`);
   }
   const cells = rows * columns;
   const r = ratio(spillMs, singleMs);

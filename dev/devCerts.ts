@@ -95,8 +95,23 @@ function generateWithOpenssl(directory: string): DevCertificate | null {
   const keyPath = path.join(directory, KEY_FILE);
   const result = spawnSync(
     'openssl',
-    ['req', '-x509', '-newkey', 'rsa:2048', '-nodes', '-keyout', keyPath, '-out', certPath, '-days', String(VALID_DAYS),
-      '-subj', '/CN=localhost', '-addext', 'subjectAltName=DNS:localhost,IP:127.0.0.1'],
+    [
+      'req',
+      '-x509',
+      '-newkey',
+      'rsa:2048',
+      '-nodes',
+      '-keyout',
+      keyPath,
+      '-out',
+      certPath,
+      '-days',
+      String(VALID_DAYS),
+      '-subj',
+      '/CN=localhost',
+      '-addext',
+      'subjectAltName=DNS:localhost,IP:127.0.0.1',
+    ],
     { stdio: 'pipe' },
   );
   if (result.error || result.status !== 0) return null;

@@ -86,7 +86,12 @@ async function desktopCertificate(): Promise<DevCertificate> {
   // For Excel desktop the CA must be in the system store; office-addin-dev-certs installs it (it may prompt).
   const tool = await import('office-addin-dev-certs');
   const options = await tool.getHttpsServerOptions();
-  return { key: Buffer.from(options.key as Buffer), cert: Buffer.from(options.cert as Buffer), certPath: '(office-addin-dev-certs)', origin: 'office-addin-dev-certs' };
+  return {
+    key: Buffer.from(options.key as Buffer),
+    cert: Buffer.from(options.cert as Buffer),
+    certPath: '(office-addin-dev-certs)',
+    origin: 'office-addin-dev-certs',
+  };
 }
 
 /**
@@ -118,10 +123,24 @@ export function sideloadToolArgs(...toolArgs: string[]): string[] {
 
 function sideloadIntoDesktop(paths: ProjectPaths): Promise<number> {
   const serveCommand = `node "${path.join(paths.root, START_ENTRY)}" --serve-only`;
-  const args = sideloadToolArgs('start', paths.manifest, 'desktop', '--app', 'excel', '--dev-server', serveCommand, '--dev-server-port', String(ADDIN_PORT));
+  const args = sideloadToolArgs(
+    'start',
+    paths.manifest,
+    'desktop',
+    '--app',
+    'excel',
+    '--dev-server',
+    serveCommand,
+    '--dev-server-port',
+    String(ADDIN_PORT),
+  );
   console.log(`Sideloading ${path.relative(paths.root, paths.manifest)} into Excel desktop …`);
   return new Promise((resolve) => {
-    const child = spawn(process.platform === 'win32' ? 'npx.cmd' : 'npx', args, { cwd: paths.root, stdio: 'inherit', shell: process.platform === 'win32' });
+    const child = spawn(process.platform === 'win32' ? 'npx.cmd' : 'npx', args, {
+      cwd: paths.root,
+      stdio: 'inherit',
+      shell: process.platform === 'win32',
+    });
     child.on('exit', (code) => resolve(code ?? 1));
     child.on('error', (err) => {
       console.error(`could not run office-addin-debugging: ${err.message}`);

@@ -74,7 +74,11 @@ export function textTable(rows: readonly TableRow[]): string {
   const headings: TableRow = { benchmark: 'Benchmark', ours: 'Ours', other: 'Compared with', ratio: 'Ratio', target: 'Target', met: 'Met' };
   const all = [headings, ...rows];
   const widths = columns.map((c) => Math.max(...all.map((r) => r[c].length)));
-  const line = (r: TableRow) => columns.map((c, i) => r[c].padEnd(widths[i])).join('  ').trimEnd();
+  const line = (r: TableRow) =>
+    columns
+      .map((c, i) => r[c].padEnd(widths[i]))
+      .join('  ')
+      .trimEnd();
   return [line(headings), widths.map((w) => '-'.repeat(w)).join('  '), ...rows.map(line)].join('\n');
 }
 

@@ -65,9 +65,13 @@ class BroadcastArguments {
     args: readonly ArgumentInput[],
   ) {
     this.grids = parameters.map((_, i) => toGrid(args[i]));
-    this.reduced = parameters.map((param, i) => (param.reduce ? {
-      value: reduceArgument(param, this.grids[i]),
-    } : undefined)) as { value: unknown }[];
+    this.reduced = parameters.map((param, i) =>
+      param.reduce
+        ? {
+            value: reduceArgument(param, this.grids[i]),
+          }
+        : undefined,
+    ) as { value: unknown }[];
     const shaping = this.grids.filter((_, i) => !parameters[i].reduce);
     this.rows = Math.max(1, ...shaping.map((g) => g.length));
     this.cols = Math.max(1, ...shaping.map((g) => g[0].length));
@@ -96,8 +100,11 @@ class BroadcastArguments {
       const gr = g.length === 1 ? 0 : r;
       const gc = g[0].length === 1 ? 0 : c;
       if (gr >= g.length || gc >= (g[gr]?.length ?? 0)) {
-        return failure('#N/A', `${this.parameters[i].name} has ${g.length}×${g[0].length} values and cannot ` +
-          `fill a ${this.rows}×${this.cols} result at row ${r + 1}, column ${c + 1}`);
+        return failure(
+          '#N/A',
+          `${this.parameters[i].name} has ${g.length}×${g[0].length} values and cannot ` +
+            `fill a ${this.rows}×${this.cols} result at row ${r + 1}, column ${c + 1}`,
+        );
       }
       const k = gr * g[0].length + gc;
       if (this.parsedState[i][k] === 0) {
@@ -179,9 +186,16 @@ function evaluateTuple(spec: TupleSpec, args: readonly ArgumentInput[], qualifie
   const wide = spec.parameters.findIndex((param, i) => !param.reduce && broadcast.shapeOf(i).cols > 1);
   if (wide >= 0) {
     const { rows, cols } = broadcast.shapeOf(wide);
-    return [[failure('#VALUE!', `${qualified} gives a row of ${width} values (${spec.columns.join(', ')}) ` +
-      `per call, so ${spec.parameters[wide].name} must be a single value or a column; got ${rows}×${cols} ` +
-      `values`)]];
+    return [
+      [
+        failure(
+          '#VALUE!',
+          `${qualified} gives a row of ${width} values (${spec.columns.join(', ')}) ` +
+            `per call, so ${spec.parameters[wide].name} must be a single value or a column; got ${rows}×${cols} ` +
+            `values`,
+        ),
+      ],
+    ];
   }
   const out: Grid<CellOutput> = [];
   for (let r = 0; r < broadcast.rows; r++) {
@@ -196,8 +210,10 @@ function computeTuple(spec: TupleSpec, values: readonly unknown[], qualified: st
   try {
     const result = (spec.compute as (...a: unknown[]) => readonly number[])(...values);
     if (result.length !== spec.columns.length) {
-      return failure('#VALUE!', `internal error in ${qualified}: ${result.length} values returned where ` +
-        `${spec.columns.length} were declared`);
+      return failure(
+        '#VALUE!',
+        `internal error in ${qualified}: ${result.length} values returned where ` + `${spec.columns.length} were declared`,
+      );
     }
     const bad = result.find((x) => !Number.isFinite(x));
     if (bad !== undefined) return failure('#NUM!', `${qualified} has no finite result for these inputs (got ${bad})`);
@@ -217,9 +233,16 @@ function evaluateRow(spec: RowSpec, args: readonly ArgumentInput[], qualified: s
   for (let i = 0; i < spec.parameters.length; i++) {
     const grid = toGrid(args[i]);
     if (grid.length > 1 || grid[0].length > 1) {
-      return [[failure('#VALUE!', `${qualified} gives one row whose length depends on its arguments, so ` +
-        `${spec.parameters[i].name} must be a single value, not ${grid.length}×${grid[0].length} values; ` +
-        `call it once per value instead`)]];
+      return [
+        [
+          failure(
+            '#VALUE!',
+            `${qualified} gives one row whose length depends on its arguments, so ` +
+              `${spec.parameters[i].name} must be a single value, not ${grid.length}×${grid[0].length} values; ` +
+              `call it once per value instead`,
+          ),
+        ],
+      ];
     }
     const value = parseElement(spec.parameters[i], grid[0][0]);
     if (isFailure(value)) return [[value]];
@@ -248,14 +271,22 @@ function parseElement(param: ParameterSpec, raw: CellInput): unknown {
 /** Calls compute without a spread for the usual arities: a spread call costs more per element than a closed form. */
 function invoke(compute: (...a: unknown[]) => number, v: readonly unknown[]): number {
   switch (v.length) {
-    case 1: return compute(v[0]);
-    case 2: return compute(v[0], v[1]);
-    case 3: return compute(v[0], v[1], v[2]);
-    case 4: return compute(v[0], v[1], v[2], v[3]);
-    case 5: return compute(v[0], v[1], v[2], v[3], v[4]);
-    case 6: return compute(v[0], v[1], v[2], v[3], v[4], v[5]);
-    case 7: return compute(v[0], v[1], v[2], v[3], v[4], v[5], v[6]);
-    default: return compute(...v);
+    case 1:
+      return compute(v[0]);
+    case 2:
+      return compute(v[0], v[1]);
+    case 3:
+      return compute(v[0], v[1], v[2]);
+    case 4:
+      return compute(v[0], v[1], v[2], v[3]);
+    case 5:
+      return compute(v[0], v[1], v[2], v[3], v[4]);
+    case 6:
+      return compute(v[0], v[1], v[2], v[3], v[4], v[5]);
+    case 7:
+      return compute(v[0], v[1], v[2], v[3], v[4], v[5], v[6]);
+    default:
+      return compute(...v);
   }
 }
 

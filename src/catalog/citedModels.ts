@@ -87,10 +87,9 @@ export const DEFAULT_MOBILITY_MODELS = unique(MATERIALS.map((host) => mobilityMo
 
 /** Sources of the tabulated saturation velocities (DRIFT.VSAT). */
 export const SATURATION_VELOCITY_MODELS = unique(
-  HIGH_FIELD_TABLES.flatMap((table) => [table.electron, table.hole]).flatMap((entry) => ('modelCode' in entry ? [
-    entry.modelCode,
-    ...(entry.fieldExponentModelCode ? [entry.fieldExponentModelCode] : []),
-  ] : [])),
+  HIGH_FIELD_TABLES.flatMap((table) => [table.electron, table.hole]).flatMap((entry) =>
+    'modelCode' in entry ? [entry.modelCode, ...(entry.fieldExponentModelCode ? [entry.fieldExponentModelCode] : [])] : [],
+  ),
 );
 
 /** The velocity–field law with its tables and the low-field mobility it starts from (DRIFT.VELOCITY, DRIFT.CURRENTDENSITY). */

@@ -170,8 +170,9 @@ function materialModelParameter(
   return {
     ...codeParameter<string>({
       name: 'model',
-      description: blank?.description ?? `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s ` +
-        `default. Codes by material on the help page.`,
+      description:
+        blank?.description ??
+        `${what}, e.g. ${codesOf(SILICON)[0]}; blank means the material’s ` + `default. Codes by material on the help page.`,
       choices: () => codes,
       defaultCode: '',
       resolve: (code) => code,

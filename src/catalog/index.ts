@@ -90,7 +90,10 @@ const BY_NAME = new Map(CATALOG.map((spec) => [spec.name, spec]));
 
 /** Looks a function up by name, with or without the DRIFT. prefix, any case. */
 export function findFunction(name: string): FunctionSpec | undefined {
-  const bare = name.trim().toUpperCase().replace(/^DRIFT\./, '');
+  const bare = name
+    .trim()
+    .toUpperCase()
+    .replace(/^DRIFT\./, '');
   return BY_NAME.get(bare);
 }
 

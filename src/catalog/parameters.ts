@@ -78,8 +78,7 @@ export function excludesZero(rule: NumberRule): boolean {
 }
 
 function checkRange(name: string, value: number, rule: NumberRule): number {
-  const belowMin =
-    rule.min !== undefined && (rule.minExclusive ? value <= rule.min : value < rule.min);
+  const belowMin = rule.min !== undefined && (rule.minExclusive ? value <= rule.min : value < rule.min);
   const aboveMax = rule.max !== undefined && value > rule.max;
   if (belowMin || aboveMax) {
     throw new InputError(`${name} must be ${rangeText(rule)}; got ${value}`);

@@ -121,9 +121,7 @@ export interface RowSpec<P extends readonly ParameterSpec[] = AnyParameters> ext
 export type FunctionSpec = ElementwiseSpec<AnyParameters> | TableSpec | TupleSpec<AnyParameters> | RowSpec<AnyParameters>;
 
 /** Declares an elementwise function with its argument types inferred. */
-export function elementwise<const P extends readonly ParameterSpec[]>(
-  spec: Omit<ElementwiseSpec<P>, 'kind'>,
-): ElementwiseSpec<P> {
+export function elementwise<const P extends readonly ParameterSpec[]>(spec: Omit<ElementwiseSpec<P>, 'kind'>): ElementwiseSpec<P> {
   return { kind: 'elementwise', ...spec };
 }
 

@@ -113,8 +113,11 @@ export function runCalc(
   let list: Formula[];
   if (options.file !== undefined || fromStdin) {
     list = readFormulas(options.file ?? '-', readStdin);
-    if (list.length === 0) throw new CliFailure(`${options.file === undefined || options.file === '-' ? 'stdin' : options.file} ` +
-      `holds no formulas (blank lines and # comment lines are skipped)`);
+    if (list.length === 0)
+      throw new CliFailure(
+        `${options.file === undefined || options.file === '-' ? 'stdin' : options.file} ` +
+          `holds no formulas (blank lines and # comment lines are skipped)`,
+      );
   } else {
     if (formulas.length === 0) throw new CliFailure('give a formula, several formulas, --file <file>, or - to read formulas from stdin');
     list = formulas.map((text, i) => ({ text, label: `formula ${i + 1}` }));

@@ -90,8 +90,10 @@ export async function runDemo(file: string, output: Output, options: { readonly 
   output.out(`${DEMO_COMPANY}: diffused-bar resistor over −40…150 °C (sheet "${SHEETS.sweep}")`);
   output.out(INVENTED_NOTE);
   output.out('');
-  output.out('Inputs (a uniform bar at an effective doping; R = DRIFT.RESISTOR(DRIFT.RESISTIVITY(doping, ' +
-    'dopant, T), length, width, thickness)):');
+  output.out(
+    'Inputs (a uniform bar at an effective doping; R = DRIFT.RESISTOR(DRIFT.RESISTIVITY(doping, ' +
+      'dopant, T), length, width, thickness)):',
+  );
   inputs.forEach(output.out);
   output.out('');
   sweep.forEach(output.out);
@@ -99,7 +101,7 @@ export async function runDemo(file: string, output: Output, options: { readonly 
   output.out(
     values
       ? `wrote ${file} (values form): ${summary.sheets.length} sheets, ${summary.formulas} formulas as ` +
-        `plain values, listed on sheet "${values.sheet}"`
+          `plain values, listed on sheet "${values.sheet}"`
       : `wrote ${file}: ${summary.sheets.length} sheets, ${summary.formulas} formulas (live, with cached results)`,
   );
   for (const problem of summary.problems) {

@@ -173,7 +173,7 @@ export function writeFileAtomically(target: string, bytes: Uint8Array, replace: 
     const fd = openSync(temporary, 'wx', 0o600);
     try {
       // writeSync may write less than asked (a full disk, a signal): loop until every byte is down.
-      for (let written = 0; written < bytes.length; ) written += writeSync(fd, bytes, written, bytes.length - written);
+      for (let written = 0; written < bytes.length;) written += writeSync(fd, bytes, written, bytes.length - written);
       fchmodSync(fd, mode);
       fsyncSync(fd);
     } finally {

@@ -100,8 +100,10 @@ export function errorHint(error: ResultError, formula?: string): string | undefi
   const fn = /^Function name (\S+) not recognized\.?$/.exec(error.message.trim());
   if (error.code === '#NAME?' && fn !== null) return functionHint(fn[1]);
   if (error.code === '#ERROR!' && formula !== undefined && hasSemicolonSeparator(formula)) {
-    return 'separate arguments with commas, as in DRIFT.RESISTIVITY(1e15,"B"); a semicolon separates rows ' +
-      'only inside an array constant such as {1e15;1e16}';
+    return (
+      'separate arguments with commas, as in DRIFT.RESISTIVITY(1e15,"B"); a semicolon separates rows ' +
+      'only inside an array constant such as {1e15;1e16}'
+    );
   }
   return temperatureHint(error.message);
 }

@@ -57,8 +57,10 @@ function quotedSheet(sheet: string): string {
 function problemError(problem: CellProblem, blockers: SpillBlockers): ResultError {
   const blocker = blockers.get(problemKey(problem.sheet, problem.address));
   const message =
-    blocker === undefined ? problem.message : `the result needs cells that are filled: ${blocker} blocks ` +
-      `it; clear ${blocker} (and any other filled cell in the way) so the result can spill`;
+    blocker === undefined
+      ? problem.message
+      : `the result needs cells that are filled: ${blocker} blocks ` +
+        `it; clear ${blocker} (and any other filled cell in the way) so the result can spill`;
   return { kind: 'error', code: problem.code, message };
 }
 
@@ -67,12 +69,13 @@ function problemError(problem: CellProblem, blockers: SpillBlockers): ResultErro
  * with what to do instead.
  */
 export function unreadableType(input: string, head: Buffer): string | undefined {
-  const saveAs = 'recalc reads .xlsx workbooks: open it in LibreOffice Calc or Excel, save it as .xlsx ' +
+  const saveAs =
+    'recalc reads .xlsx workbooks: open it in LibreOffice Calc or Excel, save it as .xlsx ' +
     '(File ▸ Save As, type "Excel 2007-365 (.xlsx)" or "Excel Workbook"), and recalc that file';
   // An OpenDocument package stores its media type uncompressed as the first zip entry "mimetype" (OASIS ODF 1.2, part 3, §3.3).
-  const odsContent = head.subarray(30, 38).toString('latin1') === 'mimetype' && head.subarray(38, 84).toString('latin1').startsWith(
-    'application/vnd.oasis.opendocument.spreadsheet',
-  );
+  const odsContent =
+    head.subarray(30, 38).toString('latin1') === 'mimetype' &&
+    head.subarray(38, 84).toString('latin1').startsWith('application/vnd.oasis.opendocument.spreadsheet');
   if (/\.f?ods$/i.test(input) || odsContent) return `${input} is an OpenDocument spreadsheet (.ods); ${saveAs}`;
   if (/\.xls$/i.test(input)) return `${input} is an Excel 97–2003 workbook (.xls); ${saveAs}`;
   if (/\.csv$/i.test(input)) return `${input} is a CSV text file, not a workbook; ${saveAs}`;
@@ -98,8 +101,10 @@ export function describeSummary(
     if (text !== undefined) notes.push(`    hint: ${escapeForTerminal(text)}`);
   };
   if (summary.kept.length > 0) {
-    notes.push(`${plural(summary.kept.length, 'formula cell')} kept as the file had ` +
-      `${summary.kept.length === 1 ? 'it' : 'them'} (formula and cached value, not recalculated):`);
+    notes.push(
+      `${plural(summary.kept.length, 'formula cell')} kept as the file had ` +
+        `${summary.kept.length === 1 ? 'it' : 'them'} (formula and cached value, not recalculated):`,
+    );
     for (const kept of summary.kept.slice(0, LISTED_PROBLEMS)) {
       notes.push(`  ${quotedSheet(kept.sheet)}!${kept.address}: ${escapeForTerminal(kept.reason)}`);
       hint(reasonHint(kept.reason));

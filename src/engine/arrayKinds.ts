@@ -20,7 +20,12 @@ const ATTRIBUTE = (name: string) => new RegExp(`\\b${name}="([^"]*)"`);
 const DYNAMIC_ANCHOR = /<c\b([^>]*\bcm="[^"]*"[^>]*)>\s*<f\b[^>]*\bt="array"/g;
 
 function decoded(value: string): string {
-  return value.replace(/&quot;/g, '"').replace(/&apos;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
+  return value
+    .replace(/&quot;/g, '"')
+    .replace(/&apos;/g, "'")
+    .replace(/&lt;/g, '<')
+    .replace(/&gt;/g, '>')
+    .replace(/&amp;/g, '&');
 }
 
 /**
@@ -41,10 +46,8 @@ export async function dynamicArrayAnchors(bytes: Buffer): Promise<DynamicAnchors
   for (const tag of rels.match(/<Relationship\b[^>]*>/g) ?? []) {
     const id = ATTRIBUTE('Id').exec(tag)?.[1];
     const target = ATTRIBUTE('Target').exec(tag)?.[1];
-    if (id !== undefined && target !== undefined) targets.set(
-      id,
-      target.startsWith('/') ? target.slice(1) : posix.normalize(posix.join('xl', target)),
-    );
+    if (id !== undefined && target !== undefined)
+      targets.set(id, target.startsWith('/') ? target.slice(1) : posix.normalize(posix.join('xl', target)));
   }
   for (const tag of workbook.match(/<sheet\b[^>]*>/g) ?? []) {
     const name = decoded(ATTRIBUTE('name').exec(tag)?.[1] ?? '');

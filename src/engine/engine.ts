@@ -179,8 +179,8 @@ interface ParsedDependency {
 }
 
 function referenceText(dep: ParsedDependency): string | undefined {
-  if (dep.dependency !== undefined) return `cell ` +
-    `${cellName(dep.dependency.row, dep.dependency.col)}${dep.dependency.sheet ? ' of another sheet' : ''}`;
+  if (dep.dependency !== undefined)
+    return `cell ` + `${cellName(dep.dependency.row, dep.dependency.col)}${dep.dependency.sheet ? ' of another sheet' : ''}`;
   const { start, end } = dep;
   if (start === undefined || end === undefined) return undefined;
   if (start.row !== undefined && start.col !== undefined && end.row !== undefined && end.col !== undefined) {
@@ -233,22 +233,24 @@ export function evaluateFormula(formula: string): FormulaResult {
           message:
             `the formula refers to ${references.join(', ')}, but a formula evaluated on its own has no workbook and no cells ` +
             '(a reference would read as a blank cell, 0). Write the value in its place, or put the formula ' +
-              'in a workbook and run driftcell recalc',
+            'in a workbook and run driftcell recalc',
         };
       }
       predictedResultSize(engine, text);
       value = engine.calculateFormula(text, 0);
     } catch (e) {
-      if (e instanceof ResultTooLarge) return {
-        kind: 'error',
-        code: '#VALUE!',
-        message: e.message.replace(/^the formula in \S+ gives/, 'the formula gives'),
-      };
-      if (e instanceof RangeError) return {
-        kind: 'error',
-        code: '#VALUE!',
-        message: 'the formula is too long or too deeply nested for the headless engine',
-      };
+      if (e instanceof ResultTooLarge)
+        return {
+          kind: 'error',
+          code: '#VALUE!',
+          message: e.message.replace(/^the formula in \S+ gives/, 'the formula gives'),
+        };
+      if (e instanceof RangeError)
+        return {
+          kind: 'error',
+          code: '#VALUE!',
+          message: 'the formula is too long or too deeply nested for the headless engine',
+        };
       throw e;
     }
     return Array.isArray(value) ? value.map((row) => row.map(toResultElement)) : toResultElement(value);

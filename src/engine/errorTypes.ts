@@ -90,4 +90,3 @@ export function codeForErrorType(type: ErrorType): ErrorCode {
 export function fileErrorText(type: ErrorType): string {
   return FILE_TEXT_BY_ERROR_TYPE[type];
 }
-

@@ -48,7 +48,12 @@ function absolutePart(folder: string, target: string): string {
 }
 
 function decoded(value: string): string {
-  return value.replace(/&quot;/g, '"').replace(/&apos;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
+  return value
+    .replace(/&quot;/g, '"')
+    .replace(/&apos;/g, "'")
+    .replace(/&lt;/g, '<')
+    .replace(/&gt;/g, '>')
+    .replace(/&amp;/g, '&');
 }
 
 /**
@@ -125,8 +130,9 @@ export async function preparePackage(bytes: Buffer): Promise<PreparedPackage> {
       if (DRAWING_TYPE.test(type) && (await drawingHasChart(zip, part))) {
         const charts = await chartCount(zip, part);
         const sheet = sheetOfPart.get(sourcePart);
-        notices.push(`${sheet !== undefined ? `sheet "${sheet}": ` : ''}${charts} ` +
-          `chart${charts === 1 ? '' : 's'} not carried into the copy`);
+        notices.push(
+          `${sheet !== undefined ? `sheet "${sheet}": ` : ''}${charts} ` + `chart${charts === 1 ? '' : 's'} not carried into the copy`,
+        );
         rewritten = rewritten.replace(tag, '');
         const id = ATTRIBUTE('Id').exec(tag)?.[1];
         await unhookDrawing(zip, sourcePart, id);
@@ -166,8 +172,10 @@ export async function preparePackage(bytes: Buffer): Promise<PreparedPackage> {
       let next = types;
       for (const [from, to] of renames) next = next.split(`PartName="/${from}"`).join(`PartName="/${to}"`);
       if (!/Extension="vml"/.test(next) && [...renames.values()].some((p) => p.endsWith('.vml'))) {
-        next = next.replace('<Default ', '<Default Extension="vml" ' +
-          'ContentType="application/vnd.openxmlformats-officedocument.vmlDrawing"/><Default ');
+        next = next.replace(
+          '<Default ',
+          '<Default Extension="vml" ' + 'ContentType="application/vnd.openxmlformats-officedocument.vmlDrawing"/><Default ',
+        );
       }
       zip.file('[Content_Types].xml', next);
     }

@@ -85,7 +85,6 @@ export function engineFormula(stored: string): string {
     .join('')}`;
 }
 
-
 /**
  * Formula text (as typed or as stored, with or without `=`) as a file stores it
  * (without `=`): every DRIFT call in the one form Excel itself writes for add-in
@@ -98,10 +97,9 @@ export function engineFormula(stored: string): string {
 export function storedFormula(text: string): string {
   const body = text.startsWith('=') ? text.slice(1) : text;
   return segments(body)
-    .map((part) => (part.quoted ? part.text : part.text.replace(
-      DRIFT_ANY_FORM,
-      (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`,
-    )))
+    .map((part) =>
+      part.quoted ? part.text : part.text.replace(DRIFT_ANY_FORM, (_m, name: string) => `_xldudf_DRIFT_${name.toUpperCase()}`),
+    )
     .join('');
 }
 

@@ -28,7 +28,7 @@ export function lastColumnValidationsAsRanges(workbook: ExcelJS.Workbook): void 
       delete model[address];
     }
     rows.sort((a, b) => a.row - b.row);
-    for (let i = 0; i < rows.length; ) {
+    for (let i = 0; i < rows.length;) {
       let j = i;
       const sameRule = (k: number) => JSON.stringify(rows[k].rule) === JSON.stringify(rows[i].rule);
       while (j + 1 < rows.length && rows[j + 1].row === rows[j].row + 1 && sameRule(j + 1)) j++;

@@ -138,17 +138,15 @@ export function checkPackage(bytes: Buffer): number {
     throw new PackageRejected('it is a ZIP64 package (over 4 GB or 65 535 parts), beyond what Driftcell reads', 'limit');
   }
   if (entries > MAX_PARTS) throw new PackageRejected(`it has ${entries} parts, more than the ${MAX_PARTS} Driftcell reads`, 'limit');
-  if (directoryOffset + directorySize > end) throw new PackageRejected(
-    'it is truncated or damaged (its zip directory points past the end of the file)',
-  );
+  if (directoryOffset + directorySize > end)
+    throw new PackageRejected('it is truncated or damaged (its zip directory points past the end of the file)');
 
   let declared = 0;
   const parts: { name: string; method: number; flags: number; compressedSize: number; size: number; localOffset: number }[] = [];
   let at = directoryOffset;
   for (let i = 0; i < entries; i++) {
-    if (at + 46 > end || bytes.readUInt32LE(at) !== CENTRAL_HEADER) throw new PackageRejected(
-      'it is truncated or damaged (its zip directory is broken)',
-    );
+    if (at + 46 > end || bytes.readUInt32LE(at) !== CENTRAL_HEADER)
+      throw new PackageRejected('it is truncated or damaged (its zip directory is broken)');
     const nameLength = bytes.readUInt16LE(at + 28);
     const part = {
       flags: bytes.readUInt16LE(at + 8),
@@ -163,8 +161,10 @@ export function checkPackage(bytes: Buffer): number {
     at += 46 + nameLength + bytes.readUInt16LE(at + 30) + bytes.readUInt16LE(at + 32);
   }
   if (declared > MAX_EXPANDED_BYTES) {
-    throw new PackageRejected(`its parts declare ${megabytes(declared)} when expanded, more than the ` +
-      `${megabytes(MAX_EXPANDED_BYTES)} Driftcell reads`, 'limit');
+    throw new PackageRejected(
+      `its parts declare ${megabytes(declared)} when expanded, more than the ` + `${megabytes(MAX_EXPANDED_BYTES)} Driftcell reads`,
+      'limit',
+    );
   }
 
   // Declared sizes can lie: every part is inflated with a hard cap on what the whole package may expand to.
@@ -192,8 +192,11 @@ export function checkPackage(bytes: Buffer): number {
         content = inflateRawSync(data, { maxOutputLength: Math.max(1, budget) });
       } catch (e) {
         if ((e as NodeJS.ErrnoException).code === 'ERR_BUFFER_TOO_LARGE') {
-          throw new PackageRejected(`its parts expand to more than ${megabytes(MAX_EXPANDED_BYTES)}, the ` +
-            `most Driftcell reads (part ${part.name} alone goes past it)`, 'limit');
+          throw new PackageRejected(
+            `its parts expand to more than ${megabytes(MAX_EXPANDED_BYTES)}, the ` +
+              `most Driftcell reads (part ${part.name} alone goes past it)`,
+            'limit',
+          );
         }
         throw new PackageRejected(`it is truncated or damaged (part ${part.name} does not inflate)`);
       }
@@ -211,8 +214,11 @@ export function checkPackage(bytes: Buffer): number {
       }
       cells += countCells(content);
       if (cells > MAX_CELLS) {
-        throw new PackageRejected(`it has more than ${MAX_CELLS.toLocaleString('en-US')} cells, the most ` +
-          `Driftcell recalculates (each takes about 1.3 kB of memory)`, 'limit');
+        throw new PackageRejected(
+          `it has more than ${MAX_CELLS.toLocaleString('en-US')} cells, the most ` +
+            `Driftcell recalculates (each takes about 1.3 kB of memory)`,
+          'limit',
+        );
       }
     }
   }

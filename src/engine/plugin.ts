@@ -37,7 +37,6 @@ const EVALUATE_METHOD = 'evaluateDriftFunction';
 /** Name of the plugin method that predicts every DRIFT function's result size. */
 const SIZE_METHOD = 'predictDriftResultSize';
 
-
 const SPEC_BY_QUALIFIED_NAME = new Map(CATALOG.map((spec) => [qualifiedName(spec), spec]));
 
 function specFor(procedureName: string): FunctionSpec {

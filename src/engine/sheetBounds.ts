@@ -90,8 +90,8 @@ function attribute(tag: string, name: string): string | undefined {
   return m ? (m[1] ?? m[2]) : undefined;
 }
 
-const GRID_TEXT = `Excel's grid of ${GRID_ROWS.toLocaleString('en-US')} rows × ` +
-  `${GRID_COLUMNS.toLocaleString('en-US')} columns (A1:XFD1048576)`;
+const GRID_TEXT =
+  `Excel's grid of ${GRID_ROWS.toLocaleString('en-US')} rows × ` + `${GRID_COLUMNS.toLocaleString('en-US')} columns (A1:XFD1048576)`;
 
 function count(n: number): string {
   return n.toLocaleString('en-US');
@@ -149,9 +149,8 @@ export function checkSheetBounds(xml: Buffer, part: string): void {
           column = area.left;
           cellRow = area.top;
         }
-        if (cellRow > GRID_ROWS || column > GRID_COLUMNS) throw new SheetBoundExceeded(
-          `${part}: cell ${r ?? `in row ${row}`} is outside ${GRID_TEXT}`,
-        );
+        if (cellRow > GRID_ROWS || column > GRID_COLUMNS)
+          throw new SheetBoundExceeded(`${part}: cell ${r ?? `in row ${row}`} is outside ${GRID_TEXT}`);
         top = Math.min(top, cellRow);
         bottom = Math.max(bottom, cellRow);
         left = Math.min(left, column);
@@ -160,21 +159,25 @@ export function checkSheetBounds(xml: Buffer, part: string): void {
       }
       case 'mergeCell':
         merged += rangeListCells(attribute(tag, 'ref') ?? '', `${part}: merged range`);
-        if (merged > MAX_MERGED_CELLS) throw new SheetBoundExceeded(`${part}: merged ranges cover more than ` +
-          `${count(MAX_MERGED_CELLS)} cells (at mergeCell ${attribute(tag, 'ref')})`);
+        if (merged > MAX_MERGED_CELLS)
+          throw new SheetBoundExceeded(
+            `${part}: merged ranges cover more than ` + `${count(MAX_MERGED_CELLS)} cells (at mergeCell ${attribute(tag, 'ref')})`,
+          );
         break;
       case 'col': {
         const max = Number(attribute(tag, 'max') ?? attribute(tag, 'min') ?? 1);
-        if (!Number.isFinite(max) || max > GRID_COLUMNS) throw new SheetBoundExceeded(
-          `${part}: column definition <col max="${attribute(tag, 'max')}"> is outside ${GRID_TEXT}`,
-        );
+        if (!Number.isFinite(max) || max > GRID_COLUMNS)
+          throw new SheetBoundExceeded(`${part}: column definition <col max="${attribute(tag, 'max')}"> is outside ${GRID_TEXT}`);
         break;
       }
       case 'dataValidation':
         validated += rangeListCells(attribute(tag, 'sqref') ?? '', `${part}: data validation`);
-        if (validated > MAX_VALIDATED_CELLS) throw new SheetBoundExceeded(`${part}: data validation covers ` +
-          `more than ${count(MAX_VALIDATED_CELLS)} cells (at sqref ` +
-          `${attribute(tag, 'sqref')?.slice(0, 40)})`);
+        if (validated > MAX_VALIDATED_CELLS)
+          throw new SheetBoundExceeded(
+            `${part}: data validation covers ` +
+              `more than ${count(MAX_VALIDATED_CELLS)} cells (at sqref ` +
+              `${attribute(tag, 'sqref')?.slice(0, 40)})`,
+          );
         break;
       case 'conditionalFormatting':
         rangeListCells(attribute(tag, 'sqref') ?? '', `${part}: conditional format`);
@@ -183,8 +186,10 @@ export function checkSheetBounds(xml: Buffer, part: string): void {
         const ref = attribute(tag, 'ref');
         if (ref === undefined || attribute(tag, 't') !== 'array') break;
         arrays += rangeListCells(ref, `${part}: array formula range`);
-        if (arrays > MAX_ARRAY_RANGE_CELLS) throw new SheetBoundExceeded(`${part}: array formula ranges ` +
-          `cover more than ${count(MAX_ARRAY_RANGE_CELLS)} cells (at ref ${ref.slice(0, 40)})`);
+        if (arrays > MAX_ARRAY_RANGE_CELLS)
+          throw new SheetBoundExceeded(
+            `${part}: array formula ranges ` + `cover more than ${count(MAX_ARRAY_RANGE_CELLS)} cells (at ref ${ref.slice(0, 40)})`,
+          );
         break;
       }
     }
@@ -193,8 +198,10 @@ export function checkSheetBounds(xml: Buffer, part: string): void {
     const used = (bottom - top + 1) * (right - left + 1);
     if (used > MAX_USED_RANGE_CELLS) {
       const range = `${columnLetters(left)}${top}:${columnLetters(right)}${bottom}`;
-      throw new SheetBoundExceeded(`${part}: its used range ${range} spans ${count(used)} cells, more than ` +
-        `the ${count(MAX_USED_RANGE_CELLS)} Driftcell recalculates per sheet`);
+      throw new SheetBoundExceeded(
+        `${part}: its used range ${range} spans ${count(used)} cells, more than ` +
+          `the ${count(MAX_USED_RANGE_CELLS)} Driftcell recalculates per sheet`,
+      );
     }
   }
 }

@@ -88,8 +88,8 @@ export function convertToValues(workbook: ExcelJS.Workbook): ValuesForm {
   listing.getCell('A1').font = { bold: true, size: 14 };
   listing.getCell('A2').value =
     'This is the values form (driftcell --values): in the other sheets every formula cell holds its result ' +
-      'as a plain value, so any program shows the numbers without recalculating. The formulas that gave ' +
-      'them are listed here.';
+    'as a plain value, so any program shows the numbers without recalculating. The formulas that gave ' +
+    'them are listed here.';
   const header = ['Sheet', 'Cell', 'Result fills', 'Formula'];
   header.forEach((text, i) => {
     listing.getCell(3, i + 1).value = text;

@@ -215,8 +215,10 @@ export async function readWorkbookFile(path: string): Promise<ExcelJS.Workbook> 
     // Refused before reading: the file would be held in memory whole.
     const { size } = await stat(path);
     if (size > MAX_PACKAGE_BYTES) {
-      throw new WorkbookReadError(`${path}: too large to recalculate (it is ${(size / 2 ** 20).toFixed(1)} ` +
-        `MB, more than the ${MAX_PACKAGE_BYTES / 2 ** 20} MB Driftcell reads)`);
+      throw new WorkbookReadError(
+        `${path}: too large to recalculate (it is ${(size / 2 ** 20).toFixed(1)} ` +
+          `MB, more than the ${MAX_PACKAGE_BYTES / 2 ** 20} MB Driftcell reads)`,
+      );
     }
     bytes = await readFile(path);
   } catch (e) {
@@ -361,7 +363,6 @@ export function recalculateWorkbook(
   // A kept legacy array formula keeps the cached values of its whole range.
   const keptSpillCells = new Set(inputs.flatMap((input) => [...kept.keys()].flatMap((f) => input.spillCellsOf.get(f) ?? [])));
   try {
-
     const arrays: ArrayFormulaPlacement[] = [];
     const problems: CellProblem[] = [];
     const note = (sheet: string, row: number, column: number, value: CellValue) => {
@@ -395,7 +396,7 @@ export function recalculateWorkbook(
         let resultRows = values.length;
         let resultColumns = values[0].length;
         const legacy = formula.legacyBox === undefined ? undefined : legacyArrayRange(input, formula, formula.legacyBox, range);
-        const ownCells = new Set(legacy === undefined ? [] : input.spillCellsOf.get(formula) ?? []);
+        const ownCells = new Set(legacy === undefined ? [] : (input.spillCellsOf.get(formula) ?? []));
         if (legacy !== undefined) {
           values = legacyArrayFill(values, legacy.end.row - legacy.start.row + 1, legacy.end.col - legacy.start.col + 1);
           range = legacy;

@@ -36,9 +36,8 @@ export function addinBaseUrl(value: string | undefined): string {
   } catch {
     throw new Error(`${ADDIN_URL_VARIABLE} must be an absolute URL such as https://tools.example.org/driftcell; got "${text}"`);
   }
-  if (url.protocol !== 'https:') throw new Error(
-    `${ADDIN_URL_VARIABLE} must use https (Excel loads add-ins only over HTTPS); got "${text}"`,
-  );
+  if (url.protocol !== 'https:')
+    throw new Error(`${ADDIN_URL_VARIABLE} must use https (Excel loads add-ins only over HTTPS); got "${text}"`);
   if (url.search !== '' || url.hash !== '' || url.username !== '' || url.password !== '') {
     throw new Error(`${ADDIN_URL_VARIABLE} must be a plain folder address without query, fragment or credentials; got "${text}"`);
   }
@@ -55,7 +54,7 @@ export function addinBaseUrl(value: string | undefined): string {
  */
 export function deployedManifest(sourceXml: string, baseUrl: string): string {
   const foreign = (sourceXml.match(/https:\/\/[^"'<\s]+/g) ?? []).filter((u) => !u.startsWith(`${ADDIN_ORIGIN}/`));
-  if (foreign.length > 0) throw new Error(`manifest.xml has URLs outside ${ADDIN_ORIGIN}: ` +
-    `${foreign.join(', ')}; every add-in URL must start with it`);
+  if (foreign.length > 0)
+    throw new Error(`manifest.xml has URLs outside ${ADDIN_ORIGIN}: ` + `${foreign.join(', ')}; every add-in URL must start with it`);
   return sourceXml.split(`${ADDIN_ORIGIN}/`).join(`${baseUrl}/`);
 }

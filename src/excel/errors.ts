@@ -16,13 +16,7 @@ import type { CellFailure, ErrorCode } from '../catalog/values';
 
 /** Member names of CustomFunctions.ErrorCode. */
 export type ExcelErrorCodeName =
-  | 'invalidValue'
-  | 'notAvailable'
-  | 'divisionByZero'
-  | 'invalidNumber'
-  | 'nullReference'
-  | 'invalidName'
-  | 'invalidReference';
+  'invalidValue' | 'notAvailable' | 'divisionByZero' | 'invalidNumber' | 'nullReference' | 'invalidName' | 'invalidReference';
 
 export interface ExcelErrorRule {
   /** The catalog's code. */

@@ -71,8 +71,9 @@ export function helpUrl(helpBaseUrl: string, name: string): string {
 function functionMetadata(spec: FunctionSpec, helpBaseUrl: string): FunctionMetadata {
   const problem = whyInvalidFunctionId(spec.name);
   if (problem !== null) {
-    throw new Error(`catalog name "${spec.name}" cannot be an Excel custom function id: it ${problem} ` +
-      `(Office's custom-function naming rules)`);
+    throw new Error(
+      `catalog name "${spec.name}" cannot be an Excel custom function id: it ${problem} ` + `(Office's custom-function naming rules)`,
+    );
   }
   return {
     id: spec.name,

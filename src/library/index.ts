@@ -184,8 +184,10 @@ export function temperatureCoefficient(options: { readonly doping: number } & Om
  * @example resistivityAtTemperature({ resistivity: 10.2, dopant: 'B', measuredTemperature: 298.15 }) // ≈ 10.06 Ω·cm
  */
 export function resistivityAtTemperature(
-  options: { readonly resistivity: number; readonly measuredTemperature: number; readonly targetTemperature?: number } &
-    Omit<SampleOptions, 'temperature'> &
+  options: { readonly resistivity: number; readonly measuredTemperature: number; readonly targetTemperature?: number } & Omit<
+    SampleOptions,
+    'temperature'
+  > &
     DopingWindowOptions,
 ): number {
   return call(

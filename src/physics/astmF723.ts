@@ -123,8 +123,7 @@ const PHOSPHORUS = {
  * equation for arsenic (the transcriptions list N-from-ρ for B and P only).
  */
 const ARSENIC_LOG_RESISTIVITY = [
-  -6633.667, 768.2531, -25.77373, 0.9658177, -0.05643443, -8.008543e-4, 9.055838e-5, -1.776701e-6, 1.953279e-7,
-  -5.754599e-9, -1.31657e-11,
+  -6633.667, 768.2531, -25.77373, 0.9658177, -0.05643443, -8.008543e-4, 9.055838e-5, -1.776701e-6, 1.953279e-7, -5.754599e-9, -1.31657e-11,
 ] as const;
 
 /** Σ c_i x^i, Horner form. */

@@ -30,9 +30,7 @@ export const ELECTRON_MASS = 9.1093837015e-31;
  */
 export function thermalVoltage(temperature: number): number {
   if (!Number.isFinite(temperature) || temperature <= 0) {
-    throw new PhysicsDomainError(
-      `temperature ${temperature} K is not allowed: it must be a finite number greater than 0 K`,
-    );
+    throw new PhysicsDomainError(`temperature ${temperature} K is not allowed: it must be a finite number greater than 0 K`);
   }
   return (BOLTZMANN * temperature) / ELEMENTARY_CHARGE;
 }

@@ -111,9 +111,7 @@ function checkDopants(material: Material, dopants: readonly DopantDensity[]): vo
       throw new PhysicsDomainError('each dopant entry needs a dopant of kind donor or acceptor');
     }
     if (!Number.isFinite(density) || density < 0) {
-      throw new PhysicsDomainError(
-        `${dopant.name} density ${density} cm⁻³ is not allowed: it must be a finite number >= 0`,
-      );
+      throw new PhysicsDomainError(`${dopant.name} density ${density} cm⁻³ is not allowed: it must be a finite number >= 0`);
     }
     total += density;
   }
@@ -221,14 +219,8 @@ function solveNeutrality(
   // Boltzmann ends, then widened for statistics below Boltzmann (module note).
   const boltzmannUpper = asinhHalfRatio(totalDonors, edges.logIntrinsicDensity);
   const boltzmannLower = -asinhHalfRatio(totalAcceptors, edges.logIntrinsicDensity);
-  const upper = Math.max(
-    boltzmannUpper,
-    sufficientBandFermiLevel(boltzmannUpper - edges.conductionEdge) + edges.conductionEdge,
-  );
-  const lower = Math.min(
-    boltzmannLower,
-    -(sufficientBandFermiLevel(-boltzmannLower - edges.valenceEdge) + edges.valenceEdge),
-  );
+  const upper = Math.max(boltzmannUpper, sufficientBandFermiLevel(boltzmannUpper - edges.conductionEdge) + edges.conductionEdge);
+  const lower = Math.min(boltzmannLower, -(sufficientBandFermiLevel(-boltzmannLower - edges.valenceEdge) + edges.valenceEdge));
   const { root, iterations } = findRoot(
     charge,
     lower - BRACKET_MARGIN * (1 + Math.abs(lower)),

@@ -50,15 +50,7 @@ export {
 export { solveEquilibrium, ionizedFraction, type DopantDensity, type Equilibrium } from './equilibrium';
 
 // Samples, mobility, transport, inverse.
-export {
-  sampleDopants,
-  carrierFor,
-  resolveCarrierRole,
-  CARRIER_ROLES,
-  type Sample,
-  type Carrier,
-  type CarrierRole,
-} from './sample';
+export { sampleDopants, carrierFor, resolveCarrierRole, CARRIER_ROLES, type Sample, type Carrier, type CarrierRole } from './sample';
 export {
   MOBILITY_MODEL_CODES,
   ALL_MOBILITY_MODEL_CODES,

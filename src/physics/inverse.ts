@@ -380,13 +380,10 @@ function scanConditionsOf(
  * memo.ts, the core's one memo policy): a column of targets under the same
  * conditions scans once.
  */
-const scanOf = memoize(
-  256,
-  (material: Material, dopant: Dopant, temperature: number, counterDensity: number, code: string): Scan => {
-    const { maxNet, logResistivityAt } = scanConditionsOf(material, dopant, temperature, counterDensity, code);
-    return scanConditions(logResistivityAt, Math.log(NET_DENSITY_SEARCH.min), Math.log(maxNet));
-  },
-);
+const scanOf = memoize(256, (material: Material, dopant: Dopant, temperature: number, counterDensity: number, code: string): Scan => {
+  const { maxNet, logResistivityAt } = scanConditionsOf(material, dopant, temperature, counterDensity, code);
+  return scanConditions(logResistivityAt, Math.log(NET_DENSITY_SEARCH.min), Math.log(maxNet));
+});
 
 interface Solved {
   readonly solutions: readonly DopingSolution[];

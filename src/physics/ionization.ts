@@ -87,12 +87,7 @@ export interface IonizationState {
  * @returns ionised and neutral fractions (each accurate even when tiny)
  * @example ionizationState(phosphorus, 1e16, 300, -7.96).ionized // ≈ 0.996
  */
-export function ionizationState(
-  dopant: Dopant,
-  density: number,
-  temperature: number,
-  bandFermiLevel: number,
-): IonizationState {
+export function ionizationState(dopant: Dopant, density: number, temperature: number, bandFermiLevel: number): IonizationState {
   return preparedIonizationState(prepareIonization(dopant, density, temperature), bandFermiLevel);
 }
 

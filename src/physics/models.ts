@@ -40,14 +40,14 @@ const RESISTIVITY_ONLY_MODELS: readonly ModelInfo[] = [
     citation: `${F723_SOURCE.citation}; physics as for ${mobilityModelsOf(SILICON.code)[0].code}`,
     validity:
       'Silicon, any dopant, temperature and counter-doping the physics model covers; equals F723 (B, P) at 296.15 K without ' +
-      'counter-doping over F723\'s ranges; elsewhere F723\'s density dependence times the physics model\'s ' +
-        'temperature and compensation dependence',
+      "counter-doping over F723's ranges; elsewhere F723's density dependence times the physics model's " +
+      'temperature and compensation dependence',
     notes:
       'ρ = ρ_phys · k(N), k = ρ_F723(N)/ρ_phys(N, 296.15 K, uncompensated), k of the dopant density only: B and P anchored, ' +
       `other dopants (As included, whose F723 range is only ${f723RangeText(F723_VALIDITY.As.density)} ` +
       `cm⁻³) k = 1. RESISTIVITY uses F723's ρ-from-N equation, ` +
-      'DOPING its N-from-ρ equation, so each direction is the standard\'s own and they disagree by its stated self-consistency ' +
-      '(3 % B, 4.5 % P). Outside F723\'s ranges ln k levels off smoothly (continuous value and slope). Not a mobility model.',
+      "DOPING its N-from-ρ equation, so each direction is the standard's own and they disagree by its stated self-consistency " +
+      "(3 % B, 4.5 % P). Outside F723's ranges ln k levels off smoothly (continuous value and slope). Not a mobility model.",
     equation: 'src/physics/f723Anchored.ts',
     parameterTable: 'src/physics/astmF723.ts',
     tests: ['tests/physics/f723Anchored.test.ts'],
@@ -94,9 +94,7 @@ export function modelInfo(code: string): ModelInfo {
   const wanted = String(code).trim().toLowerCase();
   const found = MODEL_REGISTRY.find((entry) => entry.code.toLowerCase() === wanted);
   if (found === undefined) {
-    throw new PhysicsDomainError(
-      `unknown model '${code}'. Allowed: ${MODEL_REGISTRY.map((entry) => entry.code).join(', ')}.`,
-    );
+    throw new PhysicsDomainError(`unknown model '${code}'. Allowed: ${MODEL_REGISTRY.map((entry) => entry.code).join(', ')}.`);
   }
   return found;
 }

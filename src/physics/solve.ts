@@ -57,12 +57,7 @@ function evaluate(f: (x: number) => number, x: number): number {
  *   same sign, f returns NaN, or (never for a valid bracket) the iteration cap is hit
  * @example findRoot((x) => x * x - 2, 0, 2).root // ≈ 1.414213562373095
  */
-export function findRoot(
-  f: (x: number) => number,
-  lo: number,
-  hi: number,
-  opts: FindRootOptions = {},
-): RootResult {
+export function findRoot(f: (x: number) => number, lo: number, hi: number, opts: FindRootOptions = {}): RootResult {
   if (!Number.isFinite(lo) || !Number.isFinite(hi)) {
     throw new PhysicsDomainError(`findRoot: bracket [${lo}, ${hi}] must have finite ends`);
   }
@@ -82,9 +77,7 @@ export function findRoot(
   if (fa === 0) return { root: a, iterations: 0 };
   if (fb === 0) return { root: b, iterations: 0 };
   if (Math.sign(fa) === Math.sign(fb)) {
-    throw new PhysicsDomainError(
-      `findRoot: [${lo}, ${hi}] does not bracket a root (f = ${fa} and ${fb} have the same sign)`,
-    );
+    throw new PhysicsDomainError(`findRoot: [${lo}, ${hi}] does not bracket a root (f = ${fa} and ${fb} have the same sign)`);
   }
 
   // Brent's bookkeeping: b is the best estimate, c the contrapoint (f(b), f(c)

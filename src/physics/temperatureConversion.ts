@@ -52,7 +52,7 @@ export function conversionModel(model: string | undefined, sample: Pick<Sample, 
     throw new PhysicsDomainError(
       `'astm-f723' is a conversion at 290–305 K with no temperature dependence, so it cannot move a resistivity to another temperature; ` +
         `use a mobility-based resistivity model (blank: ${defaultMobilityModel(sample.material)} with the ` +
-          `default model's temperature dependence)`,
+        `default model's temperature dependence)`,
     );
   }
   return code === F723_ANCHORED_CODE ? defaultMobilityModel(sample.material) : code;

@@ -176,12 +176,7 @@ export type FieldDependence = (typeof FIELD_DEPENDENCE_CODES)[number];
  * @returns J in A/cm²
  * @example currentDensity(100, phosphorus1e16At300K) // ≈ 185.1 A/cm² (σE ≈ 186.3: saturation lowers it by 0.6 %)
  */
-export function currentDensity(
-  field: number,
-  sample: Sample,
-  model?: string,
-  fieldDependence: FieldDependence = 'saturating',
-): number {
+export function currentDensity(field: number, sample: Sample, model?: string, fieldDependence: FieldDependence = 'saturating'): number {
   if (fieldDependence === 'ohmic') return conductivity(sample, model) * field;
   const code = resolveResistivityModel(model, sample.material);
   if (code === F723_ANCHORED_CODE) {

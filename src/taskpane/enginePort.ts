@@ -98,8 +98,10 @@ export function createEnginePort(sheets?: Record<string, (string | number | bool
     },
     async write(block, cells) {
       if (cells.length !== block.rowCount || cells.some((row) => row.length !== block.columnCount)) {
-        throw new RangeError(`write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} ` +
-          `cells, got ${cells.length}×${cells[0]?.length ?? 0}`);
+        throw new RangeError(
+          `write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} ` +
+            `cells, got ${cells.length}×${cells[0]?.length ?? 0}`,
+        );
       }
       const sheet = sheetId(block.sheet, true);
       cells.forEach((row, r) =>
@@ -109,7 +111,10 @@ export function createEnginePort(sheets?: Record<string, (string | number | bool
           else written.delete(key);
         }),
       );
-      engine.setCellContents({ sheet, row: block.row, col: block.column }, cells.map((row) => row.map(content)));
+      engine.setCellContents(
+        { sheet, row: block.row, col: block.column },
+        cells.map((row) => row.map(content)),
+      );
     },
     async style(plan) {
       sheetId(plan.block.sheet, false);

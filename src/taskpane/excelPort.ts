@@ -42,8 +42,10 @@ function checkShape(block: CellBlock, cells: readonly (readonly CellInput[])[]):
   const rowsOk = cells.length === block.rowCount;
   const columnsOk = cells.every((row) => row.length === block.columnCount);
   if (!rowsOk || !columnsOk) {
-    throw new RangeError(`write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} ` +
-      `cells, got ${cells.length}×${cells[0]?.length ?? 0}`);
+    throw new RangeError(
+      `write to ${blockAddress(block)} needs ${block.rowCount}×${block.columnCount} ` +
+        `cells, got ${cells.length}×${cells[0]?.length ?? 0}`,
+    );
   }
 }
 
@@ -67,8 +69,8 @@ const CHART_REQUIREMENT = ['ExcelApi', '1.7'] as const;
 const HIGHLIGHT_REQUIREMENT = ['ExcelApi', '1.6'] as const;
 
 function requireSet(supports: RequirementCheck, [set, version]: readonly [string, string], what: string): void {
-  if (!supports(set, version)) throw new Error(`${what} needs ${set} ${version} (Excel 2019, Excel 2021 or ` +
-    `Microsoft 365); this Excel does not offer it`);
+  if (!supports(set, version))
+    throw new Error(`${what} needs ${set} ${version} (Excel 2019, Excel 2021 or ` + `Microsoft 365); this Excel does not offer it`);
 }
 
 /**
@@ -123,9 +125,8 @@ export function createExcelPort(
         if (plan.bold !== undefined) range.format.font.bold = plan.bold;
         if (plan.numberFormat !== undefined) {
           const format = plan.numberFormat;
-          range.numberFormat = Array.from(
-            { length: plan.block.rowCount },
-            () => Array.from({ length: plan.block.columnCount }, () => format),
+          range.numberFormat = Array.from({ length: plan.block.rowCount }, () =>
+            Array.from({ length: plan.block.columnCount }, () => format),
           );
         }
         await context.sync();

@@ -27,12 +27,14 @@ export type PaneSituation =
 export function statusText(situation: PaneSituation): string {
   switch (situation.kind) {
     case 'no-office':
-      return 'Office.js is not available here, so this page is not running inside Excel. Open Excel and ' +
-        'sideload manifest/manifest.xml to use the DRIFT functions.';
+      return (
+        'Office.js is not available here, so this page is not running inside Excel. Open Excel and ' +
+        'sideload manifest/manifest.xml to use the DRIFT functions.'
+      );
     case 'not-excel':
       return situation.host === null
         ? 'Opened outside Excel: Office.js loaded but found no Office application. Sideload ' +
-          'manifest/manifest.xml into Excel to use the DRIFT functions.'
+            'manifest/manifest.xml into Excel to use the DRIFT functions.'
         : `Opened in ${situation.host}, not Excel: the DRIFT functions work only in Excel.`;
     case 'excel':
       return situation.boundCount > 0

@@ -43,9 +43,7 @@ describe('the built add-in', () => {
     expect(metadata.functions.map((f) => f.id)).toEqual(CATALOG.map((spec) => spec.name));
     for (const spec of CATALOG) {
       const declared = metadata.functions.find((f) => f.id === spec.name)!;
-      expect(declared.parameters.map((p) => [p.name, Boolean(p.optional)])).toEqual(
-        spec.parameters.map((p) => [p.name, p.optional]),
-      );
+      expect(declared.parameters.map((p) => [p.name, Boolean(p.optional)])).toEqual(spec.parameters.map((p) => [p.name, p.optional]));
     }
   });
 

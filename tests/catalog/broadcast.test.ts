@@ -16,7 +16,13 @@ const product = elementwise({
     requiredNumber({ name: 'a', unit: null, description: 'First factor.', min: 0, minExclusive: true }),
     requiredNumber({ name: 'b', unit: null, description: 'Second factor.' }),
     optionalNumber({ name: 'c', unit: null, description: 'Offset.', defaultValue: 1 }),
-    codeParameter<string>({ name: 'mode', description: 'Mode.', choices: () => ['plain', 'Fail', 'throw'], defaultCode: 'plain', resolve: (c) => c }),
+    codeParameter<string>({
+      name: 'mode',
+      description: 'Mode.',
+      choices: () => ['plain', 'Fail', 'throw'],
+      defaultCode: 'plain',
+      resolve: (c) => c,
+    }),
   ] as const,
   compute: (a, b, c, mode) => {
     if (mode === 'Fail') throw new PhysicsDomainError('mode Fail always fails');
@@ -44,7 +50,12 @@ describe('evaluate: broadcasting as Excel does', () => {
   });
 
   it('runs same-shaped arrays elementwise', () => {
-    expect(evaluate(product, [[[1], [2]], [[10], [20]]])).toEqual([[11], [41]]);
+    expect(
+      evaluate(product, [
+        [[1], [2]],
+        [[10], [20]],
+      ]),
+    ).toEqual([[11], [41]]);
   });
 
   it('gives the full grid for a column against a row', () => {

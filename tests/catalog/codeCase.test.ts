@@ -74,7 +74,8 @@ describe('every text argument reads the same in any case', () => {
     const covered = new Set(cases.map(([name, parameter]) => `${name}.${parameter}`));
     for (const spec of CATALOG) {
       for (const parameter of parametersOf(spec)) {
-        if (parameter.type === 'text' && parameter.choices && baseCall(spec) !== null) expect(covered).toContain(`${spec.name}.${parameter.name}`);
+        if (parameter.type === 'text' && parameter.choices && baseCall(spec) !== null)
+          expect(covered).toContain(`${spec.name}.${parameter.name}`);
       }
     }
     expect(covered).toContain('RESISTIVITY.dopant');
@@ -105,23 +106,36 @@ describe('every text argument reads the same in any case', () => {
 });
 
 describe('codes that could be read two ways', () => {
-  const call = (dopant: string) => evaluate(CATALOG.find((entry) => entry.name === 'RESISTIVITY')!, [1e15, dopant]);
+  const call = (dopant: string) =>
+    evaluate(
+      CATALOG.find((entry) => entry.name === 'RESISTIVITY')!,
+      [1e15, dopant],
+    );
 
   it('refuse a lone P or N in any case, naming both readings and what to type', () => {
     for (const letter of ['P', 'p']) {
-      expect(call(letter)).toEqual([[{
-        kind: 'failure',
-        code: '#VALUE!',
-        message: `dopant "${letter}" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"`,
-      }]]);
+      expect(call(letter)).toEqual([
+        [
+          {
+            kind: 'failure',
+            code: '#VALUE!',
+            message: `dopant "${letter}" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"`,
+          },
+        ],
+      ]);
     }
     for (const letter of ['N', 'n']) {
-      expect(call(letter)[0][0]).toMatchObject({ message: expect.stringContaining('could mean nitrogen or a generic donor (n-type); type "nitrogen" or "donor"') });
+      expect(call(letter)[0][0]).toMatchObject({
+        message: expect.stringContaining('could mean nitrogen or a generic donor (n-type); type "nitrogen" or "donor"'),
+      });
     }
   });
 
   it('give the element and the generic dopant under their own words (the issue’s {"P","p"} now spelt out)', () => {
-    const [[phosphorus, acceptor]] = evaluate(CATALOG.find((entry) => entry.name === 'RESISTIVITY')!, [1e15, [['phosphorus', 'acceptor']]]) as number[][];
+    const [[phosphorus, acceptor]] = evaluate(
+      CATALOG.find((entry) => entry.name === 'RESISTIVITY')!,
+      [1e15, [['phosphorus', 'acceptor']]],
+    ) as number[][];
     // Orders of magnitude only: 1e15 cm⁻³ n-type Si is about 4–5 Ω·cm, p-type about 13–14 Ω·cm (common practice, no source).
     expect(phosphorus).toBeGreaterThan(4);
     expect(phosphorus).toBeLessThan(5);
@@ -133,7 +147,9 @@ describe('codes that could be read two ways', () => {
 describe('spelling tables', () => {
   it('refuse two spellings that are the same in any case', () => {
     expect(() => spellingTable('dopant', ['P', 'p'])).toThrow('dopant: "p" would mean both P and p');
-    expect(() => spellingTable('carrier', ['electron', 'hole'], { N: 'electron', n: 'hole' })).toThrow(/"n" would mean both electron and hole/);
+    expect(() => spellingTable('carrier', ['electron', 'hole'], { N: 'electron', n: 'hole' })).toThrow(
+      /"n" would mean both electron and hole/,
+    );
     expect(spellingTable('carrier', ['electron'], { Electrons: 'electron' }).get('electrons')).toBe('electron');
   });
 });

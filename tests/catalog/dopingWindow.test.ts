@@ -42,7 +42,9 @@ describe('DRIFT.DOPING with several solutions', () => {
     expect(message('DOPING', rho, 'phosphorus', 77, null, null, null, 1e16, 1e19)).toMatch(
       /^#VALUE! 2 densities of P with doping_min 1\.00e16 and doping_max 1\.00e19 cm⁻³ give/,
     );
-    expect(message('DOPING', rho, 'phosphorus', 77, null, null, null, 1e18, 1e16)).toMatch(/doping_min 1\.00e18 cm⁻³ is above doping_max 1\.00e16/);
+    expect(message('DOPING', rho, 'phosphorus', 77, null, null, null, 1e18, 1e16)).toMatch(
+      /doping_min 1\.00e18 cm⁻³ is above doping_max 1\.00e16/,
+    );
     expect(message('DOPING', rho, 'phosphorus', 77, null, null, null, -1)).toMatch(/doping_min must be ≥ 0 cm⁻³/);
     expect(message('DOPING', rho, 'phosphorus', 77, null, null, null, null, -1)).toMatch(/doping_max must be > 0 cm⁻³/);
   });
@@ -50,7 +52,9 @@ describe('DRIFT.DOPING with several solutions', () => {
   it('where the solution is unique, nothing changes and the window only checks it', () => {
     const unique = value('DOPING', 10, 'B');
     expect(value('DOPING', 10, 'B', null, null, null, null, 1e14, 1e16)).toBe(unique);
-    expect(message('DOPING', 10, 'B', null, null, null, null, 1e16)).toMatch(/no density of B with doping_min 1\.00e16 .* density that does is/);
+    expect(message('DOPING', 10, 'B', null, null, null, null, 1e16)).toMatch(
+      /no density of B with doping_min 1\.00e16 .* density that does is/,
+    );
   });
 });
 
@@ -58,16 +62,30 @@ describe('DRIFT.DOPINGRANGE with several solutions', () => {
   it('is an error listing them, and doping_min / doping_max (arguments 6 and 7, after the model) choose for both ends', () => {
     // 1e17 and 1.1e17 cm⁻³ lie on the stretch where ρ rises with doping at 77 K.
     const rhoMax = value('RESISTIVITY', 1.1e17, 'phosphorus', 77);
-    expect(message('DOPINGRANGE', rho, rhoMax, 'phosphorus', 77)).toMatch(/^#VALUE! 3 densities of P give resistivity .* doping_min and\/or doping_max/);
+    expect(message('DOPINGRANGE', rho, rhoMax, 'phosphorus', 77)).toMatch(
+      /^#VALUE! 3 densities of P give resistivity .* doping_min and\/or doping_max/,
+    );
     expect(grid('DOPINGRANGE', rho, rhoMax, 'phosphorus', 77, null, 1e16, 3e17)).toEqual([
-      [value('DOPING', rhoMax, 'phosphorus', 77, null, null, null, 1e16, 3e17), value('DOPING', rho, 'phosphorus', 77, null, null, null, 1e16, 3e17)],
+      [
+        value('DOPING', rhoMax, 'phosphorus', 77, null, null, null, 1e16, 3e17),
+        value('DOPING', rho, 'phosphorus', 77, null, null, null, 1e16, 3e17),
+      ],
     ]);
   });
 });
 
 describe('through the engine', () => {
   it('an ambiguous DRIFT.DOPING shows the error with its message; the bounds give a number', () => {
-    const engine = createEngine({ S: [[rho, '=DRIFT.DOPING(A1,"phosphorus",77)', '=DRIFT.DOPING(A1,"phosphorus",77,,,,1e16,3e17)', '=DRIFT.DOPING(A1,"phosphorus",77,,,,,1e15)']] });
+    const engine = createEngine({
+      S: [
+        [
+          rho,
+          '=DRIFT.DOPING(A1,"phosphorus",77)',
+          '=DRIFT.DOPING(A1,"phosphorus",77,,,,1e16,3e17)',
+          '=DRIFT.DOPING(A1,"phosphorus",77,,,,,1e15)',
+        ],
+      ],
+    });
     try {
       const error = engine.getCellValue({ sheet: 0, row: 0, col: 1 }) as { message?: string };
       expect(error.message).toMatch(/^3 densities of P give resistivity/);

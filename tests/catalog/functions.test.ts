@@ -6,8 +6,6 @@ import { CATALOG, evaluate, findFunction, type ArgumentInput } from '../../src/c
 import { ELEMENTARY_CHARGE, MOBILITY_MODEL_CODES, MODEL_REGISTRY, thermalVoltage } from '../../src/physics';
 import { message, value } from './support/call';
 
-
-
 describe('identities between catalog functions (definitions: common practice, no source)', () => {
   const cases: [number, string, number, number][] = [
     [1e15, 'B', 300, 0],
@@ -19,29 +17,46 @@ describe('identities between catalog functions (definitions: common practice, no
 
   // CONDUCTIVITY = q(MAJORITY·FREEMOBILITY(majority) + MINORITY·FREEMOBILITY(minority)) for the same named
   // model (FREEMOBILITY's help); a blank CONDUCTIVITY is its default model for both carriers.
-  it.each(cases)('σ = q(n·μn,free + p·μp,free) for %s cm⁻³ %s at %s K (counter %s), every silicon mobility model', (doping, dopant, t, counter) => {
-    const majority = value('MAJORITY', doping, dopant, t, null, counter);
-    const minority = value('MINORITY', doping, dopant, t, null, counter);
-    // Every mobility model; the blank default 'f723-anchored' scales this by its factor k (f723Anchored.test.ts).
-    for (const model of MOBILITY_MODEL_CODES) {
-      const muMajority = value('FREEMOBILITY', doping, dopant, t, 'majority', model, null, counter);
-      const muMinority = value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter);
-      const sigma = value('CONDUCTIVITY', doping, dopant, t, model, null, counter);
-      expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
-      expect(value('RESISTIVITY', doping, dopant, t, model, null, counter) * sigma).toBeCloseTo(1, 12);
-    }
-  });
+  it.each(cases)(
+    'σ = q(n·μn,free + p·μp,free) for %s cm⁻³ %s at %s K (counter %s), every silicon mobility model',
+    (doping, dopant, t, counter) => {
+      const majority = value('MAJORITY', doping, dopant, t, null, counter);
+      const minority = value('MINORITY', doping, dopant, t, null, counter);
+      // Every mobility model; the blank default 'f723-anchored' scales this by its factor k (f723Anchored.test.ts).
+      for (const model of MOBILITY_MODEL_CODES) {
+        const muMajority = value('FREEMOBILITY', doping, dopant, t, 'majority', model, null, counter);
+        const muMinority = value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter);
+        const sigma = value('CONDUCTIVITY', doping, dopant, t, model, null, counter);
+        expect(sigma / (ELEMENTARY_CHARGE * (majority * muMajority + minority * muMinority))).toBeCloseTo(1, 12);
+        expect(value('RESISTIVITY', doping, dopant, t, model, null, counter) * sigma).toBeCloseTo(1, 12);
+      }
+    },
+  );
 
-  it.each(cases)('FREEMOBILITY = MOBILITY for the minority carrier (%s cm⁻³ %s at %s K, counter %s), any model', (doping, dopant, t, counter) => {
-    for (const model of [...MOBILITY_MODEL_CODES, null]) {
-      expect(value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter)).toBe(value('MOBILITY', doping, dopant, t, 'minority', model, null, counter));
-    }
-  });
+  it.each(cases)(
+    'FREEMOBILITY = MOBILITY for the minority carrier (%s cm⁻³ %s at %s K, counter %s), any model',
+    (doping, dopant, t, counter) => {
+      for (const model of [...MOBILITY_MODEL_CODES, null]) {
+        expect(value('FREEMOBILITY', doping, dopant, t, 'minority', model, null, counter)).toBe(
+          value('MOBILITY', doping, dopant, t, 'minority', model, null, counter),
+        );
+      }
+    },
+  );
 
   it('FREEMOBILITY = MOBILITY for both carriers with the Ge, GaAs and 4H-SiC fits', () => {
-    for (const [material, dopant] of [['Ge', 'Sb'], ['Ge', 'Ga'], ['GaAs', 'Si'], ['GaAs', 'Zn'], ['4H-SiC', 'nitrogen'], ['4H-SiC', 'Al']] as const) {
+    for (const [material, dopant] of [
+      ['Ge', 'Sb'],
+      ['Ge', 'Ga'],
+      ['GaAs', 'Si'],
+      ['GaAs', 'Zn'],
+      ['4H-SiC', 'nitrogen'],
+      ['4H-SiC', 'Al'],
+    ] as const) {
       for (const role of ['majority', 'minority']) {
-        expect(value('FREEMOBILITY', 1e17, dopant, 300, role, null, material)).toBe(value('MOBILITY', 1e17, dopant, 300, role, null, material));
+        expect(value('FREEMOBILITY', 1e17, dopant, 300, role, null, material)).toBe(
+          value('MOBILITY', 1e17, dopant, 300, role, null, material),
+        );
       }
     }
   });
@@ -94,7 +109,11 @@ describe('identities between catalog functions (definitions: common practice, no
   });
 
   it('DOPING inverts RESISTIVITY to 1e-9, with and without counter-doping', () => {
-    for (const [doping, dopant, counter] of [[3e14, 'B', 0], [2e17, 'phosphorus', 5e16], [4e19, 'As', 0]] as const) {
+    for (const [doping, dopant, counter] of [
+      [3e14, 'B', 0],
+      [2e17, 'phosphorus', 5e16],
+      [4e19, 'As', 0],
+    ] as const) {
       const rho = value('RESISTIVITY', doping, dopant, 300, 'masetti', null, counter);
       expect(value('DOPING', rho, dopant, 300, 'masetti', null, counter) / doping).toBeCloseTo(1, 9);
     }
@@ -102,7 +121,12 @@ describe('identities between catalog functions (definitions: common practice, no
     // DOPING, so its round trip is off by the standard's own inconsistency between the two: F723 states
     // 3 % (B) and 4.5 % (P) (ASTM F723-99 §1.3, read in the public excerpt at inforstreet.com); a dopant
     // it does not anchor (As) round-trips exactly.
-    for (const [doping, dopant, bound] of [[3e14, 'B', 0.03], [1e16, 'B', 0.03], [1e15, 'phosphorus', 0.045], [1e19, 'phosphorus', 0.045]] as const) {
+    for (const [doping, dopant, bound] of [
+      [3e14, 'B', 0.03],
+      [1e16, 'B', 0.03],
+      [1e15, 'phosphorus', 0.045],
+      [1e19, 'phosphorus', 0.045],
+    ] as const) {
       const rho = value('RESISTIVITY', doping, dopant, 296.15);
       expect(Math.abs(value('RESISTIVITY', value('DOPING', rho, dopant, 296.15), dopant, 296.15) / rho - 1)).toBeLessThan(bound);
     }
@@ -143,7 +167,10 @@ describe('messages for bad input name the argument, the value and what is allowe
   it.each([
     [['RESISTIVITY', -5, 'B'], '#VALUE! doping must be > 0 cm⁻³ and ≤ 1e+22 cm⁻³; got -5'],
     [['RESISTIVITY', 1e16, 'Xe'], "#VALUE! unknown dopant 'Xe' for silicon"],
-    [['RESISTIVITY', 1e16, 'B', 300, 'drude'], '#VALUE! model "drude" is not known; allowed: f723-anchored, masetti, arora, caughey-thomas, klaassen, astm-f723'],
+    [
+      ['RESISTIVITY', 1e16, 'B', 300, 'drude'],
+      '#VALUE! model "drude" is not known; allowed: f723-anchored, masetti, arora, caughey-thomas, klaassen, astm-f723',
+    ],
     [['RESISTIVITY', 1e16, 'B', 300, null, 'GaN'], '#VALUE! material "GaN" is not known; allowed: Si'],
     [['INTRINSIC', 5], '#VALUE! temperature_K must be ≥ 20 K and ≤ 1000 K; got 5'],
     [['INTRINSIC', null], '#VALUE! temperature_K is required'],
@@ -166,7 +193,7 @@ describe('DRIFT.MODELS', () => {
     expect(table).toHaveLength(MODEL_REGISTRY.length + 1);
     for (const row of table.slice(1)) for (const cell of row) expect(typeof cell === 'string' && cell.length > 0).toBe(true);
   });
-  it('every code a function\'s model argument accepts is cited on its help page, its default first', () => {
+  it("every code a function's model argument accepts is cited on its help page, its default first", () => {
     for (const spec of CATALOG) {
       const model = spec.parameters.find((p) => p.name === 'model');
       if (model?.choices === undefined) continue;

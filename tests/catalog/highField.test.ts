@@ -31,10 +31,14 @@ describe('DRIFT.VELOCITY', () => {
   });
 
   it('works for Ge, GaAs and 4H-SiC electrons, and refuses 4H-SiC holes', () => {
-    expect(value('VELOCITY', 1e-15, 1e16, 'As', 300, 'electron', 'Ge')).toBe(value('MOBILITY', 1e16, 'As', 300, 'electron', null, 'Ge') * 1e-15);
+    expect(value('VELOCITY', 1e-15, 1e16, 'As', 300, 'electron', 'Ge')).toBe(
+      value('MOBILITY', 1e16, 'As', 300, 'electron', null, 'Ge') * 1e-15,
+    );
     expect(value('VELOCITY', 1e8, 1e16, 'Si', 300, 'electron', 'GaAs') / value('VSAT', 300, 'electron', 'GaAs')).toBeCloseTo(1, 2);
     expect(value('VELOCITY', 1e8, 1e16, 'nitrogen', 300, 'electron', '4H-SiC') / 2.2e7).toBeCloseTo(1, 2);
-    expect(message('VELOCITY', 1e4, 1e16, 'nitrogen', 300, 'minority', '4H-SiC')).toMatch(/no published hole saturation velocity for 4H-SiC/);
+    expect(message('VELOCITY', 1e4, 1e16, 'nitrogen', 300, 'minority', '4H-SiC')).toMatch(
+      /no published hole saturation velocity for 4H-SiC/,
+    );
   });
 
   it('names the temperature range where no saturation velocity is tabulated', () => {
@@ -79,14 +83,27 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
     const sample = { material: SILICON, temperature, dopant: resolveDopant(SILICON, dopant), density: doping, counterDensity: 0 };
     const majority: Carrier = sample.dopant.kind === 'donor' ? 'electron' : 'hole';
     const carrier: Carrier = role === 'majority' ? majority : majority === 'electron' ? 'hole' : 'electron';
-    return velocityAtMobility(field, carrier, sample, value('FREEMOBILITY', doping, dopant, temperature, role, model) / anchorFactor(doping, dopant, temperature));
+    return velocityAtMobility(
+      field,
+      carrier,
+      sample,
+      value('FREEMOBILITY', doping, dopant, temperature, role, model) / anchorFactor(doping, dopant, temperature),
+    );
   };
 
   it('is q(n·vn + p·vp) with n, p from MAJORITY/MINORITY and v from VELOCITY’s law at FREEMOBILITY', () => {
-    for (const [field, doping, dopant] of [[3e3, 1e16, 'phosphorus'], [-2e4, 1e17, 'B'], [5e5, 1e15, 'As'], [1e4, 1e18, 'B']] as const) {
+    for (const [field, doping, dopant] of [
+      [3e3, 1e16, 'phosphorus'],
+      [-2e4, 1e17, 'B'],
+      [5e5, 1e15, 'As'],
+      [1e4, 1e18, 'B'],
+    ] as const) {
       const nMajority = value('MAJORITY', doping, dopant);
       const nMinority = value('MINORITY', doping, dopant);
-      const expected = ELEMENTARY_CHARGE * (nMajority * freeVelocity(field, doping, dopant, 300, 'majority') + nMinority * freeVelocity(field, doping, dopant, 300, 'minority'));
+      const expected =
+        ELEMENTARY_CHARGE *
+        (nMajority * freeVelocity(field, doping, dopant, 300, 'majority') +
+          nMinority * freeVelocity(field, doping, dopant, 300, 'minority'));
       expect(value('CURRENTDENSITY', field, doping, dopant) / expected).toBeCloseTo(1, 12);
     }
   });
@@ -98,8 +115,14 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
     expect(value('CURRENTDENSITY', 1e7, doping, dopant) / (ELEMENTARY_CHARGE * p * value('VSAT', 300, 'hole'))).toBeCloseTo(1, 2);
     // At low field J/(q·p·E) is FREEMOBILITY/k (FREEMOBILITY 1.31× Masetti near 1e18, see its help), VELOCITY/E is MOBILITY.
     const field = 1e-6;
-    expect(value('CURRENTDENSITY', field, doping, dopant) / (ELEMENTARY_CHARGE * p * field) / (value('FREEMOBILITY', doping, dopant, 300, 'majority', 'masetti') / anchorFactor(doping, dopant))).toBeCloseTo(1, 6);
-    expect(value('VELOCITY', field, doping, dopant, 300, 'majority') / field / value('MOBILITY', doping, dopant, 300, 'majority', 'masetti')).toBeCloseTo(1, 6);
+    expect(
+      value('CURRENTDENSITY', field, doping, dopant) /
+        (ELEMENTARY_CHARGE * p * field) /
+        (value('FREEMOBILITY', doping, dopant, 300, 'majority', 'masetti') / anchorFactor(doping, dopant)),
+    ).toBeCloseTo(1, 6);
+    expect(
+      value('VELOCITY', field, doping, dopant, 300, 'majority') / field / value('MOBILITY', doping, dopant, 300, 'majority', 'masetti'),
+    ).toBeCloseTo(1, 6);
   });
 
   it('gives J/(σE) → 1 as E → 0 and about 1 − 4e-5 at 1 V/cm in 1e16 cm⁻³ n-type Si', () => {
@@ -118,13 +141,18 @@ describe('DRIFT.CURRENTDENSITY (high-field form)', () => {
   });
 
   it('keeps its argument positions; field_dependence "ohmic" gives σE and other codes are refused', () => {
-    expect(value('CURRENTDENSITY', 1e4, 1e16, 'phosphorus', 350, 'Si', 1e15, 'OHMIC')).toBeCloseTo(1e4 * value('CONDUCTIVITY', 1e16, 'phosphorus', 350, null, null, 1e15), 8);
+    expect(value('CURRENTDENSITY', 1e4, 1e16, 'phosphorus', 350, 'Si', 1e15, 'OHMIC')).toBeCloseTo(
+      1e4 * value('CONDUCTIVITY', 1e16, 'phosphorus', 350, null, null, 1e15),
+      8,
+    );
     expect(message('CURRENTDENSITY', 1e4, 1e16, 'phosphorus', 300, null, null, 'linear')).toMatch(/allowed: saturating, ohmic/);
   });
 
   it('works at 77 K in n-type Si, where the refused hole term cannot matter, and refuses p-type Si there', () => {
     const n77 = value('CURRENTDENSITY', 3e4, 1e16, 'phosphorus', 77);
-    expect(n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'phosphorus', 77) * freeVelocity(3e4, 1e16, 'phosphorus', 77, 'majority'))).toBeCloseTo(1, 12);
+    expect(
+      n77 / (ELEMENTARY_CHARGE * value('MAJORITY', 1e16, 'phosphorus', 77) * freeVelocity(3e4, 1e16, 'phosphorus', 77, 'majority')),
+    ).toBeCloseTo(1, 12);
     expect(message('CURRENTDENSITY', 3e4, 1e16, 'B', 77)).toMatch(/102–1000 K.*ohmic/);
   });
 

@@ -23,7 +23,9 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
   });
 
   it('is accepted case-insensitively and listed in the model argument', () => {
-    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'Klaassen')).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'klaassen'));
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'Klaassen')).toBe(
+      value('MOBILITY', 1e17, 'phosphorus', 300, 'majority', 'klaassen'),
+    );
     const model = findFunction('MOBILITY')!.parameters.find((p) => p.name === 'model')!;
     expect(model.details).toContain('klaassen');
     expect(findFunction('MOBILITY')!.models).toContain('klaassen');
@@ -31,7 +33,10 @@ describe('DRIFT.MOBILITY with model klaassen', () => {
 
   it('keeps 300 K resistivity close to the default (Masetti) for P: within 0.1 % at 1e14–1e19 cm⁻³', () => {
     for (const n of [1e14, 1e16, 1e18, 1e19]) {
-      expect(value('RESISTIVITY', n, 'phosphorus', 300, 'klaassen') / value('RESISTIVITY', n, 'phosphorus', 300, 'masetti')).toBeCloseTo(1, 3);
+      expect(value('RESISTIVITY', n, 'phosphorus', 300, 'klaassen') / value('RESISTIVITY', n, 'phosphorus', 300, 'masetti')).toBeCloseTo(
+        1,
+        3,
+      );
     }
   });
 

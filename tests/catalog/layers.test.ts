@@ -7,12 +7,15 @@ import { evaluate, findFunction, type ArgumentInput } from '../../src/catalog';
 import { SILICON, diffusedLayerSheetResistance, implantedLayerSheetResistance, resolveDopant } from '../../src/physics';
 import { message, value } from './support/call';
 
-
-
 describe('DRIFT.LAYERSHEETRES', () => {
   it('computes what the core computes, gaussian and 300 K by default, profile codes case-insensitive', () => {
     const core = diffusedLayerSheetResistance({
-      profile: 'gaussian', surfaceConcentration: 1e19, junctionDepthUm: 2, background: 1e15, dopant: resolveDopant(SILICON, 'B'), temperature: 300,
+      profile: 'gaussian',
+      surfaceConcentration: 1e19,
+      junctionDepthUm: 2,
+      background: 1e15,
+      dopant: resolveDopant(SILICON, 'B'),
+      temperature: 300,
     });
     expect(value('LAYERSHEETRES', 1e19, 2, 1e15, 'B')).toBe(core);
     expect(value('LAYERSHEETRES', 1e19, 2, 1e15, 'B', null, null)).toBe(core);
@@ -38,7 +41,12 @@ describe('DRIFT.LAYERSHEETRES', () => {
 describe('DRIFT.IMPLANTSHEETRES', () => {
   it('computes what the core computes at 300 K by default', () => {
     const core = implantedLayerSheetResistance({
-      dose: 1e14, rangeUm: 0.1, straggleUm: 0.04, background: 1e15, dopant: resolveDopant(SILICON, 'B'), temperature: 300,
+      dose: 1e14,
+      rangeUm: 0.1,
+      straggleUm: 0.04,
+      background: 1e15,
+      dopant: resolveDopant(SILICON, 'B'),
+      temperature: 300,
     });
     expect(value('IMPLANTSHEETRES', 1e14, 0.1, 0.04, 1e15, 'B')).toBe(core);
     expect(value('IMPLANTSHEETRES', 1e14, 0.1, 0.04, 1e15, 'B', 300)).toBe(core);
@@ -52,7 +60,7 @@ describe('messages for bad layer input', () => {
     [['LAYERSHEETRES', 1e19, 1, 0, 'B'], '#VALUE! background must be ≥ 1 cm⁻³'],
     [['LAYERSHEETRES', 1e19, 1, 1e15, 'B', 'linear'], '#VALUE! profile "linear" is not known; allowed: gaussian, erfc'],
     [['LAYERSHEETRES', 1e19, 1, 1e15, null], '#VALUE! dopant is required'],
-    [['IMPLANTSHEETRES', 1e9, 0.1, 0.1, 1e15, 'B'], '#VALUE! the implant\'s peak density'],
+    [['IMPLANTSHEETRES', 1e9, 0.1, 0.1, 1e15, 'B'], "#VALUE! the implant's peak density"],
     [['IMPLANTSHEETRES', 1e13, -1, 0.1, 1e15, 'B'], '#VALUE! range_um must be ≥ 0 µm and ≤ 10000 µm; got -1'],
     [['IMPLANTSHEETRES', 1e13, 0.1, 0, 1e15, 'B'], '#VALUE! straggle_um must be ≥ 0.0001 µm and ≤ 10000 µm; got 0'],
     [['IMPLANTSHEETRES', 0, 0.1, 0.1, 1e15, 'B'], '#VALUE! dose_cm2 must be > 0 cm⁻²; got 0'],

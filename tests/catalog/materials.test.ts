@@ -17,7 +17,27 @@ describe('material argument', () => {
 
   it('offers every material’s dopant codes, each once', () => {
     const codes = allDopantCodes();
-    for (const code of ['B', 'Al', 'Ga', 'In', 'phosphorus', 'As', 'Sb', 'donor', 'acceptor', 'Zn', 'Be', 'C', 'Mg', 'Si', 'Te', 'Se', 'Sn', 'nitrogen']) expect(codes).toContain(code);
+    for (const code of [
+      'B',
+      'Al',
+      'Ga',
+      'In',
+      'phosphorus',
+      'As',
+      'Sb',
+      'donor',
+      'acceptor',
+      'Zn',
+      'Be',
+      'C',
+      'Mg',
+      'Si',
+      'Te',
+      'Se',
+      'Sn',
+      'nitrogen',
+    ])
+      expect(codes).toContain(code);
     expect(new Set(codes).size).toBe(codes.length);
     const description = findFunction('RESISTIVITY')!.parameters.find((p) => p.name === 'dopant')!.details;
     expect(description).toContain('GaAs: Zn, Be, C, Mg, Si, Te, Se, Sn');
@@ -55,7 +75,11 @@ describe('resistivity of Ge, GaAs and 4H-SiC samples', () => {
   });
 
   it('evaluates the other material-aware functions for each new host', () => {
-    for (const [materialCode, donor] of [['Ge', 'As'], ['GaAs', 'Se'], ['4H-SiC', 'phosphorus']] as const) {
+    for (const [materialCode, donor] of [
+      ['Ge', 'As'],
+      ['GaAs', 'Se'],
+      ['4H-SiC', 'phosphorus'],
+    ] as const) {
       expect(value('BANDGAP', 300, materialCode)).toBeGreaterThan(0.6);
       expect(value('CONDUCTIONDOS', 300, materialCode)).toBeGreaterThan(1e17);
       expect(value('VALENCEDOS', 300, materialCode)).toBeGreaterThan(1e18);
@@ -68,12 +92,30 @@ describe('resistivity of Ge, GaAs and 4H-SiC samples', () => {
 
 describe('clear errors for what a material has no parameters for', () => {
   it.each([
-    [['MOBILITY', 1e16, 'Zn', 300, null, 'masetti', 'GaAs'], "#VALUE! mobility model 'masetti' has parameters for silicon only; gallium arsenide supports: sotoodeh"],
-    [['MOBILITY', 1e16, 'B', 300, null, 'sotoodeh'], "#VALUE! mobility model 'sotoodeh' has parameters for gallium arsenide only; silicon supports: masetti"],
-    [['RESISTIVITY', 1e16, 'Al', 300, 'astm-f723', '4H-SiC'], "#VALUE! resistivity model 'astm-f723' has parameters for silicon only; 4H silicon carbide supports: roschke-schwierz"],
-    [['DOPING', 1, 'B', 300, 'arora', 'Ge'], "#VALUE! resistivity model 'arora' has parameters for silicon only; germanium supports: hilsum"],
-    [['INTRINSIC', 300, 'Ge', 'misiakos'], "#VALUE! intrinsic density model 'misiakos' has parameters for silicon only; germanium supports: dos"],
-    [['RESISTIVITY', 1e16, 'B', 300, null, 'GaAs'], "#VALUE! unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor"],
+    [
+      ['MOBILITY', 1e16, 'Zn', 300, null, 'masetti', 'GaAs'],
+      "#VALUE! mobility model 'masetti' has parameters for silicon only; gallium arsenide supports: sotoodeh",
+    ],
+    [
+      ['MOBILITY', 1e16, 'B', 300, null, 'sotoodeh'],
+      "#VALUE! mobility model 'sotoodeh' has parameters for gallium arsenide only; silicon supports: masetti",
+    ],
+    [
+      ['RESISTIVITY', 1e16, 'Al', 300, 'astm-f723', '4H-SiC'],
+      "#VALUE! resistivity model 'astm-f723' has parameters for silicon only; 4H silicon carbide supports: roschke-schwierz",
+    ],
+    [
+      ['DOPING', 1, 'B', 300, 'arora', 'Ge'],
+      "#VALUE! resistivity model 'arora' has parameters for silicon only; germanium supports: hilsum",
+    ],
+    [
+      ['INTRINSIC', 300, 'Ge', 'misiakos'],
+      "#VALUE! intrinsic density model 'misiakos' has parameters for silicon only; germanium supports: dos",
+    ],
+    [
+      ['RESISTIVITY', 1e16, 'B', 300, null, 'GaAs'],
+      "#VALUE! unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor",
+    ],
     [['RESISTIVITY', 1e16, 'Zn', 300, null, 'Si'], "#VALUE! unknown dopant 'Zn' for silicon"],
     [['MOBILITY', 1e16, 'phosphorus', 300, null, 'drude', 'Ge'], '#VALUE! model "drude" is not known'],
   ] as const)('%j', (call, expected) => {

@@ -11,11 +11,13 @@ function grid(name: string, ...args: ArgumentInput[]): CellOutput[][] {
   return evaluate(spec, args);
 }
 
-
-
 describe('DRIFT.DOPINGRANGE', () => {
   it('is [DRIFT.DOPING(ρmax), DRIFT.DOPING(ρmin)] with the default model', () => {
-    for (const [lo, hi, dopant, t] of [[8, 12, 'B', null], [1, 3, 'phosphorus', 350], [0.005, 0.02, 'Sb', null]] as const) {
+    for (const [lo, hi, dopant, t] of [
+      [8, 12, 'B', null],
+      [1, 3, 'phosphorus', 350],
+      [0.005, 0.02, 'Sb', null],
+    ] as const) {
       expect(grid('DOPINGRANGE', lo, hi, dopant, t)).toEqual([[value('DOPING', hi, dopant, t), value('DOPING', lo, dopant, t)]]);
     }
   });
@@ -79,7 +81,12 @@ describe('DRIFT.VANDERPAUW, DRIFT.HALLDENSITY, DRIFT.HALLMOBILITY', () => {
 
 describe('DRIFT.RADIALVARIATION', () => {
   it('uses (mean edge − centre)/centre × 100 and takes edge_values whole', () => {
-    expect(value('RADIALVARIATION', 10, [[10.5, 10.3], [10.4, 10.6]])).toBeCloseTo(4.5, 12);
+    expect(
+      value('RADIALVARIATION', 10, [
+        [10.5, 10.3],
+        [10.4, 10.6],
+      ]),
+    ).toBeCloseTo(4.5, 12);
     expect(grid('RADIALVARIATION', [[10], [9]], [[10.5, 10.3, 10.4, 10.6]]).map((r) => r.length)).toEqual([1, 1]);
   });
 

@@ -7,7 +7,16 @@
  * it is meant for, every code that function accepts for that material and
  * dopant is listed, and the first is what a blank model argument gives.
  */
-import { CATALOG, evaluate, findFunction, isFailure, qualifiedName, type ArgumentInput, type CellOutput, type FunctionSpec } from '../../src/catalog';
+import {
+  CATALOG,
+  evaluate,
+  findFunction,
+  isFailure,
+  qualifiedName,
+  type ArgumentInput,
+  type CellOutput,
+  type FunctionSpec,
+} from '../../src/catalog';
 import { MODEL_QUANTITIES, applicableModelCodes, functionsTaking, modelQuantityOf, type ModelQuantity } from '../../src/catalog/modelCodes';
 import { InputError } from '../../src/catalog/values';
 import { rowFunction } from '../../src/catalog/types';
@@ -75,7 +84,8 @@ describe('the rows', () => {
   });
 
   it('lists astm-f723 only for B, P and As in silicon (ASTM F723 covers those three dopants)', () => {
-    for (const dopant of ['B', 'boron', 'phosphorus', 'As', 'arsenic']) expect([dopant, row(['resistivity', 'Si', dopant]).includes('astm-f723')]).toEqual([dopant, true]);
+    for (const dopant of ['B', 'boron', 'phosphorus', 'As', 'arsenic'])
+      expect([dopant, row(['resistivity', 'Si', dopant]).includes('astm-f723')]).toEqual([dopant, true]);
     for (const dopant of ['Ga', 'Al', 'In', 'Sb', 'donor', 'acceptor', 'n-type', 'p-type']) {
       const codes = row(['resistivity', 'Si', dopant]);
       expect([dopant, codes.includes('astm-f723')]).toEqual([dopant, false]);
@@ -122,7 +132,12 @@ const PROBES: Record<ModelQuantity, { name: string; args: (model: string, host: 
   'bandgap-narrowing': { name: 'NIEFF', args: (model, host, dopant) => [1e19, dopant, 300, model, host] },
 };
 
-const DOPANTS: Record<string, string[]> = { Si: ['B', 'phosphorus', 'As', 'Sb', 'Ga', 'donor'], Ge: ['Ga', 'Sb'], GaAs: ['Zn', 'Si'], '4H-SiC': ['Al', 'nitrogen'] };
+const DOPANTS: Record<string, string[]> = {
+  Si: ['B', 'phosphorus', 'As', 'Sb', 'Ga', 'donor'],
+  Ge: ['Ga', 'Sb'],
+  GaAs: ['Zn', 'Si'],
+  '4H-SiC': ['Al', 'nitrogen'],
+};
 
 describe('each list is what the functions themselves accept', () => {
   for (const quantity of MODEL_QUANTITIES) {
@@ -158,17 +173,27 @@ describe('each list is what the functions themselves accept', () => {
 
 describe('refusals', () => {
   it('names what is allowed for an unknown quantity, material or dopant', () => {
-    expect(failureOf(['conductance'])).toEqual({ code: '#VALUE!', message: 'quantity "conductance" is not known; allowed: resistivity, mobility, intrinsic, bandgap-narrowing' });
+    expect(failureOf(['conductance'])).toEqual({
+      code: '#VALUE!',
+      message: 'quantity "conductance" is not known; allowed: resistivity, mobility, intrinsic, bandgap-narrowing',
+    });
     expect(failureOf([null]).message).toBe('quantity is required; allowed: resistivity, mobility, intrinsic, bandgap-narrowing');
-    expect(failureOf(['resistivity', 'InP'])).toEqual({ code: '#VALUE!', message: 'material "InP" is not known; allowed: Si, Ge, GaAs, 4H-SiC' });
+    expect(failureOf(['resistivity', 'InP'])).toEqual({
+      code: '#VALUE!',
+      message: 'material "InP" is not known; allowed: Si, Ge, GaAs, 4H-SiC',
+    });
     const dopant = failureOf(['resistivity', 'GaAs', 'B']);
     expect(dopant.code).toBe('#VALUE!');
-    expect(dopant.message).toMatch(/^unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor/);
+    expect(dopant.message).toMatch(
+      /^unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor/,
+    );
   });
 
   it('refuses a lone P with both readings, as every dopant argument does', () => {
     for (const letter of ['P', 'p']) {
-      expect(failureOf(['resistivity', 'Si', letter]).message).toBe(`dopant "${letter}" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"`);
+      expect(failureOf(['resistivity', 'Si', letter]).message).toBe(
+        `dopant "${letter}" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"`,
+      );
     }
   });
 
@@ -182,7 +207,8 @@ describe('refusals', () => {
   it('refuses a multi-cell argument with one error naming it, since rows of different lengths cannot stack', () => {
     expect(failureOf([[['resistivity', 'mobility']]])).toEqual({
       code: '#VALUE!',
-      message: 'DRIFT.MODELCODES gives one row whose length depends on its arguments, so quantity must be a single value, not 1×2 values; call it once per value instead',
+      message:
+        'DRIFT.MODELCODES gives one row whose length depends on its arguments, so quantity must be a single value, not 1×2 values; call it once per value instead',
     });
     expect(failureOf(['resistivity', [['Si'], ['Ge']]]).message).toMatch(/so material must be a single value, not 2×1 values/);
     expect(failureOf(['resistivity', 'Si', [['B', 'P']]]).message).toMatch(/so dopant must be a single value, not 1×2 values/);
@@ -197,7 +223,9 @@ describe('refusals', () => {
   });
 
   it('applicableModelCodes throws the catalog’s InputError with the same messages', () => {
-    expect(() => applicableModelCodes('conductance' as ModelQuantity)).toThrow(new InputError('quantity "conductance" is not known; allowed: resistivity, mobility, intrinsic, bandgap-narrowing'));
+    expect(() => applicableModelCodes('conductance' as ModelQuantity)).toThrow(
+      new InputError('quantity "conductance" is not known; allowed: resistivity, mobility, intrinsic, bandgap-narrowing'),
+    );
     expect(() => applicableModelCodes('resistivity', 'InP')).toThrow(InputError);
     expect(() => applicableModelCodes('resistivity', 'Si', 'P')).toThrow(/could mean phosphorus/);
     expect(applicableModelCodes('resistivity', '', '')).toEqual(applicableModelCodes('resistivity'));
@@ -225,7 +253,10 @@ describe('the row kind in broadcast', () => {
 
   it('turns an empty row and a non-finite number into one error each, with a message', () => {
     expect(single(evaluate(count, [0]))).toMatchObject({ code: '#VALUE!', message: 'internal error in DRIFT.TESTCOUNT: an empty row' });
-    expect(single(evaluate(infinite, [1]))).toMatchObject({ code: '#NUM!', message: 'DRIFT.TESTINFINITE has no finite result for these inputs (got Infinity)' });
+    expect(single(evaluate(infinite, [1]))).toMatchObject({
+      code: '#NUM!',
+      message: 'DRIFT.TESTINFINITE has no finite result for these inputs (got Infinity)',
+    });
   });
 
   it('reports a bad argument once, in the parameter’s own words', () => {

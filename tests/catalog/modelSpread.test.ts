@@ -56,9 +56,13 @@ describe('DRIFT.DOPINGSPREAD', () => {
 
   it('where a model has several solutions (77 K) it is an error naming the model; doping_min/doping_max apply to every model', () => {
     const rho = value('RESISTIVITY', 1e17, 'phosphorus', 77, 'masetti');
-    expect(message('DOPINGSPREAD', rho, 'phosphorus', 77)).toMatch(/^#VALUE! model f723-anchored: 3 densities of P give resistivity .* Give doping_min and\/or doping_max/);
+    expect(message('DOPINGSPREAD', rho, 'phosphorus', 77)).toMatch(
+      /^#VALUE! model f723-anchored: 3 densities of P give resistivity .* Give doping_min and\/or doping_max/,
+    );
     // masetti alone has three solutions there; the window around 1e17 leaves one per model that has one there.
-    expect(message('DOPINGSPREAD', rho, 'phosphorus', 77, null, null, 1e16, 3e17)).toMatch(/^#VALUE! model klaassen: no density of P with doping_min/);
+    expect(message('DOPINGSPREAD', rho, 'phosphorus', 77, null, null, 1e16, 3e17)).toMatch(
+      /^#VALUE! model klaassen: no density of P with doping_min/,
+    );
   });
 
   it('spills one row of three through the engine', () => {

@@ -27,7 +27,9 @@ const MASETTI = {
 } as const;
 function masetti(row: keyof typeof MASETTI, n: number): number {
   const p = MASETTI[row];
-  return p.mumin1 * Math.exp(-p.Pc / n) + (p.mumax - p.mumin2) / (1 + Math.pow(n / p.Cr, p.alpha)) - p.mu1 / (1 + Math.pow(p.Cs / n, p.beta));
+  return (
+    p.mumin1 * Math.exp(-p.Pc / n) + (p.mumax - p.mumin2) / (1 + Math.pow(n / p.Cr, p.alpha)) - p.mu1 / (1 + Math.pow(p.Cs / n, p.beta))
+  );
 }
 
 // Arora, Hauser, Roulston, IEEE Trans. Electron Devices 29, 292 (1982), at T = 300 K (Tn = 1, so only the
@@ -35,7 +37,10 @@ function masetti(row: keyof typeof MASETTI, n: number): number {
 // with Charon's Arora list (tcadsoftware/charon, src/Charon_Material_Properties.cpp: μmin 88 / 54.3,
 // μmax(300 K) = A·300^b = 1252 / 407, Nref 1.26e17 / 2.35e17, α 0.88).
 function arora(carrier: 'electron' | 'hole', n: number): number {
-  const p = carrier === 'electron' ? { min: 88, a: 7.4e8, b: -2.33, ref: 1.26e17, alpha: 0.88 } : { min: 54.3, a: 1.36e8, b: -2.23, ref: 2.35e17, alpha: 0.88 };
+  const p =
+    carrier === 'electron'
+      ? { min: 88, a: 7.4e8, b: -2.33, ref: 1.26e17, alpha: 0.88 }
+      : { min: 54.3, a: 1.36e8, b: -2.23, ref: 2.35e17, alpha: 0.88 };
   return p.min + (p.a * Math.pow(300, p.b)) / (1 + Math.pow(n / p.ref, p.alpha));
 }
 
@@ -131,15 +136,23 @@ describe('blank model: minority carriers in silicon get Klaassen’s minority ph
   });
 
   it('follows net doping: electrons in P-doped Si counter-doped with more B are minority carriers (klaassen)', () => {
-    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'electron', null, null, 1e19)).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'electron', 'klaassen', null, 1e19));
-    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'hole', null, null, 1e19)).toBe(value('MOBILITY', 1e17, 'phosphorus', 300, 'hole', 'masetti', null, 1e19));
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'electron', null, null, 1e19)).toBe(
+      value('MOBILITY', 1e17, 'phosphorus', 300, 'electron', 'klaassen', null, 1e19),
+    );
+    expect(value('MOBILITY', 1e17, 'phosphorus', 300, 'hole', null, null, 1e19)).toBe(
+      value('MOBILITY', 1e17, 'phosphorus', 300, 'hole', 'masetti', null, 1e19),
+    );
   });
 
   it('applies to FREEMOBILITY, DIFFUSIVITY and VELOCITY too; other materials keep their own fit', () => {
     expect(value('FREEMOBILITY', 1e19, 'B', 300, 'minority')).toBe(value('FREEMOBILITY', 1e19, 'B', 300, 'minority', 'klaassen'));
     expect(value('DIFFUSIVITY', 1e19, 'B', 300, 'minority')).toBe(value('DIFFUSIVITY', 1e19, 'B', 300, 'minority', 'klaassen'));
     const field = 1e-9;
-    expect(value('VELOCITY', field, 1e19, 'B', 300, 'minority') / field / value('MOBILITY', 1e19, 'B', 300, 'minority', 'klaassen')).toBeCloseTo(1, 6);
-    expect(value('MOBILITY', 1e18, 'Zn', 300, 'minority', null, 'GaAs')).toBe(value('MOBILITY', 1e18, 'Zn', 300, 'minority', 'sotoodeh', 'GaAs'));
+    expect(
+      value('VELOCITY', field, 1e19, 'B', 300, 'minority') / field / value('MOBILITY', 1e19, 'B', 300, 'minority', 'klaassen'),
+    ).toBeCloseTo(1, 6);
+    expect(value('MOBILITY', 1e18, 'Zn', 300, 'minority', null, 'GaAs')).toBe(
+      value('MOBILITY', 1e18, 'Zn', 300, 'minority', 'sotoodeh', 'GaAs'),
+    );
   });
 });

@@ -33,7 +33,13 @@ describe('quoted ni values come from the code', () => {
 
 describe('README quotes mobility numbers the code gives', () => {
   const readme = readFileSync(join(__dirname, '..', '..', 'README.md'), 'utf8');
-  const sample = (symbol: string, density: number) => ({ material: SILICON, temperature: 300, dopant: resolveDopant(SILICON, symbol), density, counterDensity: 0 });
+  const sample = (symbol: string, density: number) => ({
+    material: SILICON,
+    temperature: 300,
+    dopant: resolveDopant(SILICON, symbol),
+    density,
+    counterDensity: 0,
+  });
 
   it('Masetti electrons in 1e18 cm⁻³ As-doped Si', () => {
     const masetti = fitMobility('masetti', 'electron', sample('As', 1e18)).toFixed(0);

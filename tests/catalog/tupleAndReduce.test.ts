@@ -49,31 +49,59 @@ describe('tuple functions', () => {
   });
 
   it('give one row per element of column arguments, single values repeated', () => {
-    expect(evaluate(window, [[[10], [20], [30]], 1])).toEqual([[9, 11], [19, 21], [29, 31]]);
+    expect(evaluate(window, [[[10], [20], [30]], 1])).toEqual([
+      [9, 11],
+      [19, 21],
+      [29, 31],
+    ]);
   });
 
   it('fill a failing row with its error and #N/A where a short column runs out', () => {
-    const out = evaluate(window, [[[10], [20], [30]], [[1], [-1]]]);
-    expect(codes(out)).toEqual([[9, 11], ['#VALUE!', '#VALUE!'], ['#N/A', '#N/A']]);
-    expect(evaluate(window, [failure('#DIV/0!', 'upstream'), 1])[0]).toEqual([failure('#DIV/0!', 'upstream'), failure('#DIV/0!', 'upstream')]);
+    const out = evaluate(window, [
+      [[10], [20], [30]],
+      [[1], [-1]],
+    ]);
+    expect(codes(out)).toEqual([
+      [9, 11],
+      ['#VALUE!', '#VALUE!'],
+      ['#N/A', '#N/A'],
+    ]);
+    expect(evaluate(window, [failure('#DIV/0!', 'upstream'), 1])[0]).toEqual([
+      failure('#DIV/0!', 'upstream'),
+      failure('#DIV/0!', 'upstream'),
+    ]);
   });
 
   it('refuse an argument wider than one column with one error that says why', () => {
     const out = evaluate(window, [[[10, 20]], 1]);
     expect(out).toHaveLength(1);
     expect(out[0]).toHaveLength(1);
-    expect(out[0][0]).toMatchObject({ code: '#VALUE!', message: expect.stringMatching(/row of 2 values \(low, high\).*a must be a single value or a column; got 1×2/) });
+    expect(out[0][0]).toMatchObject({
+      code: '#VALUE!',
+      message: expect.stringMatching(/row of 2 values \(low, high\).*a must be a single value or a column; got 1×2/),
+    });
   });
 
   it('report a wrong-length implementation as an internal error', () => {
     const broken = tupleFunction({ ...window, name: 'TESTBROKEN', compute: () => [1] });
-    expect(evaluate(broken, [1, 1])[0][0]).toMatchObject({ code: '#VALUE!', message: expect.stringMatching(/internal error.*1 values returned where 2/) });
+    expect(evaluate(broken, [1, 1])[0][0]).toMatchObject({
+      code: '#VALUE!',
+      message: expect.stringMatching(/internal error.*1 values returned where 2/),
+    });
   });
 });
 
 describe('reducing arguments', () => {
   it('consume the whole range, skipping blanks, and take no part in the shape', () => {
-    expect(evaluate(scaledSum, [2, [[1, 2], [3, null]]])).toEqual([[12]]);
+    expect(
+      evaluate(scaledSum, [
+        2,
+        [
+          [1, 2],
+          [3, null],
+        ],
+      ]),
+    ).toEqual([[12]]);
     expect(evaluate(scaledSum, [[[1], [10]], [[1, 2, 3, 4]]])).toEqual([[10], [100]]);
     expect(evaluate(scaledSum, [2, 5])).toEqual([[10]]);
   });

@@ -47,7 +47,9 @@ describe('several formulas', () => {
       const result = calc([], { file });
       expect(result.status).toBe(1);
       expect(result.out).toEqual(['1000', '#N/A', '#NAME? Named expression B not recognized.']);
-      expect(result.err).toEqual([`${file} line 5: hint: B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"`]);
+      expect(result.err).toEqual([
+        `${file} line 5: hint: B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"`,
+      ]);
     } finally {
       rmSync(folder, { recursive: true, force: true });
     }
@@ -87,7 +89,8 @@ describe('parseDigits and formulasOfText', () => {
     expect(parseDigits('1')).toBe(1);
     expect(parseDigits('17')).toBe(17);
     expect(parseDigits(undefined)).toBeUndefined();
-    for (const bad of ['0', '18', '2.5', 'three', '', '-3']) expect(() => parseDigits(bad)).toThrow(/--digits must be a whole number from 1 to 17/);
+    for (const bad of ['0', '18', '2.5', 'three', '', '-3'])
+      expect(() => parseDigits(bad)).toThrow(/--digits must be a whole number from 1 to 17/);
   });
 
   it('keeps line numbers of the file', () => {
@@ -102,7 +105,13 @@ describe('DRIFT.MODELCODES, a row whose length its arguments decide', () => {
     expect(calc(['DRIFT.MODELCODES("resistivity","Si","B")'])).toEqual({ status: 0, out: [codes.join('\t')], err: [] });
     expect(calc(['DRIFT.MODELCODES("resistivity",,"Ga")', 'DRIFT.MODELCODES("intrinsic","Ge")'])).toEqual({
       status: 0,
-      out: [`{${codes.slice(0, 5).map((code) => `"${code}"`).join(',')}}`, '"dos"'],
+      out: [
+        `{${codes
+          .slice(0, 5)
+          .map((code) => `"${code}"`)
+          .join(',')}}`,
+        '"dos"',
+      ],
       err: [],
     });
   });
@@ -118,7 +127,11 @@ describe('DRIFT.MODELCODES, a row whose length its arguments decide', () => {
   it('exits 1 with the engine’s reason when an argument is computed rather than typed', () => {
     const result = calc(['DRIFT.MODELCODES("resist"&"ivity")']);
     expect(result.status).toBe(1);
-    expect(result.out).toEqual([expect.stringMatching(/^#VALUE! DRIFT\.MODELCODES needs its arguments typed into the formula in this engine \(driftcell calc, recalc\)/)]);
+    expect(result.out).toEqual([
+      expect.stringMatching(
+        /^#VALUE! DRIFT\.MODELCODES needs its arguments typed into the formula in this engine \(driftcell calc, recalc\)/,
+      ),
+    ]);
   });
 
   it('exits 1 naming what is allowed for an unknown quantity', () => {

@@ -121,15 +121,23 @@ describe('calc', () => {
   it('exits 2 for a missing file of formulas, a file without formulas, and a bad --digits', () => {
     expect(driftcell('calc', '--file', 'none.txt')).toEqual({ status: 2, stdout: '', stderr: 'driftcell: none.txt: no such file\n' });
     writeFileSync(join(folder, 'empty.txt'), '# nothing\n\n');
-    expect(driftcell('calc', '--file', 'empty.txt').stderr).toBe('driftcell: empty.txt holds no formulas (blank lines and # comment lines are skipped)\n');
-    expect(driftcell('calc', '--digits', '18', '1')).toEqual({ status: 2, stdout: '', stderr: 'driftcell: --digits must be a whole number from 1 to 17; got 18\n' });
+    expect(driftcell('calc', '--file', 'empty.txt').stderr).toBe(
+      'driftcell: empty.txt holds no formulas (blank lines and # comment lines are skipped)\n',
+    );
+    expect(driftcell('calc', '--digits', '18', '1')).toEqual({
+      status: 2,
+      stdout: '',
+      stderr: 'driftcell: --digits must be a whole number from 1 to 17; got 18\n',
+    });
   });
 
   it('prints hints on stderr for a bare code and a temperature in °C', () => {
     const bare = driftcell('calc', 'DRIFT.RESISTIVITY(1e15,B)');
     expect(bare.status).toBe(1);
     expect(bare.stdout).toBe('#NAME? Named expression B not recognized.\n');
-    expect(bare.stderr).toBe('hint: B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"\n');
+    expect(bare.stderr).toBe(
+      'hint: B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"\n',
+    );
   });
 });
 

@@ -67,7 +67,12 @@ describe('formatNumber with significant digits', () => {
 
 describe('formatRecord (one line per formula)', () => {
   it('writes a spill as an Excel array constant and single values as constants', () => {
-    expect(formatRecord([[1, 2], [3, 4]]).lines).toEqual(['{1,2;3,4}']);
+    expect(
+      formatRecord([
+        [1, 2],
+        [3, 4],
+      ]).lines,
+    ).toEqual(['{1,2;3,4}']);
     expect(formatRecord([[1, 'a"b', true, null, error('#N/A', 'x')]]).lines).toEqual(['{1,"a""b",TRUE,,#N/A}']);
     expect(formatRecord('{1,2}').lines).toEqual(['"{1,2}"']);
     expect(formatRecord(13.5).lines).toEqual(['13.5']);

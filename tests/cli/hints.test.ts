@@ -13,8 +13,12 @@ const errorOf = (formula: string): ResultError => {
 
 describe('errorHint', () => {
   it('tells to quote a bare word where a code was meant', () => {
-    expect(errorHint(errorOf('DRIFT.RESISTIVITY(1e15,B)'))).toBe('B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"');
-    expect(reasonHint('the headless engine could not take the name B from the workbook')).toMatch(/write it as text in double quotes: "B"$/);
+    expect(errorHint(errorOf('DRIFT.RESISTIVITY(1e15,B)'))).toBe(
+      'B is not a defined name; if it is a code (dopant, material, model …), write it as text in double quotes: "B"',
+    );
+    expect(reasonHint('the headless engine could not take the name B from the workbook')).toMatch(
+      /write it as text in double quotes: "B"$/,
+    );
   });
 
   it('tells to separate arguments with commas, not semicolons', () => {
@@ -26,10 +30,14 @@ describe('errorHint', () => {
   });
 
   it('suggests the nearest DRIFT function for a misspelt one, all of them on a tie, none when nothing is near', () => {
-    expect(errorHint(errorOf('DRIFT.RESISTIVTY(1e15,"B")'))).toBe('there is no DRIFT function DRIFT.RESISTIVTY; did you mean DRIFT.RESISTIVITY?');
+    expect(errorHint(errorOf('DRIFT.RESISTIVTY(1e15,"B")'))).toBe(
+      'there is no DRIFT function DRIFT.RESISTIVTY; did you mean DRIFT.RESISTIVITY?',
+    );
     expect(nearestFunctions('drift.mobilty')).toEqual(['DRIFT.MOBILITY']);
     expect(nearestFunctions('DRIFT.QQQQQQQQQQQQ')).toEqual([]);
-    expect(errorHint(errorOf('DRIFT.QQQQQQQQQQQQ(1)'))).toMatch(/^there is no DRIFT function DRIFT\.QQQQQQQQQQQQ; the functions are listed in the README/);
+    expect(errorHint(errorOf('DRIFT.QQQQQQQQQQQQ(1)'))).toMatch(
+      /^there is no DRIFT function DRIFT\.QQQQQQQQQQQQ; the functions are listed in the README/,
+    );
     expect(errorHint(errorOf('RESISTIVITY(1e15,"B")'))).toBe('DRIFT functions are called with their prefix: write DRIFT.RESISTIVITY(…)');
     expect(errorHint(errorOf('NOSUCHBUILTIN(1)'))).toBeUndefined();
   });

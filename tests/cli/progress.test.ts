@@ -9,7 +9,9 @@ function fakeStream(isTTY: boolean, columns?: number): ProgressStream & { writte
 describe('renderProgress', () => {
   it('fills the bar in proportion to the finished phases', () => {
     expect(renderProgress('recalc a.xlsx', 0, 3, 'reading', 80)).toBe(`recalc a.xlsx [${'·'.repeat(24)}] 0/3 reading`);
-    expect(renderProgress('recalc a.xlsx', 1, 3, 'calculating', 80)).toBe(`recalc a.xlsx [${'#'.repeat(8)}${'·'.repeat(16)}] 1/3 calculating`);
+    expect(renderProgress('recalc a.xlsx', 1, 3, 'calculating', 80)).toBe(
+      `recalc a.xlsx [${'#'.repeat(8)}${'·'.repeat(16)}] 1/3 calculating`,
+    );
     expect(renderProgress('recalc a.xlsx', 3, 3, 'writing', 80)).toBe(`recalc a.xlsx [${'#'.repeat(24)}] 3/3 writing`);
   });
 
@@ -62,8 +64,12 @@ describe('phaseProgress counting cells', () => {
     progress.finish();
     // One frame for the phase, one per percent from 0 to 100, and the clearing write.
     expect(stream.written).toHaveLength(1 + 101 + 1);
-    expect(stream.written[1]).toBe(`\r${renderProgress('recalc w.xlsx', 2, 4, 'placing results', 120, { done: 1, total: 40000, unit: 'formulas' })}`);
-    expect(stream.written[101].trimEnd()).toBe(`\r${renderProgress('recalc w.xlsx', 2, 4, 'placing results', 120, { done: 40000, total: 40000, unit: 'formulas' })}`);
+    expect(stream.written[1]).toBe(
+      `\r${renderProgress('recalc w.xlsx', 2, 4, 'placing results', 120, { done: 1, total: 40000, unit: 'formulas' })}`,
+    );
+    expect(stream.written[101].trimEnd()).toBe(
+      `\r${renderProgress('recalc w.xlsx', 2, 4, 'placing results', 120, { done: 40000, total: 40000, unit: 'formulas' })}`,
+    );
   });
 
   it('counts from the start again in the next phase', () => {

@@ -26,7 +26,9 @@ describe('a blocked spill', () => {
     const blockers = findSpillBlockers(workbook, summary.problems);
     expect(Object.fromEntries(blockers)).toEqual({ 'Sheet1!A1': 'B3', 'Sheet1!D1': 'D2' });
     const { notes } = describeSummary(summary, 'out.xlsx', undefined, blockers);
-    expect(notes).toContain('  Sheet1!A1: #SPILL! the result needs cells that are filled: B3 blocks it; clear B3 (and any other filled cell in the way) so the result can spill');
+    expect(notes).toContain(
+      '  Sheet1!A1: #SPILL! the result needs cells that are filled: B3 blocks it; clear B3 (and any other filled cell in the way) so the result can spill',
+    );
   });
 });
 
@@ -50,7 +52,9 @@ describe('describeSummary', () => {
 
 describe('unreadableType', () => {
   it('tells to save an .ods, .xls or .csv file as .xlsx', () => {
-    expect(unreadableType('lots.ods', Buffer.alloc(0))).toMatch(/^lots\.ods is an OpenDocument spreadsheet \(\.ods\); recalc reads \.xlsx workbooks: open it in LibreOffice Calc or Excel, save it as \.xlsx/);
+    expect(unreadableType('lots.ods', Buffer.alloc(0))).toMatch(
+      /^lots\.ods is an OpenDocument spreadsheet \(\.ods\); recalc reads \.xlsx workbooks: open it in LibreOffice Calc or Excel, save it as \.xlsx/,
+    );
     expect(unreadableType('lots.xls', Buffer.alloc(0))).toMatch(/^lots\.xls is an Excel 97–2003 workbook \(\.xls\); recalc reads \.xlsx/);
     expect(unreadableType('lots.csv', Buffer.alloc(0))).toMatch(/^lots\.csv is a CSV text file, not a workbook/);
     expect(unreadableType('lots.xlsx', Buffer.alloc(0))).toBeUndefined();

@@ -99,7 +99,10 @@ describe('startStaticServer over HTTPS', () => {
     const server = await startStaticServer(path.join(folder, 'site'), { port: 0, tls: cert });
     try {
       expect(server.url).toBe(`https://localhost:${server.port}`);
-      const reply = await request(`https://127.0.0.1:${server.port}/functions.json`, { ca: [readFileSync(cert.caPath as string)], servername: 'localhost' });
+      const reply = await request(`https://127.0.0.1:${server.port}/functions.json`, {
+        ca: [readFileSync(cert.caPath as string)],
+        servername: 'localhost',
+      });
       expect(reply.status).toBe(200);
       expect(reply.body).toBe('{"functions":[]}');
     } finally {

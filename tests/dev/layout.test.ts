@@ -26,7 +26,11 @@ describe('development tooling stays out of the runtime', () => {
     const offenders = sourceFiles(path.join(ROOT, 'src')).filter((file) => {
       const text = readFileSync(file, 'utf8');
       const specifiers = [...text.matchAll(/(?:from\s+|import\s*\(\s*|require\s*\(\s*)['"]([^'"]+)['"]/g)].map((m) => m[1]);
-      return specifiers.some((s) => s === 'office-addin-dev-certs' || (s.startsWith('.') && path.resolve(path.dirname(file), s).startsWith(path.join(ROOT, 'dev') + path.sep)));
+      return specifiers.some(
+        (s) =>
+          s === 'office-addin-dev-certs' ||
+          (s.startsWith('.') && path.resolve(path.dirname(file), s).startsWith(path.join(ROOT, 'dev') + path.sep)),
+      );
     });
     expect(offenders.map((f) => path.relative(ROOT, f))).toEqual([]);
   });

@@ -17,7 +17,8 @@ describe('npm start', () => {
       const paths = projectPaths(root);
       expect(missingBuildOutputs(paths)).toHaveLength(4);
       mkdirSync(path.join(paths.addinDir, 'help'), { recursive: true });
-      for (const f of ['functions.json', 'functions.js', 'taskpane.html', 'help/index.html']) writeFileSync(path.join(paths.addinDir, f), '');
+      for (const f of ['functions.json', 'functions.js', 'taskpane.html', 'help/index.html'])
+        writeFileSync(path.join(paths.addinDir, f), '');
       expect(missingBuildOutputs(paths)).toEqual([]);
     } finally {
       rmSync(root, { recursive: true, force: true });
@@ -26,12 +27,23 @@ describe('npm start', () => {
 
   it('tells a Linux user how to sideload into Excel on the web and how to trust the certificate', () => {
     const paths = projectPaths('/project');
-    const text = sideloadInstructions(paths, { key: Buffer.alloc(0), cert: Buffer.alloc(0), certPath: '/c/localhost.crt', caPath: '/c/ca.crt', origin: 'existing' });
+    const text = sideloadInstructions(paths, {
+      key: Buffer.alloc(0),
+      cert: Buffer.alloc(0),
+      certPath: '/c/localhost.crt',
+      caPath: '/c/ca.crt',
+      origin: 'existing',
+    });
     expect(text).toContain('https://localhost:3000/');
     expect(text).toContain('Insert > Add-ins > Upload My Add-in');
     expect(text).toContain(path.join('/project', 'manifest', 'manifest.xml'));
     expect(text).toContain('/c/ca.crt');
-    const selfSigned = sideloadInstructions(paths, { key: Buffer.alloc(0), cert: Buffer.alloc(0), certPath: '/c/localhost.crt', origin: 'openssl' });
+    const selfSigned = sideloadInstructions(paths, {
+      key: Buffer.alloc(0),
+      cert: Buffer.alloc(0),
+      certPath: '/c/localhost.crt',
+      origin: 'openssl',
+    });
     expect(selfSigned).toContain('self-signed');
   });
 

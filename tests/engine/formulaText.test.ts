@@ -13,11 +13,20 @@ describe('storedFormula', () => {
     expect(storedFormula('SUM(A1:A3)')).toBe('SUM(A1:A3)');
   });
   it('writes one form whatever form it reads: typed, stored, any case', () => {
-    for (const text of ['DRIFT.SHEETRES(A2,10)', 'drift.sheetres(A2,10)', 'Drift.SheetRes(A2,10)', '_xldudf_DRIFT_SHEETRES(A2,10)', '_xldudf_drift_sheetres(A2,10)', '=DRIFT.SHEETRES(A2,10)']) {
+    for (const text of [
+      'DRIFT.SHEETRES(A2,10)',
+      'drift.sheetres(A2,10)',
+      'Drift.SheetRes(A2,10)',
+      '_xldudf_DRIFT_SHEETRES(A2,10)',
+      '_xldudf_drift_sheetres(A2,10)',
+      '=DRIFT.SHEETRES(A2,10)',
+    ]) {
       expect(storedFormula(text)).toBe('_xldudf_DRIFT_SHEETRES(A2,10)');
     }
     // Built-in prefixes stay (Excel needs them); other names that contain DRIFT are not DRIFT calls.
-    expect(storedFormula('_xlfn.STDEV.S(A1:A3)+MYDRIFT.X(1)+A_xldudf_DRIFT_X(2)')).toBe('_xlfn.STDEV.S(A1:A3)+MYDRIFT.X(1)+A_xldudf_DRIFT_X(2)');
+    expect(storedFormula('_xlfn.STDEV.S(A1:A3)+MYDRIFT.X(1)+A_xldudf_DRIFT_X(2)')).toBe(
+      '_xlfn.STDEV.S(A1:A3)+MYDRIFT.X(1)+A_xldudf_DRIFT_X(2)',
+    );
   });
   it('is undone by engineFormula', () => {
     const text = '=IF(DRIFT.DOPING(D4:E4,C4)>0,DRIFT.MODELS(),"DRIFT.INTRINSIC(")';

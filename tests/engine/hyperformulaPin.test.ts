@@ -42,7 +42,8 @@ function deepImports(): DeepImport[] {
       const module = statement.moduleSpecifier.text;
       if (!module.startsWith('hyperformula/')) continue;
       const bindings = statement.importClause?.namedBindings;
-      const names = bindings !== undefined && ts.isNamedImports(bindings) ? bindings.elements.map((e) => (e.propertyName ?? e.name).text) : [];
+      const names =
+        bindings !== undefined && ts.isNamedImports(bindings) ? bindings.elements.map((e) => (e.propertyName ?? e.name).text) : [];
       found.push({ file: path.relative(ROOT, file), module, names });
     }
   }
@@ -53,7 +54,15 @@ function deepImports(): DeepImport[] {
 function exportedNames(modules: readonly string[]): Map<string, string[] | undefined> {
   const probe = path.join(ROOT, 'tests', 'engine', '__hyperformula_probe__.ts');
   const text = modules.map((m, i) => `import * as m${i} from '${m}';\nexport { m${i} };\n`).join('');
-  const options: ts.CompilerOptions = { module: ts.ModuleKind.CommonJS, moduleResolution: ts.ModuleResolutionKind.Node10, target: ts.ScriptTarget.ES2020, strict: true, skipLibCheck: true, noEmit: true, types: [] };
+  const options: ts.CompilerOptions = {
+    module: ts.ModuleKind.CommonJS,
+    moduleResolution: ts.ModuleResolutionKind.Node10,
+    target: ts.ScriptTarget.ES2020,
+    strict: true,
+    skipLibCheck: true,
+    noEmit: true,
+    types: [],
+  };
   const host = ts.createCompilerHost(options);
   const readFile = host.readFile.bind(host);
   host.readFile = (name) => (path.resolve(name) === probe ? text : readFile(name));
@@ -96,7 +105,8 @@ describe('HyperFormula is pinned because src/engine relies on its internals', ()
         problems.push(`${file}: '${module}' no longer resolves in hyperformula ${installed}`);
         continue;
       }
-      for (const name of names) if (!available.includes(name)) problems.push(`${file}: '${module}' no longer exports ${name} (hyperformula ${installed})`);
+      for (const name of names)
+        if (!available.includes(name)) problems.push(`${file}: '${module}' no longer exports ${name} (hyperformula ${installed})`);
     }
     expect(problems).toEqual([]);
   });

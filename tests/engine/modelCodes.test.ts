@@ -46,7 +46,8 @@ function spillWidth(row: number, col: number): number {
   return width;
 }
 
-const NEEDS_TYPED = /^DRIFT\.MODELCODES needs its arguments typed into the formula in this engine \(driftcell calc, recalc\), e\.g\. DRIFT\.MODELCODES\("resistivity","Si","B"\): .*a cell reference or a computed argument cannot be used here\. Excel also takes them from cells\.$/;
+const NEEDS_TYPED =
+  /^DRIFT\.MODELCODES needs its arguments typed into the formula in this engine \(driftcell calc, recalc\), e\.g\. DRIFT\.MODELCODES\("resistivity","Si","B"\): .*a cell reference or a computed argument cannot be used here\. Excel also takes them from cells\.$/;
 
 describe('spill size from literal arguments', () => {
   it.each([
@@ -97,7 +98,10 @@ describe('as the model argument of another DRIFT function', () => {
     build({
       S: [
         ['doping', '=DRIFT.MODELCODES("resistivity","Si","B")'],
-        ...dopings.map((doping, i) => [doping, i === 0 ? '=DRIFT.RESISTIVITY(A2:A6,"B",300,DRIFT.MODELCODES("resistivity","Si","B"))' : null]),
+        ...dopings.map((doping, i) => [
+          doping,
+          i === 0 ? '=DRIFT.RESISTIVITY(A2:A6,"B",300,DRIFT.MODELCODES("resistivity","Si","B"))' : null,
+        ]),
       ],
     });
     // The header row and the table under it have the same width: every model once.
@@ -118,7 +122,9 @@ describe('as the model argument of another DRIFT function', () => {
     const codes = applicableModelCodes('resistivity', 'Si', 'B');
     build({ S: [['=DRIFT.RESISTIVITY(1e15,"B",350,DRIFT.MODELCODES("resistivity","Si","B"))']] });
     const values = engineGrid(rangeValues(0, 0, 0, codes.length - 1))[0];
-    codes.forEach((code, c) => expect([code, values[c]]).toEqual([code, catalogGrid(evaluate(spec('RESISTIVITY'), [1e15, 'B', 350, code]))[0][0]]));
+    codes.forEach((code, c) =>
+      expect([code, values[c]]).toEqual([code, catalogGrid(evaluate(spec('RESISTIVITY'), [1e15, 'B', 350, code]))[0][0]]),
+    );
     expect(values[codes.indexOf('astm-f723')]).toMatchObject({ code: '#VALUE!' });
     expect(values.filter((value) => typeof value === 'number')).toHaveLength(codes.length - 1);
   });
@@ -178,7 +184,9 @@ describe('recalc of a workbook', () => {
     [1e15, 1e16, 1e17].forEach((doping, i) => (sheet.getCell(`A${i + 2}`).value = doping));
     // As Excel stores an add-in's functions in a file (DEVELOPERS.md, Workbook formula text).
     sheet.getCell('B1').value = { formula: '_xldudf_DRIFT_MODELCODES("resistivity","Si","B")' } as ExcelJS.CellFormulaValue;
-    sheet.getCell('B2').value = { formula: '_xldudf_DRIFT_RESISTIVITY(A2:A4,"B",300,_xldudf_DRIFT_MODELCODES("resistivity","Si","B"))' } as ExcelJS.CellFormulaValue;
+    sheet.getCell('B2').value = {
+      formula: '_xldudf_DRIFT_RESISTIVITY(A2:A4,"B",300,_xldudf_DRIFT_MODELCODES("resistivity","Si","B"))',
+    } as ExcelJS.CellFormulaValue;
     sheet.getCell('A7').value = 'mobility';
     sheet.getCell('B7').value = { formula: 'DRIFT.MODELCODES(A7)' } as ExcelJS.CellFormulaValue;
     const input = join(folder, 'input.xlsx');

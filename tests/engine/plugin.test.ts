@@ -65,12 +65,7 @@ describe('ranges and inline arrays as arguments', () => {
 
   it('spills the full grid for a doping column against a temperature row', () => {
     build({
-      S: [
-        [null, 250, 300, 350],
-        [1e15, null, null, null, '=DRIFT.RESISTIVITY(A2:A4,"B",B1:D1)'],
-        [1e16],
-        [1e17],
-      ],
+      S: [[null, 250, 300, 350], [1e15, null, null, null, '=DRIFT.RESISTIVITY(A2:A4,"B",B1:D1)'], [1e16], [1e17]],
     });
     const spilled = engineGrid(rangeValues(0, 1, 4, 3, 6));
     expect(spilled).toEqual(direct('RESISTIVITY', [[[1e15], [1e16], [1e17]], 'B', [[250, 300, 350]]]));
@@ -179,15 +174,29 @@ describe('one formula the engine cannot take (issue 14 §3)', () => {
   });
 
   it('refuses a result of more than a million cells before reserving it', () => {
-    expect(evaluateFormula('=SEQUENCE(1048576,1)*SEQUENCE(1,16384)')).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringMatching(/^the formula gives 1,048,576×16,384 values/) });
-    expect(evaluateFormula('=SEQUENCE(1048576,4)')).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringMatching(/^the formula gives 1,048,576×4 values/) });
+    expect(evaluateFormula('=SEQUENCE(1048576,1)*SEQUENCE(1,16384)')).toMatchObject({
+      kind: 'error',
+      code: '#VALUE!',
+      message: expect.stringMatching(/^the formula gives 1,048,576×16,384 values/),
+    });
+    expect(evaluateFormula('=SEQUENCE(1048576,4)')).toMatchObject({
+      kind: 'error',
+      code: '#VALUE!',
+      message: expect.stringMatching(/^the formula gives 1,048,576×4 values/),
+    });
   });
 });
 
 describe('blank and omitted optional arguments', () => {
   it('uses the default for an empty argument, a blank cell and an omitted argument alike', () => {
     build({
-      S: [['=DRIFT.RESISTIVITY(1e15,"B",,"astm-f723")', '=DRIFT.RESISTIVITY(1e15,"B",Z9,"astm-f723")', '=DRIFT.RESISTIVITY(1e15,"B",300,"astm-f723")']],
+      S: [
+        [
+          '=DRIFT.RESISTIVITY(1e15,"B",,"astm-f723")',
+          '=DRIFT.RESISTIVITY(1e15,"B",Z9,"astm-f723")',
+          '=DRIFT.RESISTIVITY(1e15,"B",300,"astm-f723")',
+        ],
+      ],
     });
     const expected = direct('RESISTIVITY', [1e15, 'B', undefined, 'astm-f723']);
     expect([[fromEngine(cell(0, 0, 0))]]).toEqual(expected);
@@ -215,7 +224,12 @@ describe('built-ins around and inside DRIFT calls', () => {
   });
 
   it('takes array arithmetic and array built-ins as arguments', () => {
-    build({ S: [[1, '=DRIFT.RESISTIVITY(A1:A2*1e15,"B")', '=DRIFT.RESISTIVITY(SEQUENCE(2)*1e15,"B")', '=DRIFT.SHEETRES(TRANSPOSE(A1:A2),10)'], [10]] });
+    build({
+      S: [
+        [1, '=DRIFT.RESISTIVITY(A1:A2*1e15,"B")', '=DRIFT.RESISTIVITY(SEQUENCE(2)*1e15,"B")', '=DRIFT.SHEETRES(TRANSPOSE(A1:A2),10)'],
+        [10],
+      ],
+    });
     const expected = direct('RESISTIVITY', [[[1e15], [1e16]], 'B']);
     expect(engineGrid(rangeValues(0, 0, 1, 1, 1))).toEqual(expected);
     expect(engineGrid(rangeValues(0, 0, 2, 1, 2))).toEqual(direct('RESISTIVITY', [[[1e15], [2e15]], 'B']));
@@ -233,8 +247,11 @@ describe('built-ins around and inside DRIFT calls', () => {
 describe('references across sheets', () => {
   it('reads ranges and cells of another sheet, quoted names included', () => {
     build({
-      'Lot data': [['lot', 'rho min', 'rho max'], ['NQ-1', 4, 6]],
-      Results: [["=DRIFT.DOPING('Lot data'!B2:C2,\"phosphorus\")", null, "=DRIFT.SHEETRES('Lot data'!B2,10)"]],
+      'Lot data': [
+        ['lot', 'rho min', 'rho max'],
+        ['NQ-1', 4, 6],
+      ],
+      Results: [['=DRIFT.DOPING(\'Lot data\'!B2:C2,"phosphorus")', null, "=DRIFT.SHEETRES('Lot data'!B2,10)"]],
     });
     const results = engine.getSheetId('Results') as number;
     expect(engineGrid(rangeValues(results, 0, 0, 0, 1))).toEqual(direct('DOPING', [[[4, 6]], 'phosphorus']));
@@ -279,7 +296,9 @@ describe('evaluateFormula', () => {
     for (const [formula, named] of refs) {
       const result = evaluateFormula(formula);
       expect({ formula, result }).toMatchObject({ formula, result: { kind: 'error', code: '#REF!' } });
-      expect((result as { message: string }).message).toContain(`the formula refers to ${named}, but a formula evaluated on its own has no workbook`);
+      expect((result as { message: string }).message).toContain(
+        `the formula refers to ${named}, but a formula evaluated on its own has no workbook`,
+      );
       expect((result as { message: string }).message).toContain('driftcell recalc');
     }
   });
@@ -296,7 +315,9 @@ describe('evaluateFormula', () => {
     // 1e-300/(1.602e-19 × 1e308) ≈ 6e-590 cm⁻³ (arithmetic), below 4.9e-324, the least positive double (IEEE 754 binary64).
     const result = evaluateFormula('=DRIFT.HALLDENSITY(1e308,1e-300)');
     expect(result).toMatchObject({ kind: 'error', code: '#VALUE!' });
-    expect((result as { message: string }).message).toMatch(/carrier density for these arguments is about 1e-589 cm⁻³, smaller than 5e-324/);
+    expect((result as { message: string }).message).toMatch(
+      /carrier density for these arguments is about 1e-589 cm⁻³, smaller than 5e-324/,
+    );
     const mobility = evaluateFormula('=DRIFT.HALLMOBILITY(1e-300,1e300)');
     expect((mobility as { message: string }).message).toMatch(/mobility for these arguments is about 1e-600 /);
   });
@@ -310,4 +331,3 @@ describe('registration', () => {
     for (const name of ['DRIFT.BANDGAP', 'DRIFT.RESISTIVITY', 'DRIFT.MODELS']) expect(names).toContain(name);
   });
 });
-

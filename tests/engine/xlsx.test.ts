@@ -13,7 +13,15 @@ import { evaluate } from '../../src/catalog/broadcast';
 import type { ArgumentInput } from '../../src/catalog';
 import { engineFormula } from '../../src/engine/formulaText';
 import { markDynamicArrays } from '../../src/engine/dynamicArrays';
-import { WorkbookReadError, legacyArrayFill, loadWorkbook, readWorkbookFile, recalculateWorkbook, workbookBytes, type RecalcSummary } from '../../src/engine/xlsx';
+import {
+  WorkbookReadError,
+  legacyArrayFill,
+  loadWorkbook,
+  readWorkbookFile,
+  recalculateWorkbook,
+  workbookBytes,
+  type RecalcSummary,
+} from '../../src/engine/xlsx';
 import { catalogGrid } from './support/compare';
 import { addressesOf, openPackage, partText, sheetCells, type XmlCell } from './support/sheetXml';
 
@@ -30,13 +38,17 @@ function direct(name: string, args: ArgumentInput[]) {
 }
 
 /** Writes a workbook with exceljs, reads it back from disk, recalculates it, and returns the written bytes. */
-async function roundTrip(fill: (workbook: ExcelJS.Workbook) => void, dynamicAnchors?: ReadonlyMap<string, readonly string[]>): Promise<{ bytes: Buffer; summary: RecalcSummary }> {
+async function roundTrip(
+  fill: (workbook: ExcelJS.Workbook) => void,
+  dynamicAnchors?: ReadonlyMap<string, readonly string[]>,
+): Promise<{ bytes: Buffer; summary: RecalcSummary }> {
   const source = new ExcelJS.Workbook();
   fill(source);
   const input = join(folder, 'input.xlsx');
   await source.xlsx.writeFile(input);
   // An input whose array formulas are spills, as Excel 365 and Driftcell write them.
-  if (dynamicAnchors !== undefined) writeFileSync(input, await markDynamicArrays(Buffer.from(await source.xlsx.writeBuffer()), dynamicAnchors));
+  if (dynamicAnchors !== undefined)
+    writeFileSync(input, await markDynamicArrays(Buffer.from(await source.xlsx.writeBuffer()), dynamicAnchors));
   const workbook = await readWorkbookFile(input);
   const summary = recalculateWorkbook(workbook);
   const bytes = await workbookBytes(workbook, summary);
@@ -107,7 +119,12 @@ describe('a spilled result', () => {
     const back = await loadWorkbook(bytes);
     const sheet = back.getWorksheet('S') as ExcelJS.Worksheet;
     const expected = direct('SHEETRES', [[[1], [2]], 10]);
-    expect(sheet.getCell('B1').value).toMatchObject({ formula: '_xldudf_DRIFT_SHEETRES(A1:A2,10)', shareType: 'array', ref: 'B1:B2', result: expected[0][0] });
+    expect(sheet.getCell('B1').value).toMatchObject({
+      formula: '_xldudf_DRIFT_SHEETRES(A1:A2,10)',
+      shareType: 'array',
+      ref: 'B1:B2',
+      result: expected[0][0],
+    });
     expect(sheet.getCell('B2').value).toBe(expected[1][0]);
   });
 
@@ -165,14 +182,22 @@ describe('a spilled result', () => {
   });
 
   it('replaces an earlier spill’s cached cells: a shorter result leaves the rest empty', async () => {
-    const { bytes } = await roundTrip((wb) => {
-      const s = wb.addWorksheet('S');
-      s.getCell('A1').value = 5;
-      s.getCell('A2').value = 7;
-      // As a file from an earlier calculation has it: the anchor's range and stale values below.
-      s.getCell('B1').value = { formula: 'DRIFT.SHEETRES(A1:A2,1)', shareType: 'array', ref: 'B1:B4', result: 1 } as ExcelJS.CellFormulaValue;
-      for (const address of ['B2', 'B3', 'B4']) s.getCell(address).value = 99;
-    }, new Map([['S', ['B1']]]));
+    const { bytes } = await roundTrip(
+      (wb) => {
+        const s = wb.addWorksheet('S');
+        s.getCell('A1').value = 5;
+        s.getCell('A2').value = 7;
+        // As a file from an earlier calculation has it: the anchor's range and stale values below.
+        s.getCell('B1').value = {
+          formula: 'DRIFT.SHEETRES(A1:A2,1)',
+          shareType: 'array',
+          ref: 'B1:B4',
+          result: 1,
+        } as ExcelJS.CellFormulaValue;
+        for (const address of ['B2', 'B3', 'B4']) s.getCell(address).value = 99;
+      },
+      new Map([['S', ['B1']]]),
+    );
     const cells = await sheetCells(await openPackage(bytes), 'S');
     const expected = direct('SHEETRES', [[[5], [7]], 1]);
     expect(cells.get('B1')?.formula?.attributes.ref).toBe('B1:B2');
@@ -205,11 +230,11 @@ describe('formulas in a recalculated workbook', () => {
       lots.getCell('A1').value = 4;
       lots.getCell('B1').value = 6;
       const calc = wb.addWorksheet('Calc');
-      calc.getCell('A1').value = { formula: "DRIFT.DOPING('Lot data'!A1:B1,\"phosphorus\")" } as ExcelJS.CellFormulaValue;
+      calc.getCell('A1').value = { formula: 'DRIFT.DOPING(\'Lot data\'!A1:B1,"phosphorus")' } as ExcelJS.CellFormulaValue;
       calc.getCell('A2').value = { formula: "SUM('Lot data'!A1:B1)*2" } as ExcelJS.CellFormulaValue;
       calc.getCell('A3').value = { formula: 'DRIFT.SHEETRES(rho_min,10)' } as ExcelJS.CellFormulaValue;
       calc.getCell('A4').value = { formula: 'IF(A2>10,TRUE,FALSE)' } as ExcelJS.CellFormulaValue;
-      calc.getCell('A5').value = { formula: '_xlfn.STDEV.S(\'Lot data\'!A1:B1)' } as ExcelJS.CellFormulaValue;
+      calc.getCell('A5').value = { formula: "_xlfn.STDEV.S('Lot data'!A1:B1)" } as ExcelJS.CellFormulaValue;
       calc.getCell('A6').value = { formula: '_xldudf_DRIFT_SHEETRES(2,10)' } as ExcelJS.CellFormulaValue;
       calc.getCell('A7').value = { formula: 'ROUND(A1,-10)/1e15' } as ExcelJS.CellFormulaValue;
       calc.getCell('A8').value = { formula: 'drift.sheetres(2,10)' } as ExcelJS.CellFormulaValue;
@@ -232,13 +257,13 @@ describe('formulas in a recalculated workbook', () => {
     // the one form Excel stores for add-in functions (formulaText.ts).
     expect(cells.get('A5')?.formula?.text).toBe("_xlfn.STDEV.S('Lot data'!A1:B1)");
     expect(cells.get('A6')?.formula?.text).toBe('_xldudf_DRIFT_SHEETRES(2,10)');
-    expect(cells.get('A1')?.formula?.text).toBe("_xldudf_DRIFT_DOPING('Lot data'!A1:B1,\"phosphorus\")");
+    expect(cells.get('A1')?.formula?.text).toBe('_xldudf_DRIFT_DOPING(\'Lot data\'!A1:B1,"phosphorus")');
     expect(cells.get('A3')?.formula?.text).toBe('_xldudf_DRIFT_SHEETRES(rho_min,10)');
     for (const address of ['A8', 'A9']) {
       expect(cells.get(address)?.formula?.text).toBe('_xldudf_DRIFT_SHEETRES(2,10)');
       expect(cached(cells.get(address))).toBe(direct('SHEETRES', [2, 10])[0][0]);
     }
-    expect(cached(cells.get('A7'))).toBe(Math.round(doping[0] / 1e10) * 1e10 / 1e15);
+    expect(cached(cells.get('A7'))).toBe((Math.round(doping[0] / 1e10) * 1e10) / 1e15);
   });
 
   it('computes each cell of a shared formula and writes it as its own formula', async () => {
@@ -286,7 +311,7 @@ describe('engineFormula', () => {
     expect(engineFormula('_xlfn.SEQUENCE(3)')).toBe('=SEQUENCE(3)');
     expect(engineFormula('_xlfn._xlws.SORT(A1:A3)')).toBe('=SORT(A1:A3)');
     expect(engineFormula('_xldudf_DRIFT_RESISTIVITY(A2,"B")')).toBe('=DRIFT.RESISTIVITY(A2,"B")');
-    expect(engineFormula("SUM('_xlfn. sheet'!A1)&\"_xlfn.x\"")).toBe("=SUM('_xlfn. sheet'!A1)&\"_xlfn.x\"");
+    expect(engineFormula('SUM(\'_xlfn. sheet\'!A1)&"_xlfn.x"')).toBe('=SUM(\'_xlfn. sheet\'!A1)&"_xlfn.x"');
     expect(engineFormula('LEN("say ""_xlfn."" twice")')).toBe('=LEN("say ""_xlfn."" twice")');
   });
 });
@@ -306,11 +331,37 @@ describe('a legacy array formula (entered over a fixed range, no dynamic-array m
   it('lays a result over its range as ECMA-376 §18.17.2 and Excel do: broadcast one value, row or column, #N/A elsewhere', () => {
     // The rules are ECMA-376 Part 1 §18.17.2 (single value fills every cell; an N×1 result's excess
     // columns clone its first column) and Microsoft's "return #N/A's if too large".
-    const codes = (grid: ReturnType<typeof legacyArrayFill>) => grid.map((row) => row.map((v) => (typeof v === 'object' && v !== null ? { code: (v as { value: string }).value } : v)));
-    expect(codes(legacyArrayFill([[7]], 2, 2))).toEqual([[7, 7], [7, 7]]);
-    expect(codes(legacyArrayFill([[1], [2]], 3, 2))).toEqual([[1, 1], [2, 2], [na, na]]);
-    expect(codes(legacyArrayFill([[1, 2]], 2, 3))).toEqual([[1, 2, na], [1, 2, na]]);
-    expect(codes(legacyArrayFill([[1, 2], [3, 4]], 3, 3))).toEqual([[1, 2, na], [3, 4, na], [na, na, na]]);
+    const codes = (grid: ReturnType<typeof legacyArrayFill>) =>
+      grid.map((row) => row.map((v) => (typeof v === 'object' && v !== null ? { code: (v as { value: string }).value } : v)));
+    expect(codes(legacyArrayFill([[7]], 2, 2))).toEqual([
+      [7, 7],
+      [7, 7],
+    ]);
+    expect(codes(legacyArrayFill([[1], [2]], 3, 2))).toEqual([
+      [1, 1],
+      [2, 2],
+      [na, na],
+    ]);
+    expect(codes(legacyArrayFill([[1, 2]], 2, 3))).toEqual([
+      [1, 2, na],
+      [1, 2, na],
+    ]);
+    expect(
+      codes(
+        legacyArrayFill(
+          [
+            [1, 2],
+            [3, 4],
+          ],
+          3,
+          3,
+        ),
+      ),
+    ).toEqual([
+      [1, 2, na],
+      [3, 4, na],
+      [na, na, na],
+    ]);
   });
 
   it('keeps its whole declared range when the result is smaller: nothing in it is deleted', async () => {
@@ -318,7 +369,12 @@ describe('a legacy array formula (entered over a fixed range, no dynamic-array m
       const s = wb.addWorksheet('S');
       s.getCell('A1').value = 5;
       s.getCell('A2').value = 7;
-      s.getCell('B1').value = { formula: 'DRIFT.SHEETRES(A1:A2,1)', shareType: 'array', ref: 'B1:B4', result: 1 } as ExcelJS.CellFormulaValue;
+      s.getCell('B1').value = {
+        formula: 'DRIFT.SHEETRES(A1:A2,1)',
+        shareType: 'array',
+        ref: 'B1:B4',
+        result: 1,
+      } as ExcelJS.CellFormulaValue;
       s.getCell('B2').value = 99;
       // Text another writer left inside the array's range: the range is the array's, so it gets the array's value.
       s.getCell('B3').value = 'user note';

@@ -13,7 +13,18 @@ describe('toArgumentInput', () => {
   });
 
   it('keeps a matrix as a grid, row-major, with blanks as null', () => {
-    expect(toArgumentInput([[1e15, 1e16], ['', null]], 'doping')).toEqual([[1e15, 1e16], [null, null]]);
+    expect(
+      toArgumentInput(
+        [
+          [1e15, 1e16],
+          ['', null],
+        ],
+        'doping',
+      ),
+    ).toEqual([
+      [1e15, 1e16],
+      [null, null],
+    ]);
     expect(toArgumentInput([['phosphorus'], [true]], 'dopant')).toEqual([['phosphorus'], [true]]);
   });
 
@@ -70,7 +81,15 @@ describe('toArgumentInputs', () => {
   });
 
   it('fills arguments Excel did not pass at all as absent', () => {
-    expect(toArgumentInputs(mobility, [[[1e16]], [['phosphorus']]])).toEqual([[[1e16]], [['phosphorus']], undefined, undefined, undefined, undefined, undefined]);
+    expect(toArgumentInputs(mobility, [[[1e16]], [['phosphorus']]])).toEqual([
+      [[1e16]],
+      [['phosphorus']],
+      undefined,
+      undefined,
+      undefined,
+      undefined,
+      undefined,
+    ]);
   });
 });
 
@@ -88,7 +107,11 @@ describe('an empty cell that Excel passes as 0', () => {
     // RESISTIVITY(1e15,"B",0) with the 0 from an empty temperature cell means 300 K.
     const inputs = toArgumentInputs(resistivity, [[[1e15]], [['B']], [[0]], [[0]], [[0]], null, {}]);
     expect(evaluate(resistivity, inputs)).toEqual(evaluate(resistivity, [1e15, 'B']));
-    expect(spec('FOURPOINT').parameters.filter((p) => p.zeroIsBlank).map((p) => p.name)).toEqual(expect.arrayContaining(['spacing_um']));
+    expect(
+      spec('FOURPOINT')
+        .parameters.filter((p) => p.zeroIsBlank)
+        .map((p) => p.name),
+    ).toEqual(expect.arrayContaining(['spacing_um']));
   });
 
   it('stays 0 where 0 means something (counter_doping)', () => {

@@ -17,7 +17,8 @@ import { launchLocalBrowser, type LocalBrowser } from './support/localBrowser';
 
 const HOST_PAGE = '/__test__/host.html';
 /** A page that loads only the functions bundle: no Office.js, no task pane. */
-const HOST_HTML = '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>functions alone</title></head><body><script src="/functions.js"></script></body></html>';
+const HOST_HTML =
+  '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>functions alone</title></head><body><script src="/functions.js"></script></body></html>';
 
 describe('the production functions bundle alone in Chromium', () => {
   let server: RunningServer;
@@ -28,14 +29,17 @@ describe('the production functions bundle alone in Chromium', () => {
   beforeAll(async () => {
     requireAddinBuild();
     const files = staticRequestHandler(ADDIN_DIR);
-    server = await startServer((req, res) => {
-      if (req.url === HOST_PAGE) {
-        res.writeHead(200, { 'Content-Type': 'text/html; charset=utf-8' });
-        res.end(HOST_HTML);
-        return;
-      }
-      files(req, res);
-    }, { port: 0, host: '127.0.0.1' });
+    server = await startServer(
+      (req, res) => {
+        if (req.url === HOST_PAGE) {
+          res.writeHead(200, { 'Content-Type': 'text/html; charset=utf-8' });
+          res.end(HOST_HTML);
+          return;
+        }
+        files(req, res);
+      },
+      { port: 0, host: '127.0.0.1' },
+    );
     browser = await launchLocalBrowser(server.url);
     page = browser.context.pages()[0] ?? (await browser.context.newPage());
     page.on('pageerror', (error) => pageErrors.push(error.message));
@@ -49,7 +53,9 @@ describe('the production functions bundle alone in Chromium', () => {
 
   it('loads without a page error and binds nothing, saying so to the pane', async () => {
     expect(pageErrors).toEqual([]);
-    const status = await page.evaluate(() => (window as unknown as { __driftcellFunctions?: { boundIds: string[] } }).__driftcellFunctions?.boundIds);
+    const status = await page.evaluate(
+      () => (window as unknown as { __driftcellFunctions?: { boundIds: string[] } }).__driftcellFunctions?.boundIds,
+    );
     expect(status).toEqual([]);
   });
 

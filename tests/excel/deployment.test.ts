@@ -61,7 +61,8 @@ describe('the build with and without the setting', () => {
   it('ships no source maps in dist/addin', () => {
     requireAddinBuild();
     expect(readdirSync(ADDIN_DIR).filter((f) => f.endsWith('.map'))).toEqual([]);
-    for (const bundle of ['functions.js', 'taskpane.js']) expect(readFileSync(path.join(ADDIN_DIR, bundle), 'utf8')).not.toContain('sourceMappingURL');
+    for (const bundle of ['functions.js', 'taskpane.js'])
+      expect(readFileSync(path.join(ADDIN_DIR, bundle), 'utf8')).not.toContain('sourceMappingURL');
   });
 
   it('with it: the manifest and functions.json name only that address', () => {
@@ -69,11 +70,15 @@ describe('the build with and without the setting', () => {
     const out = mkdtempSync(path.join(os.tmpdir(), 'driftcell-deploy-'));
     try {
       const base = 'https://tools.example.org/driftcell';
-      const run = spawnSync(process.execPath, [require.resolve('webpack-cli/bin/cli.js'), '--mode', 'production', '--env', `addinUrl=${base}`, '--output-path', out], {
-        cwd: PROJECT_ROOT,
-        encoding: 'utf8',
-        timeout: 300000,
-      });
+      const run = spawnSync(
+        process.execPath,
+        [require.resolve('webpack-cli/bin/cli.js'), '--mode', 'production', '--env', `addinUrl=${base}`, '--output-path', out],
+        {
+          cwd: PROJECT_ROOT,
+          encoding: 'utf8',
+          timeout: 300000,
+        },
+      );
       expect({ status: run.status, stderr: run.stderr.slice(0, 2000) }).toEqual({ status: 0, stderr: expect.any(String) });
       const manifestUrls = urlsIn(readFileSync(path.join(out, 'manifest.xml'), 'utf8'));
       const functionUrls = urlsIn(readFileSync(path.join(out, 'functions.json'), 'utf8'));

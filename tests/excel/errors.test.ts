@@ -35,7 +35,11 @@ describe('toExcelErrorSpec', () => {
       cellText: '#VALUE!',
       message: 'doping must be > 0; got -1',
     });
-    expect(toExcelErrorSpec(failure('#N/A', 'no value here'))).toEqual({ excelName: 'notAvailable', cellText: '#N/A', message: 'no value here' });
+    expect(toExcelErrorSpec(failure('#N/A', 'no value here'))).toEqual({
+      excelName: 'notAvailable',
+      cellText: '#N/A',
+      message: 'no value here',
+    });
   });
 
   it('drops the message for #NUM!, #DIV/0! and #NULL!, which cannot show one', () => {

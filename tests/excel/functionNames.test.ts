@@ -12,7 +12,8 @@ import { looksLikeCellReference, whyInvalidFunctionId } from '../../src/excel/fu
 
 describe('custom-function names', () => {
   it('every catalog name passes every rule', () => {
-    for (const spec of CATALOG) expect({ name: spec.name, problem: whyInvalidFunctionId(spec.name) }).toEqual({ name: spec.name, problem: null });
+    for (const spec of CATALOG)
+      expect({ name: spec.name, problem: whyInvalidFunctionId(spec.name) }).toEqual({ name: spec.name, problem: null });
   });
 
   it.each([
@@ -45,7 +46,18 @@ describe('custom-function names', () => {
   });
 
   it('the generator refuses a catalog with a name Office would refuse', () => {
-    const short = elementwise({ name: 'NV', summary: 's', help: 'h', result: { unit: null, description: 'd' }, parameters: [] as const, examples: [], models: [], compute: () => 1 });
-    expect(() => buildFunctionsMetadata([short], 'https://localhost:3000')).toThrow(/"NV" cannot be an Excel custom function id: it is shorter than three characters/);
+    const short = elementwise({
+      name: 'NV',
+      summary: 's',
+      help: 'h',
+      result: { unit: null, description: 'd' },
+      parameters: [] as const,
+      examples: [],
+      models: [],
+      compute: () => 1,
+    });
+    expect(() => buildFunctionsMetadata([short], 'https://localhost:3000')).toThrow(
+      /"NV" cannot be an Excel custom function id: it is shorter than three characters/,
+    );
   });
 });

@@ -51,7 +51,10 @@ describe('functions.ts entry', () => {
     expect(entry.currentErrors()).toBeUndefined();
     // The runtime script adds Error later; the bound functions find it then.
     class LateError {
-      constructor(readonly code: string, readonly message?: string) {}
+      constructor(
+        readonly code: string,
+        readonly message?: string,
+      ) {}
     }
     (globals.CustomFunctions as Record<string, unknown>).Error = LateError;
     const mobility = associate.mock.calls.find((c) => c[0] === 'MOBILITY')?.[1] as (...a: unknown[]) => unknown[][];

@@ -70,7 +70,9 @@ describe('renderHelpPage', () => {
     const lookup = () => {
       throw new Error('unknown model');
     };
-    expect(() => renderHelpPage(spec('MOBILITY'), { lookupModel: lookup })).toThrow(/DRIFT\.MOBILITY: model code "masetti" is not in the model registry/);
+    expect(() => renderHelpPage(spec('MOBILITY'), { lookupModel: lookup })).toThrow(
+      /DRIFT\.MOBILITY: model code "masetti" is not in the model registry/,
+    );
   });
 
   it('is a standalone page: no script, nothing loaded from elsewhere, a strict CSP, light and dark styles', () => {

@@ -22,7 +22,8 @@ import { child, parseXml } from './support/xml';
 const LEVELS = ['Restricted', 'ReadDocument', 'ReadAllDocument', 'WriteDocument', 'ReadWriteDocument'] as const;
 
 /** Office.js calls that need more than Restricted (from the permission table of the same documentation). */
-const DOCUMENT_APIS = /\b(Excel\.run|getSelectedDataAsync|setSelectedDataAsync|getFileAsync|getFilePropertiesAsync|goToByIdAsync|bindings\.|addHandlerAsync|customXmlParts|\.setDataAsync|\.getDataAsync)\b/;
+const DOCUMENT_APIS =
+  /\b(Excel\.run|getSelectedDataAsync|setSelectedDataAsync|getFileAsync|getFilePropertiesAsync|goToByIdAsync|bindings\.|addHandlerAsync|customXmlParts|\.setDataAsync|\.getDataAsync)\b/;
 
 function sourceFiles(folder: string): string[] {
   return readdirSync(folder).flatMap((name) => {
@@ -34,7 +35,7 @@ function sourceFiles(folder: string): string[] {
 describe('the manifest permission', () => {
   const manifest = parseXml(readFileSync(path.join(PROJECT_ROOT, 'manifest', 'manifest.xml'), 'utf8'));
 
-  it('is ReadWriteDocument, the level the pane\'s workbook writes need (Excel.run)', () => {
+  it("is ReadWriteDocument, the level the pane's workbook writes need (Excel.run)", () => {
     const permission = child(manifest, 'Permissions').text.trim();
     expect(LEVELS).toContain(permission);
     expect(permission).toBe('ReadWriteDocument');

@@ -132,7 +132,9 @@ describe('manifest.xml', () => {
       expect(sizeOf(path.join(PROJECT_ROOT, new URL(url).pathname))).toEqual([size, size]);
     }
     expect(sizeOf(path.join(PROJECT_ROOT, new URL(child(root, 'IconUrl').attributes.DefaultValue).pathname))).toEqual([32, 32]);
-    expect(sizeOf(path.join(PROJECT_ROOT, new URL(child(root, 'HighResolutionIconUrl').attributes.DefaultValue).pathname))).toEqual([64, 64]);
+    expect(sizeOf(path.join(PROJECT_ROOT, new URL(child(root, 'HighResolutionIconUrl').attributes.DefaultValue).pathname))).toEqual([
+      64, 64,
+    ]);
   });
 
   it('names only files the build produces', () => {

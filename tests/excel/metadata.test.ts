@@ -69,7 +69,13 @@ describe('buildFunctionsMetadata', () => {
   });
 
   it('keeps the essential of every argument tooltip within 120 characters (Excel cuts longer ones)', () => {
-    for (const spec of CATALOG) for (const p of spec.parameters as readonly ParameterSpec[]) expect({ fn: spec.name, p: p.name, length: p.description.length <= 120 || p.description.length }).toEqual({ fn: spec.name, p: p.name, length: true });
+    for (const spec of CATALOG)
+      for (const p of spec.parameters as readonly ParameterSpec[])
+        expect({ fn: spec.name, p: p.name, length: p.description.length <= 120 || p.description.length }).toEqual({
+          fn: spec.name,
+          p: p.name,
+          length: true,
+        });
   });
 
   it('rejects a base URL that is not absolute, and duplicate names', () => {
@@ -85,7 +91,12 @@ describe('DRIFT.MODELCODES in functions.json', () => {
 
   it('is declared like every other function: a matrix result, so Excel spills its row, and matrix arguments', () => {
     // A matrix result is what lets a custom function return a 2-D array that spills (Office, "Custom functions metadata").
-    expect(entry).toMatchObject({ id: 'MODELCODES', name: 'MODELCODES', result: { type: 'any', dimensionality: 'matrix' }, helpUrl: 'https://localhost:3000/help/modelcodes.html' });
+    expect(entry).toMatchObject({
+      id: 'MODELCODES',
+      name: 'MODELCODES',
+      result: { type: 'any', dimensionality: 'matrix' },
+      helpUrl: 'https://localhost:3000/help/modelcodes.html',
+    });
     expect(entry?.parameters.map((p) => [p.name, p.optional, p.dimensionality])).toEqual([
       ['quantity', false, 'matrix'],
       ['material', true, 'matrix'],

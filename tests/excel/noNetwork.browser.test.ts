@@ -74,7 +74,14 @@ describe('the add-in pages in Chromium make no request outside localhost', () =>
     expect(blocked).toEqual([OFFICE_JS]);
     expect(new URL(blocked[0]).hostname).toBe('appsforoffice.microsoft.com');
     expect(requested.filter((u) => !u.startsWith(`${server.url}/`))).toEqual([OFFICE_JS]);
-    expect(requested).toEqual(expect.arrayContaining([`${server.url}/taskpane.html`, `${server.url}/functions.js`, `${server.url}/taskpane.js`, `${server.url}/taskpane.css`]));
+    expect(requested).toEqual(
+      expect.arrayContaining([
+        `${server.url}/taskpane.html`,
+        `${server.url}/functions.js`,
+        `${server.url}/taskpane.js`,
+        `${server.url}/taskpane.css`,
+      ]),
+    );
     // Office.js was blocked, so the pane says it is not in Excel: the page still works on its own.
     expect(await page.locator('#status').textContent()).toMatch(/Office\.js is not available/);
     await page.close();

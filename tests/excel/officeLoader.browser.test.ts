@@ -116,21 +116,43 @@ describe("the add-in under Office's own loader (office.js from @microsoft/office
     const pageErrors: string[] = [];
     page.on('pageerror', (error) => pageErrors.push(error.message));
     await page.goto(`${server.url}/taskpane.html?_host_Info=${HOSTS[host].info}`, { waitUntil: 'load', timeout: 30000 });
-    await page.waitForFunction(() => typeof (window as unknown as { CustomFunctions?: { Error?: unknown } }).CustomFunctions?.Error === 'function', undefined, { timeout: 30000 });
+    await page.waitForFunction(
+      () => typeof (window as unknown as { CustomFunctions?: { Error?: unknown } }).CustomFunctions?.Error === 'function',
+      undefined,
+      { timeout: 30000 },
+    );
     return { page, pageErrors };
   }
 
   const associatedIds = (page: Page): Promise<string[]> =>
-    page.evaluate(() => Object.keys((window as unknown as { CustomFunctions: { _association: { mappings: object } } }).CustomFunctions._association.mappings));
+    page.evaluate(() =>
+      Object.keys((window as unknown as { CustomFunctions: { _association: { mappings: object } } }).CustomFunctions._association.mappings),
+    );
 
   /** Sends invocations through the bridge and waits for Office to report every result. */
   async function invoke(page: Page, calls: { name: string; args: unknown[] }[]): Promise<InvocationResult[]> {
-    const first = await page.evaluate(() => Object.keys((window as unknown as { __excelHost: { results: object } }).__excelHost.results).length);
-    const invocations = calls.map((call, i) => [first + i + 1, call.name, call.args, `Sheet1!A${i + 1}`, ALLOW_ERRORS_FLAG] as [number, string, unknown[], string, number]);
+    const first = await page.evaluate(
+      () => Object.keys((window as unknown as { __excelHost: { results: object } }).__excelHost.results).length,
+    );
+    const invocations = calls.map(
+      (call, i) =>
+        [first + i + 1, call.name, call.args, `Sheet1!A${i + 1}`, ALLOW_ERRORS_FLAG] as [number, string, unknown[], string, number],
+    );
     await page.evaluate(sendInvocations, invocations);
     const ids = invocations.map((inv) => inv[0]);
-    await page.waitForFunction((wanted) => wanted.every((id) => (window as unknown as { __excelHost: { results: Record<number, unknown> } }).__excelHost.results[id] !== undefined), ids, { timeout: 30000 });
-    return page.evaluate((wanted) => wanted.map((id) => (window as unknown as { __excelHost: { results: Record<number, InvocationResult> } }).__excelHost.results[id]), ids);
+    await page.waitForFunction(
+      (wanted) =>
+        wanted.every(
+          (id) => (window as unknown as { __excelHost: { results: Record<number, unknown> } }).__excelHost.results[id] !== undefined,
+        ),
+      ids,
+      { timeout: 30000 },
+    );
+    return page.evaluate(
+      (wanted) =>
+        wanted.map((id) => (window as unknown as { __excelHost: { results: Record<number, InvocationResult> } }).__excelHost.results[id]),
+      ids,
+    );
   }
 
   it('binds every functions.json id before CustomFunctions.Error exists: office.js and functions.js alone', async () => {
@@ -139,7 +161,9 @@ describe("the add-in under Office's own loader (office.js from @microsoft/office
     // No host information: office.js loads no host file, so Error is never defined on this page.
     await page.goto(`${server.url}/taskpane.html`, { waitUntil: 'load', timeout: 30000 });
     await page.waitForFunction(() => (window as unknown as { __driftcellFunctions?: unknown }).__driftcellFunctions !== undefined);
-    expect(await page.evaluate(() => typeof (window as unknown as { CustomFunctions: { Error?: unknown } }).CustomFunctions.Error)).toBe('undefined');
+    expect(await page.evaluate(() => typeof (window as unknown as { CustomFunctions: { Error?: unknown } }).CustomFunctions.Error)).toBe(
+      'undefined',
+    );
     expect(await associatedIds(page)).toEqual(functionIds());
     expect(browser.servedLocally[0]).toBe(`${OFFICE_CDN}office.js`);
     for (const url of browser.servedLocally) expect(url.startsWith(OFFICE_CDN) && !/\/excel-/.test(url)).toBe(true);
@@ -147,33 +171,36 @@ describe("the add-in under Office's own loader (office.js from @microsoft/office
     await page.close();
   });
 
-  it.each(['windows', 'mac'] as const)('Excel desktop (%s): every catalog example computed through Office\'s runtime equals evaluate()', async (host) => {
-    const { page, pageErrors } = await openAs(host);
-    expect(await associatedIds(page)).toEqual(functionIds());
-    expect(browser.servedLocally).toEqual(expect.arrayContaining([`${OFFICE_CDN}office.js`, `${OFFICE_CDN}${HOSTS[host].hostFile}`]));
+  it.each(['windows', 'mac'] as const)(
+    "Excel desktop (%s): every catalog example computed through Office's runtime equals evaluate()",
+    async (host) => {
+      const { page, pageErrors } = await openAs(host);
+      expect(await associatedIds(page)).toEqual(functionIds());
+      expect(browser.servedLocally).toEqual(expect.arrayContaining([`${OFFICE_CDN}office.js`, `${OFFICE_CDN}${HOSTS[host].hostFile}`]));
 
-    const calls: { name: string; args: unknown[]; expected: Element[][]; label: string }[] = [];
-    for (const spec of CATALOG) {
-      const examples = literalExamples(spec);
-      expect({ name: spec.name, literalExamples: examples.length > 0 }).toEqual({ name: spec.name, literalExamples: true });
-      for (const { formula, call } of examples) {
-        // Excel sends every declared parameter, null where the formula leaves it out; Office appends the invocation object.
-        const args = excelShapedArgs(call, spec.parameters.length).slice(0, spec.parameters.length);
-        calls.push({ name: spec.name, args, expected: expectedInExcel(evaluate(spec, call.args)), label: `${host}: ${formula}` });
+      const calls: { name: string; args: unknown[]; expected: Element[][]; label: string }[] = [];
+      for (const spec of CATALOG) {
+        const examples = literalExamples(spec);
+        expect({ name: spec.name, literalExamples: examples.length > 0 }).toEqual({ name: spec.name, literalExamples: true });
+        for (const { formula, call } of examples) {
+          // Excel sends every declared parameter, null where the formula leaves it out; Office appends the invocation object.
+          const args = excelShapedArgs(call, spec.parameters.length).slice(0, spec.parameters.length);
+          calls.push({ name: spec.name, args, expected: expectedInExcel(evaluate(spec, call.args)), label: `${host}: ${formula}` });
+        }
       }
-    }
-    const results = await invoke(page, calls);
-    results.forEach((result, i) => {
-      expect({ label: calls[i].label, succeeded: result[1] }).toEqual({ label: calls[i].label, succeeded: true });
-      expectSame(fromOffice(result[2]), calls[i].expected, calls[i].label);
-    });
+      const results = await invoke(page, calls);
+      results.forEach((result, i) => {
+        expect({ label: calls[i].label, succeeded: result[1] }).toEqual({ label: calls[i].label, succeeded: true });
+        expectSame(fromOffice(result[2]), calls[i].expected, calls[i].label);
+      });
 
-    const state = await page.evaluate(() => (window as unknown as { __excelHost: { csp: string[] } }).__excelHost.csp);
-    expect(state).toEqual([]);
-    expect(pageErrors).toEqual([]);
-    expect(browser.blocked).toEqual([]);
-    await page.close();
-  });
+      const state = await page.evaluate(() => (window as unknown as { __excelHost: { csp: string[] } }).__excelHost.csp);
+      expect(state).toEqual([]);
+      expect(pageErrors).toEqual([]);
+      expect(browser.blocked).toEqual([]);
+      await page.close();
+    },
+  );
 
   it('Excel desktop: errors as inputs arrive per element, outputs carry the catalog message, ranges broadcast', async () => {
     const { page } = await openAs('windows');

@@ -19,7 +19,15 @@ function fakeErrors(withEnum = true): CustomFunctionsErrors {
   return {
     Error: FakeError as unknown as CustomFunctionsErrors['Error'],
     ErrorCode: withEnum
-      ? { invalidValue: '#VALUE!', notAvailable: '#N/A', divisionByZero: '#DIV/0!', invalidNumber: '#NUM!', nullReference: '#NULL!', invalidName: '#NAME?', invalidReference: '#REF!' }
+      ? {
+          invalidValue: '#VALUE!',
+          notAvailable: '#N/A',
+          divisionByZero: '#DIV/0!',
+          invalidNumber: '#NUM!',
+          nullReference: '#NULL!',
+          invalidName: '#NAME?',
+          invalidReference: '#REF!',
+        }
       : undefined,
   };
 }
@@ -35,7 +43,9 @@ function asCatalog(matrix: unknown[][]): unknown[][] {
   return matrix.map((row) => row.map((v) => (v instanceof FakeError ? { code: v.code, message: v.message } : v)));
 }
 function expectedFrom(grid: CellOutput[][]): unknown[][] {
-  return grid.map((row) => row.map((v) => (isFailure(v) ? { code: v.code, message: v.code === '#VALUE!' || v.code === '#N/A' ? v.message : undefined } : v)));
+  return grid.map((row) =>
+    row.map((v) => (isFailure(v) ? { code: v.code, message: v.code === '#VALUE!' || v.code === '#N/A' ? v.message : undefined } : v)),
+  );
 }
 
 describe('makeExcelFunction', () => {
@@ -98,13 +108,27 @@ describe('makeExcelFunction', () => {
     // An empty cell some Excel builds pass as 0 reads as blank here (zeroIsBlank): silicon, any dopant.
     expect(fn([['mobility']], [[0]], [[0]], {})).toEqual(evaluate(spec('MODELCODES'), ['mobility']));
     const refused = fn([['resistivity'], ['mobility']], null, null, {});
-    expect(refused).toEqual([[new FakeError('#VALUE!', 'DRIFT.MODELCODES gives one row whose length depends on its arguments, so quantity must be a single value, not 2×1 values; call it once per value instead')]]);
+    expect(refused).toEqual([
+      [
+        new FakeError(
+          '#VALUE!',
+          'DRIFT.MODELCODES gives one row whose length depends on its arguments, so quantity must be a single value, not 2×1 values; call it once per value instead',
+        ),
+      ],
+    ]);
   });
 
   it('guards a table function that throws, returning #VALUE! with the reason', () => {
     const broken = tableFunction({
-      name: 'BROKEN', summary: '', help: '', result: { unit: null, description: '' }, examples: [], models: [],
-      table: () => { throw new RangeError('table source missing'); },
+      name: 'BROKEN',
+      summary: '',
+      help: '',
+      result: { unit: null, description: '' },
+      examples: [],
+      models: [],
+      table: () => {
+        throw new RangeError('table source missing');
+      },
     });
     const [[error]] = makeExcelFunction(runtime, broken)({});
     expect(error).toEqual(new FakeError('#VALUE!', 'internal error in DRIFT.BROKEN: table source missing'));
@@ -130,7 +154,16 @@ describe('registerCatalog', () => {
     const bound = new Map<string, (...a: unknown[]) => unknown>();
     registerCatalog({ associate: (id, fn) => void bound.set(id, fn) }, CATALOG, () => errors);
     errors = fakeErrors();
-    const [[cell]] = (bound.get('MOBILITY') as (...a: unknown[]) => unknown[][])([[-5]], [['phosphorus']], null, null, null, null, null, {});
+    const [[cell]] = (bound.get('MOBILITY') as (...a: unknown[]) => unknown[][])(
+      [[-5]],
+      [['phosphorus']],
+      null,
+      null,
+      null,
+      null,
+      null,
+      {},
+    );
     expect(cell).toBeInstanceOf(FakeError);
   });
 

@@ -47,7 +47,9 @@ describe('writeFileAtomically under failure', () => {
     });
     const target = join(folder, 'out.xlsx');
     expect(() => writeFileAtomically(target, payload, false)).toThrow(CliFailure);
-    expect(() => writeFileAtomically(target, payload, false)).toThrow(/^cannot write .*out\.xlsx \(ENOSPC\): ENOSPC: no space left on device, write$/);
+    expect(() => writeFileAtomically(target, payload, false)).toThrow(
+      /^cannot write .*out\.xlsx \(ENOSPC\): ENOSPC: no space left on device, write$/,
+    );
     expect(readdirSync(folder)).toEqual([]);
   });
 
@@ -71,7 +73,9 @@ describe('writeFileAtomically under failure', () => {
 
   it('finishes a write the system accepts only in part, instead of renaming a short file into place', () => {
     const realWrite = actualFs.writeSync as (fd: number, b: Uint8Array, o: number, l: number) => number;
-    fs.writeSync.mockImplementation((fd: number, buffer: Uint8Array, offset?: number, length?: number) => realWrite(fd, buffer, offset ?? 0, Math.min(length ?? buffer.length, 4096)));
+    fs.writeSync.mockImplementation((fd: number, buffer: Uint8Array, offset?: number, length?: number) =>
+      realWrite(fd, buffer, offset ?? 0, Math.min(length ?? buffer.length, 4096)),
+    );
     const target = join(folder, 'out.xlsx');
     writeFileAtomically(target, payload, false);
     expect(readFileSync(target).equals(payload)).toBe(true);

@@ -48,7 +48,8 @@ function inputFailures(args: readonly ArgumentInput[]): Set<CellFailure> {
 /** A problem with one output element, or null when it is well-formed. */
 function elementProblem(spec: FunctionSpec, value: CellOutput, upstream: Set<CellFailure>): string | null {
   if (typeof value === 'number') return Number.isFinite(value) ? null : `non-finite number ${value}`;
-  if (typeof value === 'string') return spec.kind === 'table' || spec.kind === 'row' ? null : `text "${value}" from a function that is neither a table nor a row`;
+  if (typeof value === 'string')
+    return spec.kind === 'table' || spec.kind === 'row' ? null : `text "${value}" from a function that is neither a table nor a row`;
   if (!isFailure(value)) return `neither number, text nor failure: ${JSON.stringify(value)}`;
   if (!KNOWN_CODES.has(value.code)) return `unknown error code ${String(value.code)}`;
   if (upstream.has(value)) return null;
@@ -59,7 +60,8 @@ function elementProblem(spec: FunctionSpec, value: CellOutput, upstream: Set<Cel
   // The argument by its name (temperature_K) or in words (its first word: "current 0 A is not allowed").
   const names = [qualifiedName(spec), ...parametersOf(spec).flatMap((p) => [p.name, p.name.split('_')[0]])];
   const lower = value.message.toLowerCase();
-  if (!names.some((name) => lower.includes(name.toLowerCase()))) return `message names neither the function nor an argument: ${value.message}`;
+  if (!names.some((name) => lower.includes(name.toLowerCase())))
+    return `message names neither the function nor an argument: ${value.message}`;
   return null;
 }
 
@@ -116,7 +118,9 @@ function checkBadElementsGetErrors(spec: FunctionSpec, args: readonly ArgumentIn
         return gr < g.length && gc < g[0].length && plainlyBad(broadcast[i].param, g[gr][gc]);
       });
       if (bad && !isFailure(grid[r][c])) {
-        throw new Error(`${qualifiedName(spec)} at row ${r + 1}, column ${c + 1}: a bad input element gave ${JSON.stringify(grid[r][c])} instead of an error`);
+        throw new Error(
+          `${qualifiedName(spec)} at row ${r + 1}, column ${c + 1}: a bad input element gave ${JSON.stringify(grid[r][c])} instead of an error`,
+        );
       }
     }
   }
@@ -135,9 +139,11 @@ function checkRowShape(spec: FunctionSpec, args: readonly ArgumentInput[], grid:
     const argument = asGrid(args[i]);
     const several = argument.length > 1 || argument[0].length > 1;
     if (!several && !plainlyBad(params[i], argument[0][0])) continue;
-    if (grid[0].length !== 1 || !isFailure(grid[0][0])) throw fail(`argument ${params[i].name} is ${several ? 'several cells' : 'bad'} but the call gave no single error`);
+    if (grid[0].length !== 1 || !isFailure(grid[0][0]))
+      throw fail(`argument ${params[i].name} is ${several ? 'several cells' : 'bad'} but the call gave no single error`);
     const failed = grid[0][0];
-    if (several && !inputFailures([args[i]]).has(failed) && !failed.message.includes(`${params[i].name} must be a single value`)) throw fail(`the error does not name ${params[i].name}`);
+    if (several && !inputFailures([args[i]]).has(failed) && !failed.message.includes(`${params[i].name} must be a single value`))
+      throw fail(`the error does not name ${params[i].name}`);
     return;
   }
 }
@@ -164,14 +170,17 @@ describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s u
     'gives an error wherever a single argument is bad by its parameter’s contract',
     () => {
       if (params.length === 0) return;
-      const withOneBad = fc
-        .tuple(scalarArgumentsFor(params), fc.integer({ min: 0, max: params.length - 1 }))
-        .chain(([args, i]) => elementFor(params[i]).filter((v) => plainlyBad(params[i], v)).map((bad) => args.map((a, j) => (j === i ? bad : a))));
+      const withOneBad = fc.tuple(scalarArgumentsFor(params), fc.integer({ min: 0, max: params.length - 1 })).chain(([args, i]) =>
+        elementFor(params[i])
+          .filter((v) => plainlyBad(params[i], v))
+          .map((bad) => args.map((a, j) => (j === i ? bad : a))),
+      );
       fc.assert(
         fc.property(withOneBad, (args) => {
           const grid = checkedEvaluate(spec, args);
           grid.flat().forEach((value) => {
-            if (!isFailure(value)) throw new Error(`${qualifiedName(spec)}(${JSON.stringify(args)}) gave ${JSON.stringify(value)} despite a bad argument`);
+            if (!isFailure(value))
+              throw new Error(`${qualifiedName(spec)}(${JSON.stringify(args)}) gave ${JSON.stringify(value)} despite a bad argument`);
           });
         }),
         { numRuns: RUNS },
@@ -184,7 +193,12 @@ describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s u
     `takes a ${BIG_GRID.rows}×${BIG_GRID.columns} grid in any argument, and mismatched shapes, without throwing`,
     () => {
       if (params.length === 0) {
-        checkedEvaluate(spec, [[[1, 2], [3, 4]]]);
+        checkedEvaluate(spec, [
+          [
+            [1, 2],
+            [3, 4],
+          ],
+        ]);
         return;
       }
       // Few runs: each evaluates up to 10 000 elements (the solvers included).
@@ -197,7 +211,9 @@ describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s u
             const args: ArgumentInput[] = params.map((p, i) => {
               if (i === bigAt) {
                 const elements = p === params[0] ? pool : [null, 'x', 300, 1e16];
-                return Array.from({ length: BIG_GRID.rows }, (_, r) => Array.from({ length: BIG_GRID.columns }, (_, c) => elements[(r * 7 + c) % elements.length]));
+                return Array.from({ length: BIG_GRID.rows }, (_, r) =>
+                  Array.from({ length: BIG_GRID.columns }, (_, c) => elements[(r * 7 + c) % elements.length]),
+                );
               }
               // A column that neither matches nor is 1: elements beyond it must be #N/A with a message.
               return i === (bigAt + 1) % params.length ? Array.from({ length: otherRows }, () => [null]) : undefined;
@@ -217,10 +233,31 @@ describe.each(CATALOG.map((spec) => [qualifiedName(spec), spec] as const))('%s u
 describe('every catalog function on the edges of the number line', () => {
   it('answers each edge value in each number argument, with the other arguments at plausible values', () => {
     // Deterministic sweep beside the random one: every edge in every position of every function.
-    const edges: CellInput[] = [0, -0, -1, 1e-300, -1e-300, 5e-324, 1e300, -1e300, Number.MAX_VALUE, Number.NaN, Infinity, -Infinity, ' 1e15 ', '1e400', true, false, null, ''];
+    const edges: CellInput[] = [
+      0,
+      -0,
+      -1,
+      1e-300,
+      -1e-300,
+      5e-324,
+      1e300,
+      -1e300,
+      Number.MAX_VALUE,
+      Number.NaN,
+      Infinity,
+      -Infinity,
+      ' 1e15 ',
+      '1e400',
+      true,
+      false,
+      null,
+      '',
+    ];
     for (const spec of CATALOG) {
       const params = parametersOf(spec);
-      const plausible: CellInput[] = params.map((p) => (p.type === 'number' ? (p.optional ? null : 1e16) : p.optional ? null : (p.choices?.()[0] ?? 'x')));
+      const plausible: CellInput[] = params.map((p) =>
+        p.type === 'number' ? (p.optional ? null : 1e16) : p.optional ? null : (p.choices?.()[0] ?? 'x'),
+      );
       params.forEach((p, i) => {
         for (const edge of edges) {
           const args = plausible.map((v, j) => (j === i ? edge : v));

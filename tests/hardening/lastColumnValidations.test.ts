@@ -12,7 +12,9 @@ const SHEET = `${SHEET_HEAD}<row r="1"><c r="A1"><f>DRIFT.SHEETRES(10,5)</f></c>
 
 async function validations(bytes: Buffer): Promise<string[]> {
   const xml = (await (await JSZip.loadAsync(bytes)).file('xl/worksheets/sheet1.xml')?.async('string')) ?? '';
-  return [...xml.matchAll(/<dataValidation\b[^>]*>/g)].map((m) => `${/type="(\w+)"/.exec(m[0])?.[1]} ${/sqref="([^"]+)"/.exec(m[0])?.[1]}`).sort();
+  return [...xml.matchAll(/<dataValidation\b[^>]*>/g)]
+    .map((m) => `${/type="(\w+)"/.exec(m[0])?.[1]} ${/sqref="([^"]+)"/.exec(m[0])?.[1]}`)
+    .sort();
 }
 
 describe('data validation in Excel’s last column', () => {

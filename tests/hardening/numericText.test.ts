@@ -11,11 +11,14 @@ import { isFailure } from '../../src/catalog/values';
 const SHEETRES = findFunction('SHEETRES') as FunctionSpec;
 
 describe('numeric text', () => {
-  it.each(['0x10', '0X1F', '0b11', '0o17', '1_000', 'Infinity', '-Infinity', '1e400', '1.2.3', '+-1', 'e5'])('rejects %p with a message naming the argument and the value', (text) => {
-    const [[cell]] = evaluate(SHEETRES, [text, 10]);
-    expect(isFailure(cell)).toBe(true);
-    expect(isFailure(cell) && cell.message).toBe(`resistivity must be a number; got "${text}"`);
-  });
+  it.each(['0x10', '0X1F', '0b11', '0o17', '1_000', 'Infinity', '-Infinity', '1e400', '1.2.3', '+-1', 'e5'])(
+    'rejects %p with a message naming the argument and the value',
+    (text) => {
+      const [[cell]] = evaluate(SHEETRES, [text, 10]);
+      expect(isFailure(cell)).toBe(true);
+      expect(isFailure(cell) && cell.message).toBe(`resistivity must be a number; got "${text}"`);
+    },
+  );
 
   it.each([
     [' 2 ', 2],

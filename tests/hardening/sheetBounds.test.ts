@@ -43,7 +43,12 @@ function refusal(bytes: Buffer): string {
   writeFileSync(input, bytes);
   const env = { ...process.env };
   delete env.NODE_OPTIONS;
-  const result = spawnSync(process.execPath, [cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], { cwd: folder, encoding: 'utf8', timeout: CHILD_TIMEOUT_MS, env });
+  const result = spawnSync(process.execPath, [cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], {
+    cwd: folder,
+    encoding: 'utf8',
+    timeout: CHILD_TIMEOUT_MS,
+    env,
+  });
   expect(result.signal).toBeNull();
   expect({ status: result.status, stdout: result.stdout }).toEqual({ status: 2, stdout: '' });
   expect(result.stderr).toMatch(/^driftcell: [^\n]+\n$/);
@@ -60,20 +65,31 @@ describe('recalc bounds what a small file can declare, before exceljs reads it',
   it('a used range of the whole sheet (A1 and XFD1048576; A1, XFD1 and A1048576)', () => {
     const expected = `${PREFIX}its used range A1:XFD1048576 spans 17,179,869,184 cells, more than the 4,000,000 Driftcell recalculates per sheet)`;
     expect(refusal(workbook(`${A1}<row r="1048576"><c r="XFD1048576"><v>2</v></c></row>`))).toBe(expected);
-    expect(refusal(workbook('<row r="1"><c r="A1"><v>1</v></c><c r="XFD1"><v>1</v></c></row><row r="1048576"><c r="A1048576"><v>2</v></c></row>'))).toBe(expected);
+    expect(
+      refusal(
+        workbook('<row r="1"><c r="A1"><v>1</v></c><c r="XFD1"><v>1</v></c></row><row r="1048576"><c r="A1048576"><v>2</v></c></row>'),
+      ),
+    ).toBe(expected);
   });
 
   it('a merge over the whole sheet, a column definition to 2,000,000,000 and a row numbered 2,000,000,000', () => {
     expect(refusal(workbook(A1, '<mergeCells count="1"><mergeCell ref="C1:XFD1048576"/></mergeCells>'))).toBe(
       `${PREFIX}merged ranges cover more than 100,000 cells (at mergeCell C1:XFD1048576))`,
     );
-    expect(refusal(workbook(A1, '<cols><col min="1" max="2000000000" width="9"/></cols>'))).toBe(`${PREFIX}column definition <col max="2000000000"> is outside ${GRID})`);
-    expect(refusal(workbook('<row r="2000000000"><c r="A2000000000"><v>1</v></c></row>'))).toBe(`${PREFIX}row 2000000000 is outside ${GRID})`);
+    expect(refusal(workbook(A1, '<cols><col min="1" max="2000000000" width="9"/></cols>'))).toBe(
+      `${PREFIX}column definition <col max="2000000000"> is outside ${GRID})`,
+    );
+    expect(refusal(workbook('<row r="2000000000"><c r="A2000000000"><v>1</v></c></row>'))).toBe(
+      `${PREFIX}row 2000000000 is outside ${GRID})`,
+    );
   });
 
   it('data validation over whole columns or the whole sheet, and an array formula over the whole sheet', () => {
-    const validation = (sqref: string) => `<dataValidations count="1"><dataValidation type="whole" sqref="${sqref}"><formula1>1</formula1></dataValidation></dataValidations>`;
-    expect(refusal(workbook(A1, validation('A1:XFD1048576')))).toBe(`${PREFIX}data validation covers more than 1,048,576 cells (at sqref A1:XFD1048576))`);
+    const validation = (sqref: string) =>
+      `<dataValidations count="1"><dataValidation type="whole" sqref="${sqref}"><formula1>1</formula1></dataValidation></dataValidations>`;
+    expect(refusal(workbook(A1, validation('A1:XFD1048576')))).toBe(
+      `${PREFIX}data validation covers more than 1,048,576 cells (at sqref A1:XFD1048576))`,
+    );
     expect(refusal(workbook(A1, validation('A:B')))).toBe(`${PREFIX}data validation covers more than 1,048,576 cells (at sqref A:B))`);
     expect(refusal(workbook('<row r="1"><c r="A1"><f t="array" ref="A1:XFD1048576">1+1</f><v>2</v></c></row>'))).toBe(
       `${PREFIX}array formula ranges cover more than 1,000,000 cells (at ref A1:XFD1048576))`,
@@ -81,16 +97,28 @@ describe('recalc bounds what a small file can declare, before exceljs reads it',
   });
 
   it('one whole-column validation, within its limit, still recalculates', () => {
-    const bytes = workbook(A1, '<dataValidations count="1"><dataValidation type="whole" sqref="A1:A1000"><formula1>1</formula1></dataValidation></dataValidations>');
+    const bytes = workbook(
+      A1,
+      '<dataValidations count="1"><dataValidation type="whole" sqref="A1:A1000"><formula1>1</formula1></dataValidation></dataValidations>',
+    );
     writeFileSync(join(folder, 'in.xlsx'), bytes);
-    const result = spawnSync(process.execPath, [cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], { cwd: folder, encoding: 'utf8', timeout: CHILD_TIMEOUT_MS });
+    const result = spawnSync(process.execPath, [cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], {
+      cwd: folder,
+      encoding: 'utf8',
+      timeout: CHILD_TIMEOUT_MS,
+    });
     expect({ status: result.status, stderr: result.stderr }).toEqual({ status: 0, stderr: '' });
   });
 });
 
 describe('the guard sees every part exceljs parses as a sheet', () => {
   it('matches exceljs 4.4\'s unanchored pattern, leading "/" removed', () => {
-    for (const name of ['xl/worksheets/sheet1.xml', '/xl/worksheets/sheet1.xml', 'xl/worksheets/sheet1.xmlX', 'junk/xl/worksheets/sheet7.xml']) {
+    for (const name of [
+      'xl/worksheets/sheet1.xml',
+      '/xl/worksheets/sheet1.xml',
+      'xl/worksheets/sheet1.xmlX',
+      'junk/xl/worksheets/sheet7.xml',
+    ]) {
       expect(isWorksheetPart(name)).toBe(true);
     }
     expect(isWorksheetPart('xl/worksheets/_rels/sheet1.xml.rels')).toBe(false);
@@ -114,7 +142,9 @@ describe('checkSheetBounds', () => {
 
   it('lets a used range of exactly the limit through', () => {
     // 1000 rows × 4000 columns = 4,000,000 cells: the corners only.
-    const xml = Buffer.from(`${SHEET_HEAD}<row r="1"><c r="A1"><v>1</v></c></row><row r="1000"><c r="EWV1000"><v>1</v></c></row>${SHEET_TAIL}`);
+    const xml = Buffer.from(
+      `${SHEET_HEAD}<row r="1"><c r="A1"><v>1</v></c></row><row r="1000"><c r="EWV1000"><v>1</v></c></row>${SHEET_TAIL}`,
+    );
     expect(MAX_USED_RANGE_CELLS).toBe(4_000_000);
     expect(() => checkSheetBounds(xml, 'sheet')).not.toThrow();
   });
@@ -131,7 +161,7 @@ describe('formula results beyond MAX_RESULT_CELLS refuse the workbook, naming th
   });
 });
 
-describe('a formula within Excel\'s limits that the engine cannot parse fails alone (issue 14 §3)', () => {
+describe("a formula within Excel's limits that the engine cannot parse fails alone (issue 14 §3)", () => {
   it('=A1+…+A1200 keeps its formula and cached value; its dependent recalculates from it; exit 1', async () => {
     // 1200 terms are 6,093 characters, within Excel's 8,192-character formula limit (Excel's
     // specifications and limits page; common practice, no source for the exact term count).
@@ -145,7 +175,12 @@ describe('a formula within Excel\'s limits that the engine cannot parse fails al
     writeFileSync(input, workbook(rows.join('')));
     const env = { ...process.env };
     delete env.NODE_OPTIONS;
-    const result = spawnSync(process.execPath, [cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], { cwd: folder, encoding: 'utf8', timeout: CHILD_TIMEOUT_MS, env });
+    const result = spawnSync(process.execPath, [cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], {
+      cwd: folder,
+      encoding: 'utf8',
+      timeout: CHILD_TIMEOUT_MS,
+      env,
+    });
     expect(result.signal).toBeNull();
     expect(result.stderr).toContain('1 formula cell kept as the file had it');
     expect(result.stderr).toContain('Sheet1!B1: the formula is too long or too deeply nested for the headless engine');

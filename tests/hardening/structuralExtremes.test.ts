@@ -59,16 +59,33 @@ const address = fc.tuple(row, column).map(([r, c]) => `${columnLetters(c)}${r}`)
 /** A range: one cell, a small block, a block ending at or past the grid's edge, or a whole row/column span. */
 const range = fc.oneof(
   { arbitrary: address, weight: 3 },
-  { arbitrary: fc.tuple(fc.integer({ min: 1, max: 20 }), fc.integer({ min: 1, max: 10 }), fc.integer({ min: 0, max: 30 }), fc.integer({ min: 0, max: 5 })).map(
-    ([r, c, h, w]) => `${columnLetters(c)}${r}:${columnLetters(c + w)}${r + h}`,
-  ), weight: 6 },
+  {
+    arbitrary: fc
+      .tuple(
+        fc.integer({ min: 1, max: 20 }),
+        fc.integer({ min: 1, max: 10 }),
+        fc.integer({ min: 0, max: 30 }),
+        fc.integer({ min: 0, max: 5 }),
+      )
+      .map(([r, c, h, w]) => `${columnLetters(c)}${r}:${columnLetters(c + w)}${r + h}`),
+    weight: 6,
+  },
   { arbitrary: fc.tuple(address, address).map(([a, b]) => `${a}:${b}`), weight: 1 },
   { arbitrary: fc.constantFrom('A1:XFD1048576', 'A1:A1048576', 'A1:XFD1', 'A1:ZZZZ9', 'B2:A1', 'A1:J100000'), weight: 1 },
 );
 
 /** Formula text (no `=`) of a given kind, around Excel's limits of 8,192 characters and 64 levels of nesting. */
 const formula = fc.oneof(
-  fc.constantFrom('DRIFT.SHEETRES(10,5)', '_xldudf_DRIFT_RESISTIVITY(1e16,"B")', 'SUM(A1:XFD1048576)', 'A1+1', 'XFD1048576*2', '1/0', 'NA()', 'A1:A3*2'),
+  fc.constantFrom(
+    'DRIFT.SHEETRES(10,5)',
+    '_xldudf_DRIFT_RESISTIVITY(1e16,"B")',
+    'SUM(A1:XFD1048576)',
+    'A1+1',
+    'XFD1048576*2',
+    '1/0',
+    'NA()',
+    'A1:A3*2',
+  ),
   fc.integer({ min: 1, max: 2_000 }).map((n) => Array.from({ length: n }, () => '1').join('+')),
   fc.constantFrom(8_191, 8_192, 8_193, 20_000).map((n) => `1${'+1'.repeat(Math.floor((n - 1) / 2))}`),
   fc.integer({ min: 1, max: 400 }).map((depth) => `${'('.repeat(depth)}1${')'.repeat(depth)}`),
@@ -90,7 +107,11 @@ const cellContent: fc.Arbitrary<(ref: string) => string> = fc.oneof(
   fc.double({ noNaN: true, noDefaultInfinity: true }).map((n) => (ref: string) => `<c r="${ref}"><v>${n}</v></c>`),
   fc.string({ maxLength: 20 }).map((text) => (ref: string) => `<c r="${ref}" t="inlineStr"><is><t>${escapeXml(text)}</t></is></c>`),
   formula.map((text) => (ref: string) => `<c r="${ref}"><f>${escapeXml(text)}</f></c>`),
-  fc.tuple(formula, range).map(([text, area]) => (ref: string) => `<c r="${ref}"><f t="array" ref="${area}">${escapeXml(text)}</f><v>0</v></c>`),
+  fc.tuple(formula, range).map(
+    ([text, area]) =>
+      (ref: string) =>
+        `<c r="${ref}"><f t="array" ref="${area}">${escapeXml(text)}</f><v>0</v></c>`,
+  ),
 );
 
 const cell: fc.Arbitrary<CellSpec> = fc.tuple(row, column, cellContent).map(([r, c, xml]) => ({ row: r, column: c, xml }));
@@ -118,11 +139,26 @@ function sheetXml(spec: SheetSpec): string {
   for (const c of spec.cells) (byRow.get(c.row) ?? byRow.set(c.row, new Map()).get(c.row)!).set(c.column, c);
   const rows = [...byRow.entries()]
     .sort(([a], [b]) => a - b)
-    .map(([r, cells]) => `<row r="${r}">${[...cells.values()].sort((a, b) => a.column - b.column).map((c) => c.xml(`${columnLetters(c.column)}${r}`)).join('')}</row>`);
-  const cols = spec.cols.length === 0 ? '' : `<cols>${spec.cols.map(([min, span]) => `<col min="${min}" max="${min + span}" width="9"/>`).join('')}</cols>`;
-  const merges = spec.merges.length === 0 ? '' : `<mergeCells count="${spec.merges.length}">${spec.merges.map((ref) => `<mergeCell ref="${ref}"/>`).join('')}</mergeCells>`;
+    .map(
+      ([r, cells]) =>
+        `<row r="${r}">${[...cells.values()]
+          .sort((a, b) => a.column - b.column)
+          .map((c) => c.xml(`${columnLetters(c.column)}${r}`))
+          .join('')}</row>`,
+    );
+  const cols =
+    spec.cols.length === 0
+      ? ''
+      : `<cols>${spec.cols.map(([min, span]) => `<col min="${min}" max="${min + span}" width="9"/>`).join('')}</cols>`;
+  const merges =
+    spec.merges.length === 0
+      ? ''
+      : `<mergeCells count="${spec.merges.length}">${spec.merges.map((ref) => `<mergeCell ref="${ref}"/>`).join('')}</mergeCells>`;
   const formats = spec.conditionalFormats
-    .map((refs, i) => `<conditionalFormatting sqref="${refs.join(' ')}"><cfRule type="cellIs" priority="${i + 1}" operator="greaterThan"><formula>0</formula></cfRule></conditionalFormatting>`)
+    .map(
+      (refs, i) =>
+        `<conditionalFormatting sqref="${refs.join(' ')}"><cfRule type="cellIs" priority="${i + 1}" operator="greaterThan"><formula>0</formula></cfRule></conditionalFormatting>`,
+    )
     .join('');
   const validations =
     spec.validations.length === 0
@@ -144,15 +180,24 @@ function recalcSurvives(spec: SheetSpec): number {
   const before = sha256(readFileSync(input));
   const env = { ...process.env };
   delete env.NODE_OPTIONS;
-  const result = spawnSync(process.execPath, [`--max-old-space-size=${HEAP_MB}`, cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], { cwd: folder, encoding: 'utf8', timeout: CHILD_TIMEOUT_MS, env });
+  const result = spawnSync(process.execPath, [`--max-old-space-size=${HEAP_MB}`, cli, 'recalc', 'in.xlsx', '-o', 'out.xlsx'], {
+    cwd: folder,
+    encoding: 'utf8',
+    timeout: CHILD_TIMEOUT_MS,
+    env,
+  });
   if (process.env.DRIFTCELL_STRUCTURE_LOG) writeFileSync(join(tmpdir(), 'driftcell-structure-last.xml'), sheetXml(spec));
   const context = `seed ${FUZZ_SEED}; status ${result.status}, signal ${result.signal}; stderr: ${result.stderr?.slice(0, 600)}; sheet: ${sheetXml(spec).slice(0, 600)}`;
-  if (result.error !== undefined || result.signal !== null) throw new Error(`the child did not end by itself (${result.error?.message ?? result.signal}); ${context}`);
+  if (result.error !== undefined || result.signal !== null)
+    throw new Error(`the child did not end by itself (${result.error?.message ?? result.signal}); ${context}`);
   if (![0, 1, 2].includes(result.status ?? -1)) throw new Error(`exit status outside 0, 1, 2; ${context}`);
-  if (/\bat .*\(.*:\d+:\d+\)|unexpected failure|FATAL ERROR|heap out of memory/i.test(result.stderr)) throw new Error(`a crash or stack trace; ${context}`);
-  if (result.status === 2 && !/^driftcell: [^\n]+\n$/.test(result.stderr)) throw new Error(`a refusal must be one driftcell: line; ${context}`);
+  if (/\bat .*\(.*:\d+:\d+\)|unexpected failure|FATAL ERROR|heap out of memory/i.test(result.stderr))
+    throw new Error(`a crash or stack trace; ${context}`);
+  if (result.status === 2 && !/^driftcell: [^\n]+\n$/.test(result.stderr))
+    throw new Error(`a refusal must be one driftcell: line; ${context}`);
   if (result.status === 2 && result.stdout !== '') throw new Error(`a refusal writes nothing on stdout; ${context}`);
-  if (result.status !== 2 && !/^wrote out\.xlsx: /.test(result.stdout)) throw new Error(`a written copy is announced on stdout; ${context}`);
+  if (result.status !== 2 && !/^wrote out\.xlsx: /.test(result.stdout))
+    throw new Error(`a written copy is announced on stdout; ${context}`);
   if (sha256(readFileSync(input)) !== before) throw new Error(`the input changed; ${context}`);
   const left = readdirSync(folder).sort();
   const expected = result.status === 2 ? ['in.xlsx'] : ['in.xlsx', 'out.xlsx'];
@@ -170,7 +215,9 @@ describe('recalc on random structural extremes', () => {
       }),
       { numRuns: RUNS, seed: FUZZ_SEED, endOnFailure: true },
     );
-    console.log(`structural extremes, seed ${FUZZ_SEED}: exit statuses ${JSON.stringify(Object.fromEntries([0, 1, 2].map((s) => [s, statuses.filter((x) => x === s).length])))}`);
+    console.log(
+      `structural extremes, seed ${FUZZ_SEED}: exit statuses ${JSON.stringify(Object.fromEntries([0, 1, 2].map((s) => [s, statuses.filter((x) => x === s).length])))}`,
+    );
     // The generator reaches both sides of the limits: some workbooks are written, some refused.
     expect(statuses.some((s) => s === 2)).toBe(true);
     expect(statuses.some((s) => s === 0 || s === 1)).toBe(true);
@@ -181,14 +228,44 @@ describe('recalc on structures at the limits, in the same heap', () => {
   const empty = { cells: [], cols: [], merges: [], validations: [], conditionalFormats: [] };
   const formulaCell = (ref: string, xml: string): CellSpec => ({ row: Number(/\d+/.exec(ref)![0]), column: 1, xml: () => xml });
   const cases: [string, SheetSpec][] = [
-    ['a legacy array formula of one value declared over 1,000,000 cells (the array-range limit)', { ...empty, cells: [formulaCell('A1', '<c r="A1"><f t="array" ref="A1:J100000">1+1</f><v>2</v></c>')] }],
-    ['a merge over 100,000 cells (the merge limit)', { ...empty, cells: [formulaCell('A1', '<c r="A1"><f>DRIFT.SHEETRES(10,5)</f></c>')], merges: ['A1:J10000'] }],
-    ['a merge over 1,000,000 cells (refused)', { ...empty, cells: [formulaCell('A1', '<c r="A1"><f>DRIFT.SHEETRES(10,5)</f></c>')], merges: ['A1:J100000'] }],
-    ['a column definition over the whole width and data validation over the whole first row', { ...empty, cells: [formulaCell('A1', '<c r="A1"><v>1</v></c>')], cols: [[1, 16_383]], validations: [['A1:XFD1']] }],
+    [
+      'a legacy array formula of one value declared over 1,000,000 cells (the array-range limit)',
+      { ...empty, cells: [formulaCell('A1', '<c r="A1"><f t="array" ref="A1:J100000">1+1</f><v>2</v></c>')] },
+    ],
+    [
+      'a merge over 100,000 cells (the merge limit)',
+      { ...empty, cells: [formulaCell('A1', '<c r="A1"><f>DRIFT.SHEETRES(10,5)</f></c>')], merges: ['A1:J10000'] },
+    ],
+    [
+      'a merge over 1,000,000 cells (refused)',
+      { ...empty, cells: [formulaCell('A1', '<c r="A1"><f>DRIFT.SHEETRES(10,5)</f></c>')], merges: ['A1:J100000'] },
+    ],
+    [
+      'a column definition over the whole width and data validation over the whole first row',
+      { ...empty, cells: [formulaCell('A1', '<c r="A1"><v>1</v></c>')], cols: [[1, 16_383]], validations: [['A1:XFD1']] },
+    ],
     // Found with DRIFTCELL_FUZZ_SEED=12345: the build overflowed the stack but a bare probe of the
     // same formula did not, now and then (V8's optimised frames are smaller); recalc failed outright.
-    ['a 4,096-term sum beside an array formula nested 137 deep, anchored outside its own ref', { ...empty, cells: [{ row: 8, column: 23, xml: () => `<c r="W8"><f>1${'+1'.repeat(4_095)}</f></c>` }, { row: 18, column: 18, xml: () => `<c r="R18"><f t="array" ref="G16:L43">${'('.repeat(137)}1${')'.repeat(137)}</f><v>0</v></c>` }] }],
-    ['a formula nested past Excel’s 64 levels and one longer than its 8,192 characters', { ...empty, cells: [formulaCell('A1', `<c r="A1"><f>${'ABS('.repeat(2_000)}-1${')'.repeat(2_000)}</f></c>`), { row: 2, column: 1, xml: () => `<c r="A2"><f>1${'+1'.repeat(10_000)}</f></c>` }] }],
+    [
+      'a 4,096-term sum beside an array formula nested 137 deep, anchored outside its own ref',
+      {
+        ...empty,
+        cells: [
+          { row: 8, column: 23, xml: () => `<c r="W8"><f>1${'+1'.repeat(4_095)}</f></c>` },
+          { row: 18, column: 18, xml: () => `<c r="R18"><f t="array" ref="G16:L43">${'('.repeat(137)}1${')'.repeat(137)}</f><v>0</v></c>` },
+        ],
+      },
+    ],
+    [
+      'a formula nested past Excel’s 64 levels and one longer than its 8,192 characters',
+      {
+        ...empty,
+        cells: [
+          formulaCell('A1', `<c r="A1"><f>${'ABS('.repeat(2_000)}-1${')'.repeat(2_000)}</f></c>`),
+          { row: 2, column: 1, xml: () => `<c r="A2"><f>1${'+1'.repeat(10_000)}</f></c>` },
+        ],
+      },
+    ],
   ];
   it.each(cases)('%s', (_, spec) => {
     expect([0, 1, 2]).toContain(recalcSurvives(spec));

@@ -44,7 +44,9 @@ const quiet = { out: () => undefined, err: () => undefined };
 
 beforeAll(() => {
   if (!existsSync(SOFFICE)) {
-    throw new Error(`LibreOffice is missing (${SOFFICE}): install the Debian package libreoffice-calc-nogui (.ci/run does) to run these tests`);
+    throw new Error(
+      `LibreOffice is missing (${SOFFICE}): install the Debian package libreoffice-calc-nogui (.ci/run does) to run these tests`,
+    );
   }
   folder = mkdtempSync(join(tmpdir(), 'driftcell-libreoffice-'));
   // A profile of our own per run, so parallel runs and a user's LibreOffice never collide.
@@ -101,10 +103,14 @@ type Shown = Map<string, string[][]>;
 /** Converts a workbook with the real LibreOffice and reads back one CSV per sheet. */
 function libreOffice(workbook: string, sheets: readonly string[], profile: string): Shown {
   const out = mkdtempSync(join(folder, 'csv-'));
-  const result = spawnSync(SOFFICE, [`-env:UserInstallation=file://${profile}`, '--headless', '--convert-to', CSV_FILTER, '--outdir', out, workbook], {
-    encoding: 'utf8',
-    timeout: 200_000,
-  });
+  const result = spawnSync(
+    SOFFICE,
+    [`-env:UserInstallation=file://${profile}`, '--headless', '--convert-to', CSV_FILTER, '--outdir', out, workbook],
+    {
+      encoding: 'utf8',
+      timeout: 200_000,
+    },
+  );
   if (result.status !== 0) throw new Error(`soffice failed (${result.status ?? result.signal}): ${result.stderr}`);
   const stem = basename(workbook).replace(/\.xlsx$/, '');
   const shown: Shown = new Map();
@@ -152,7 +158,8 @@ async function engineCells(live: string): Promise<Expected[]> {
         if (cell.type !== ExcelJS.ValueType.Formula || v.shareType !== 'array' || !v.ref) return;
         const drift = /_xldudf_DRIFT_/.test(v.formula);
         const [from, to = from] = v.ref.split(':').map((a) => sheet.getCell(a));
-        for (let r = Number(from.row); r <= Number(to.row); r++) for (let c = Number(from.col); c <= Number(to.col); c++) inArray.set(`${r},${c}`, drift);
+        for (let r = Number(from.row); r <= Number(to.row); r++)
+          for (let c = Number(from.col); c <= Number(to.col); c++) inArray.set(`${r},${c}`, drift);
       }),
     );
     sheet.eachRow((row) =>
@@ -161,7 +168,10 @@ async function engineCells(live: string): Promise<Expected[]> {
         const c = Number(cell.col);
         const isFormula = cell.type === ExcelJS.ValueType.Formula;
         const raw = isFormula ? (cell.value as ExcelJS.CellFormulaValue).result : cell.value;
-        const value = typeof raw === 'object' && raw !== null && 'richText' in raw ? (raw as ExcelJS.CellRichTextValue).richText.map((t) => t.text).join('') : raw;
+        const value =
+          typeof raw === 'object' && raw !== null && 'richText' in raw
+            ? (raw as ExcelJS.CellRichTextValue).richText.map((t) => t.text).join('')
+            : raw;
         if (typeof value !== 'number' && typeof value !== 'string') return;
         const array = inArray.get(`${r},${c}`);
         const formula = array !== undefined ? 'array' : isFormula ? 'single' : 'none';
@@ -238,7 +248,8 @@ describe('LibreOffice Calc reading what recalc writes', () => {
   it('shows single-cell results of the live form, and #NAME? for spilled and array DRIFT results', () => {
     const shown = libreOffice(live, ['Lots', 'Summary'], profiles.normal);
     for (const cell of expected) {
-      if (cell.formula === 'array' && cell.drift) expect({ cell, text: shownAt(shown, cell.sheet, cell.row, cell.column) }).toEqual({ cell, text: '#NAME?' });
+      if (cell.formula === 'array' && cell.drift)
+        expect({ cell, text: shownAt(shown, cell.sheet, cell.row, cell.column) }).toEqual({ cell, text: '#NAME?' });
       else expectShownAs(shown, cell);
     }
   });
@@ -271,7 +282,8 @@ describe('LibreOffice Calc reading the demo workbook', () => {
     for (const profile of [profiles.normal, profiles.recalcOnLoad]) {
       const shown = libreOffice(values, [...sheets, 'Formulas'], profile);
       // The About sheet's text says which form it is; everything else is as the engine left the live form.
-      for (const cell of expected) if (!(cell.sheet === SHEETS.about && cell.formula === 'none' && typeof cell.value === 'string')) expectShownAs(shown, cell);
+      for (const cell of expected)
+        if (!(cell.sheet === SHEETS.about && cell.formula === 'none' && typeof cell.value === 'string')) expectShownAs(shown, cell);
       expect(shown.get('Formulas')?.length).toBe(3 + 31);
     }
   });

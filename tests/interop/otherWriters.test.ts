@@ -38,7 +38,17 @@ beforeAll(() => {
   // LibreOffice re-saves three of them as .xlsx (its own writer: tables without style info, its chart parts).
   const lo = join(folder, 'libreoffice');
   const profile = `file://${join(folder, 'profile')}`;
-  const converted = run(SOFFICE, [`-env:UserInstallation=${profile}`, '--headless', '--convert-to', 'xlsx', '--outdir', lo, 'chart.xlsx', 'comment.xlsx', 'table.xlsx']);
+  const converted = run(SOFFICE, [
+    `-env:UserInstallation=${profile}`,
+    '--headless',
+    '--convert-to',
+    'xlsx',
+    '--outdir',
+    lo,
+    'chart.xlsx',
+    'comment.xlsx',
+    'table.xlsx',
+  ]);
   if (!existsSync(join(lo, 'table.xlsx'))) throw new Error(`LibreOffice did not convert: ${converted.stderr}`);
 }, 240_000);
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
@@ -101,7 +111,9 @@ describe.each([
     expect({ status: result.status, stderr: result.stderr }).toEqual({ status: 0, stderr: '' });
     const { values, sheet } = await writtenValues();
     expectRecalculated(values);
-    expect(sheet.getTables().map((t) => (t as unknown as { name: string }).name ?? (t as unknown as { table: { name: string } }).table.name)).toEqual(['Lots']);
+    expect(
+      sheet.getTables().map((t) => (t as unknown as { name: string }).name ?? (t as unknown as { table: { name: string } }).table.name),
+    ).toEqual(['Lots']);
   });
 });
 
@@ -117,7 +129,9 @@ describe('refusals and notices that name the real cause', () => {
   it('an .xlsm input: says its macros are dropped, and an .xlsm output name is refused', async () => {
     const refused = recalc('macros.xlsm', 'out.xlsm');
     expect(refused.status).toBe(2);
-    expect(refused.stderr).toMatch(/^driftcell: recalc writes \.xlsx workbooks \(macros are not carried\); give an -o name ending in \.xlsx, not out\.xlsm\n$/);
+    expect(refused.stderr).toMatch(
+      /^driftcell: recalc writes \.xlsx workbooks \(macros are not carried\); give an -o name ending in \.xlsx, not out\.xlsm\n$/,
+    );
     const result = recalc('macros.xlsm');
     expect(result.status).toBe(0);
     expect(result.stderr).toBe('macros (vbaProject.bin) not carried into the copy\n');

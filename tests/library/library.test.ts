@@ -90,7 +90,9 @@ describe('the package as a library', () => {
   });
 
   it('the .d.ts types compile for a TypeScript user, and a wrongly typed option does not', () => {
-    const config = { compilerOptions: { strict: true, noEmit: true, module: 'node16', moduleResolution: 'node16', target: 'ES2020', types: [] } };
+    const config = {
+      compilerOptions: { strict: true, noEmit: true, module: 'node16', moduleResolution: 'node16', target: 'ES2020', types: [] },
+    };
     writeFileSync(path.join(project, 'tsconfig.json'), JSON.stringify({ ...config, files: ['good.ts'] }));
     writeFileSync(
       path.join(project, 'good.ts'),
@@ -107,7 +109,10 @@ describe('the package as a library', () => {
     expect(good.status).toBe(0);
 
     writeFileSync(path.join(project, 'tsconfig.json'), JSON.stringify({ ...config, files: ['bad.ts'] }));
-    writeFileSync(path.join(project, 'bad.ts'), `import { resistivity } from 'driftcell';\nexport const x: number = resistivity({ doping: '1e15', dopant: 'B' });\n`);
+    writeFileSync(
+      path.join(project, 'bad.ts'),
+      `import { resistivity } from 'driftcell';\nexport const x: number = resistivity({ doping: '1e15', dopant: 'B' });\n`,
+    );
     const bad = spawnSync(process.execPath, [TSC, '-p', 'tsconfig.json'], { cwd: project, encoding: 'utf8' });
     expect(bad.status).not.toBe(0);
     expect(bad.stdout).toMatch(/bad\.ts.*Type 'string' is not assignable to type 'number'/);

@@ -44,7 +44,10 @@ describe('physics caches', () => {
   it('give the same results whatever was computed before', () => {
     const list = calls();
     const forward = list.map((call) => call());
-    const backward = [...list].reverse().map((call) => call()).reverse();
+    const backward = [...list]
+      .reverse()
+      .map((call) => call())
+      .reverse();
     const twice = list.map((call) => call());
     expect(backward).toEqual(forward);
     expect(twice).toEqual(forward);

@@ -10,7 +10,8 @@ describe('Chebyshev interpolation (Trefethen, ATAP 2013, ch. 3–8; from memory)
   });
 
   it('evaluates T₂(t) = 2t² − 1 from the coefficient vector [0, 0, 1] (definition; common practice, no source)', () => {
-    for (const t of [-1, -0.3, 0, 0.5, 1]) expect(evaluateChebyshev({ lower: -1, upper: 1, coefficients: [0, 0, 1] }, t)).toBeCloseTo(2 * t * t - 1, 15);
+    for (const t of [-1, -0.3, 0, 0.5, 1])
+      expect(evaluateChebyshev({ lower: -1, upper: 1, coefficients: [0, 0, 1] }, t)).toBeCloseTo(2 * t * t - 1, 15);
   });
 
   it('converges geometrically for an entire function: exp on [0, 1] to a few ulps (2e-15 relative) with degree 16', () => {

@@ -1,10 +1,4 @@
-import {
-  BOLTZMANN,
-  ELECTRON_MASS,
-  ELEMENTARY_CHARGE,
-  PLANCK,
-  thermalVoltage,
-} from '../../src/physics/constants';
+import { BOLTZMANN, ELECTRON_MASS, ELEMENTARY_CHARGE, PLANCK, thermalVoltage } from '../../src/physics/constants';
 import { PhysicsDomainError } from '../../src/physics/errors';
 
 describe('constants', () => {

@@ -56,7 +56,9 @@ describe('comparing a result', () => {
     const pattern = claim('≈ 1184');
     expect(mismatches(1184.49, pattern)).toEqual([]);
     expect(mismatches(1183.5, pattern)).toEqual([]);
-    expect(mismatches(1184.51, pattern)).toEqual(['the result is 1184.51; the example states ≈ 1184 (±0.5, half a unit in its last printed digit)']);
+    expect(mismatches(1184.51, pattern)).toEqual([
+      'the result is 1184.51; the example states ≈ 1184 (±0.5, half a unit in its last printed digit)',
+    ]);
     expect(mismatches('1184', pattern)).toEqual(['the result is "1184", not a number']);
   });
 

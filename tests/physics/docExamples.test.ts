@@ -63,7 +63,15 @@ function valueExports(file: string): string[] {
 /** Which names an example sees, and from which file: its own module first, then the barrel, then the fixtures. */
 function scopeOf(example: DocExample): { file: string; names: string[] }[] {
   const sources = example.file.startsWith(LIBRARY_FOLDER) ? [example.file] : [example.file, PHYSICS_BARREL, FIXTURES];
-  const ownImports = new Set(example.lines.flatMap((l) => /^import\s*\{([^}]*)\}/.exec(l.code)?.[1].split(',').map((n) => n.trim()) ?? []));
+  const ownImports = new Set(
+    example.lines.flatMap(
+      (l) =>
+        /^import\s*\{([^}]*)\}/
+          .exec(l.code)?.[1]
+          .split(',')
+          .map((n) => n.trim()) ?? [],
+    ),
+  );
   const taken = new Set<string>();
   return [...new Set(sources)].map((file) => {
     const names = valueExports(file).filter((name) => !taken.has(name) && !ownImports.has(name));
@@ -93,7 +101,10 @@ function generate(example: DocExample, index: number): GeneratedExample {
   emit('export const __results: unknown[] = [];', example.line);
   let resultIndex = 0;
   for (const line of example.lines) {
-    const code = line.code.replace(new RegExp(`from\\s+['"]${LIBRARY_PACKAGE}['"]`), `from ${JSON.stringify(modulePath('src/library/index.ts'))}`);
+    const code = line.code.replace(
+      new RegExp(`from\\s+['"]${LIBRARY_PACKAGE}['"]`),
+      `from ${JSON.stringify(modulePath('src/library/index.ts'))}`,
+    );
     emit(line.expected !== undefined ? `__results[${resultIndex++}] = (${code.replace(/;\s*$/, '')});` : code, line.line);
   }
   return { example, fileName: path.join(ROOT, 'tests/physics', `__docExample${index}.ts`), text: out.join('\n'), sourceLines };
@@ -103,7 +114,14 @@ function generate(example: DocExample, index: number): GeneratedExample {
 function typeProblems(generated: readonly GeneratedExample[]): Map<GeneratedExample, string[]> {
   const config = ts.readConfigFile(path.join(ROOT, 'tsconfig.json'), ts.sys.readFile);
   const parsed = ts.parseJsonConfigFileContent(config.config, ts.sys, ROOT);
-  const options: ts.CompilerOptions = { ...parsed.options, noEmit: true, declaration: false, sourceMap: false, rootDir: undefined, outDir: undefined };
+  const options: ts.CompilerOptions = {
+    ...parsed.options,
+    noEmit: true,
+    declaration: false,
+    sourceMap: false,
+    rootDir: undefined,
+    outDir: undefined,
+  };
   const byName = new Map(generated.map((g) => [g.fileName, g]));
   const host = ts.createCompilerHost(options);
   const getSourceFile = host.getSourceFile.bind(host);
@@ -133,7 +151,9 @@ function typeProblems(generated: readonly GeneratedExample[]): Map<GeneratedExam
 
 /** Runs a generated example; the value of each line that states a result, in order. */
 function run(g: GeneratedExample): unknown[] {
-  const js = ts.transpileModule(g.text, { compilerOptions: { module: ts.ModuleKind.CommonJS, target: ts.ScriptTarget.ES2020, esModuleInterop: true } }).outputText;
+  const js = ts.transpileModule(g.text, {
+    compilerOptions: { module: ts.ModuleKind.CommonJS, target: ts.ScriptTarget.ES2020, esModuleInterop: true },
+  }).outputText;
   const moduleExports: { __results?: unknown[] } = {};
   new Function('require', 'exports', js)(require, moduleExports);
   return moduleExports.__results ?? [];
@@ -171,7 +191,11 @@ describe('doc-block examples', () => {
       const unreadable = example.lines.filter((l) => l.claimProblem).map((l) => `${example.file}:${l.line}: ${l.claimProblem}`);
       expect(unreadable).toEqual([]);
       const stated = example.lines.filter((l) => l.expected !== undefined);
-      expect(stated.length > 0 ? [] : [`${example.file}:${example.line}: the example states no result (end a line with // → value or // ≈ value)`]).toEqual([]);
+      expect(
+        stated.length > 0
+          ? []
+          : [`${example.file}:${example.line}: the example states no result (end a line with // → value or // ≈ value)`],
+      ).toEqual([]);
       expect(typeProblemsOf(g)).toEqual([]);
       let results: unknown[];
       try {

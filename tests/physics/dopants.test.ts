@@ -1,4 +1,12 @@
-import { dopantCodeProblem, dopantCodes, genericDopant, readDopant, resolveDopant, typedDopantCodes, type DopantKind } from '../../src/physics/dopants';
+import {
+  dopantCodeProblem,
+  dopantCodes,
+  genericDopant,
+  readDopant,
+  resolveDopant,
+  typedDopantCodes,
+  type DopantKind,
+} from '../../src/physics/dopants';
 import { PhysicsDomainError } from '../../src/physics/errors';
 import { MATERIALS, SILICON } from '../../src/physics/materials';
 
@@ -53,7 +61,9 @@ describe('dopants', () => {
   it('refuses a lone P or N in typed text in any case, naming both readings and what to type', () => {
     for (const text of ['P', 'p', ' p ']) {
       expect(() => readDopant(SILICON, text)).toThrow(PhysicsDomainError);
-      expect(dopantCodeProblem(text)).toBe(`dopant "${text.trim()}" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"`);
+      expect(dopantCodeProblem(text)).toBe(
+        `dopant "${text.trim()}" could mean phosphorus or a generic acceptor (p-type); type "phosphorus" or "acceptor"`,
+      );
     }
     for (const text of ['N', 'n']) {
       expect(dopantCodeProblem(text)).toBe(`dopant "${text}" could mean nitrogen or a generic donor (n-type); type "nitrogen" or "donor"`);

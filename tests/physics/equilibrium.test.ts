@@ -189,8 +189,7 @@ describe('solveEquilibrium', () => {
     ]) {
       const edges = bandEdges(SILICON, T);
       const kT = thermalVoltage(T);
-      const { isolatedEnergy, referenceDensity, screeningExponent, localizationDensity, localizationExponent } =
-        P.ionization;
+      const { isolatedEnergy, referenceDensity, screeningExponent, localizationDensity, localizationExponent } = P.ionization;
       const deltaE = isolatedEnergy / (1 + Math.pow(N / referenceDensity, screeningExponent));
       const b = 1 / (1 + Math.pow(N / localizationDensity, localizationExponent));
       const n1 = (Math.exp(edges.logConductionDensity) / P.degeneracy) * Math.exp(-deltaE / kT);

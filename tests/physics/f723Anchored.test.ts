@@ -13,7 +13,13 @@
  * equations to rounding, so the test also shows the margin; F723's own
  * self-consistency (3 % B, 4.5 % P, §1.2) is the accuracy it claims.
  */
-import { SILICON, resolveDopant, resistivity, dopingForResistivity, resistivityTemperatureCoefficient as temperatureCoefficient } from '../../src/physics';
+import {
+  SILICON,
+  resolveDopant,
+  resistivity,
+  dopingForResistivity,
+  resistivityTemperatureCoefficient as temperatureCoefficient,
+} from '../../src/physics';
 import type { Sample } from '../../src/physics/sample';
 
 const T23 = 296.15; // 23 °C, F723 §1.1
@@ -32,8 +38,7 @@ const F723 = {
   P: {
     rho: (N: number) =>
       (6.242e18 / N) * 10 ** ratio([-3.0769, 2.2108, -0.62272, 0.057501], [-0.68157, 0.19833, -0.018376], Math.log10(N) - 16),
-    density: (r: number) =>
-      (6.242e18 / r) * 10 ** ratio([-3.1083, -3.2626, -1.2196, -0.13923], [1.0265, 0.38755, 0.041833], Math.log10(r)),
+    density: (r: number) => (6.242e18 / r) * 10 ** ratio([-3.1083, -3.2626, -1.2196, -0.13923], [1.0265, 0.38755, 0.041833], Math.log10(r)),
     densityRange: [1e12, 5e20],
     rhoRange: [2e-4, 4e3],
   },
@@ -90,7 +95,11 @@ describe('named models keep returning what they are named after', () => {
 
 describe('temperature and compensation come from the physics', () => {
   test('ρ(T)/ρ(23 °C) is that of masetti', () => {
-    for (const [symbol, N] of [['B', 1e15], ['P', 1e18], ['B', 1e20]] as const) {
+    for (const [symbol, N] of [
+      ['B', 1e15],
+      ['P', 1e18],
+      ['B', 1e20],
+    ] as const) {
       for (const T of [200, 300, 400]) {
         const anchored = resistivity(sampleOf(symbol, N, T)) / resistivity(sampleOf(symbol, N));
         const physics = resistivity(sampleOf(symbol, N, T), 'masetti') / resistivity(sampleOf(symbol, N), 'masetti');
@@ -147,7 +156,10 @@ describe('smooth sweeps across the edges of the standard’s ranges', () => {
     expect(maxOutlier(ln)).toBeLessThan(1);
   });
   test('temperature sweep 250–450 K passes 290 and 305 K (the astm-f723 window) without a step', () => {
-    for (const [symbol, N] of [['B', 1e16], ['P', 4e20]] as const) {
+    for (const [symbol, N] of [
+      ['B', 1e16],
+      ['P', 4e20],
+    ] as const) {
       const temps: number[] = [];
       for (let T = 250; T <= 450; T += 1) temps.push(T);
       const ln = temps.map((T) => Math.log(resistivity(sampleOf(symbol, N, T))));

@@ -1,32 +1,50 @@
 import * as physics from '../../src/physics';
-import type {
-  Carrier,
-  CarrierRole,
-  Dopant,
-  DopantDensity,
-  DopantKind,
-  Equilibrium,
-  Material,
-  ModelInfo,
-  Sample,
-} from '../../src/physics';
+import type { Carrier, CarrierRole, Dopant, DopantDensity, DopantKind, Equilibrium, Material, ModelInfo, Sample } from '../../src/physics';
 
 // src/physics/index.ts is the core's public API: the catalog reaches the physics through it only, so it must
 // export every function, table and type the catalog uses, the sample helpers sampleDopants and carrierFor included.
 describe('src/physics/index.ts', () => {
   it('exports every function and table the catalog uses', () => {
     const functions = [
-      'thermalVoltage', 'findRoot', 'resolveMaterial', 'bandgap', 'conductionBandDensity', 'valenceBandDensity',
-      'intrinsicDensity', 'dopantCodes', 'resolveDopant', 'genericDopant', 'solveEquilibrium', 'ionizedFraction',
-      'sampleDopants', 'carrierFor', 'fitMobility', 'mobility', 'diffusivity', 'conductivity', 'resistivity',
-      'currentDensity', 'dopingForResistivity', 'f723Resistivity', 'f723Density', 'modelInfo',
-      'sheetResistance', 'resistorValue', 'PhysicsDomainError',
+      'thermalVoltage',
+      'findRoot',
+      'resolveMaterial',
+      'bandgap',
+      'conductionBandDensity',
+      'valenceBandDensity',
+      'intrinsicDensity',
+      'dopantCodes',
+      'resolveDopant',
+      'genericDopant',
+      'solveEquilibrium',
+      'ionizedFraction',
+      'sampleDopants',
+      'carrierFor',
+      'fitMobility',
+      'mobility',
+      'diffusivity',
+      'conductivity',
+      'resistivity',
+      'currentDensity',
+      'dopingForResistivity',
+      'f723Resistivity',
+      'f723Density',
+      'modelInfo',
+      'sheetResistance',
+      'resistorValue',
+      'PhysicsDomainError',
     ] as const;
     for (const name of functions) expect(typeof physics[name]).toBe('function');
     for (const name of ['ELEMENTARY_CHARGE', 'BOLTZMANN', 'PLANCK', 'ELECTRON_MASS'] as const) {
       expect(typeof physics[name]).toBe('number');
     }
-    for (const name of ['MATERIAL_CODES', 'INTRINSIC_MODEL_CODES', 'MOBILITY_MODEL_CODES', 'RESISTIVITY_MODEL_CODES', 'MODEL_REGISTRY'] as const) {
+    for (const name of [
+      'MATERIAL_CODES',
+      'INTRINSIC_MODEL_CODES',
+      'MOBILITY_MODEL_CODES',
+      'RESISTIVITY_MODEL_CODES',
+      'MODEL_REGISTRY',
+    ] as const) {
       expect(Array.isArray(physics[name])).toBe(true);
     }
     expect(physics.SILICON.code).toBe('Si');

@@ -9,7 +9,13 @@ const ROUND_TRIP = 1e-9;
 /** N → ρ(N) → N' for one dopant, counter-doping rule and temperature; returns the worst |N'/N − 1|. */
 // Exact round trips are a property of the physics models; 'f723-anchored' (the default) follows F723's two
 // directions and round-trips only to the standard's own inconsistency (tests/physics/f723Anchored.test.ts).
-function worstRoundTrip(dopant: string, densities: number[], counterFor: (n: number) => number, temperature = 300, model = 'masetti'): number {
+function worstRoundTrip(
+  dopant: string,
+  densities: number[],
+  counterFor: (n: number) => number,
+  temperature = 300,
+  model = 'masetti',
+): number {
   let worst = 0;
   for (const n of densities) {
     const counter = counterFor(n);
@@ -65,9 +71,7 @@ describe('dopingForResistivity errors', () => {
   });
   it('rejects non-positive targets and counter-doping that leaves no room', () => {
     expect(() => dopingForResistivity(0, siliconSampleWithoutDensity('B'))).toThrow(/greater than 0/);
-    expect(() => dopingForResistivity(1, siliconSampleWithoutDensity('B', 300, NET_DENSITY_SEARCH.maxTotal))).toThrow(
-      /no room/,
-    );
+    expect(() => dopingForResistivity(1, siliconSampleWithoutDensity('B', 300, NET_DENSITY_SEARCH.maxTotal))).toThrow(/no room/);
   });
 });
 

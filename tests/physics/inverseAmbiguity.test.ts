@@ -53,7 +53,8 @@ describe('all solutions at 77 K (freeze-out)', () => {
     expect(found[0]).toBeLessThan(found[1]);
     expect(found[1]).toBeLessThan(found[2]);
     expect(found.some((n) => Math.abs(n / 1e17 - 1) < 1e-9)).toBe(true);
-    for (const n of found) expect(Math.abs(resistivity(siliconSample(dopant, n, 77), MODEL) / target - 1)).toBeLessThan(RESISTIVITY_ROUND_TRIP);
+    for (const n of found)
+      expect(Math.abs(resistivity(siliconSample(dopant, n, 77), MODEL) / target - 1)).toBeLessThan(RESISTIVITY_ROUND_TRIP);
   });
 
   it.each(['P', 'B'])('every target across the non-monotone stretch has three solutions that round-trip (%s)', (dopant) => {
@@ -62,14 +63,16 @@ describe('all solutions at 77 K (freeze-out)', () => {
       const found = densities(target, dopant, 77);
       expect(found).toHaveLength(3);
       expect(found.some((m) => Math.abs(m / n - 1) < 1e-9)).toBe(true);
-      for (const m of found) expect(Math.abs(resistivity(siliconSample(dopant, m, 77), MODEL) / target - 1)).toBeLessThan(RESISTIVITY_ROUND_TRIP);
+      for (const m of found)
+        expect(Math.abs(resistivity(siliconSample(dopant, m, 77), MODEL) / target - 1)).toBeLessThan(RESISTIVITY_ROUND_TRIP);
     }
   });
 
   it('refuses to choose: the issue’s case is an error listing the three solutions and the window’s names', () => {
     const target = resistivity(siliconSample('P', 1e17, 77), MODEL);
     const found = densities(target, 'P', 77);
-    const call = () => dopingForResistivity(target, siliconSampleWithoutDensity('P', 77), MODEL, {}, { min: 'doping_min', max: 'doping_max' });
+    const call = () =>
+      dopingForResistivity(target, siliconSampleWithoutDensity('P', 77), MODEL, {}, { min: 'doping_min', max: 'doping_max' });
     expect(call).toThrow(AmbiguousDopingError);
     expect(call).toThrow(PhysicsDomainError);
     let message = '';
@@ -114,7 +117,9 @@ describe('a density window picks one solution', () => {
   });
 
   it('refuses a window given high end first, or with a negative end', () => {
-    expect(() => dopingForResistivity(target, sample, MODEL, { min: 1e18, max: 1e16 })).toThrow(/window\.min 1\.00e18 cm⁻³ is above window\.max 1\.00e16/);
+    expect(() => dopingForResistivity(target, sample, MODEL, { min: 1e18, max: 1e16 })).toThrow(
+      /window\.min 1\.00e18 cm⁻³ is above window\.max 1\.00e16/,
+    );
     expect(() => dopingForResistivity(target, sample, MODEL, { min: -1 })).toThrow(/must be a finite density ≥ 0/);
   });
 
@@ -188,27 +193,30 @@ describe('the scan grid is fine enough (against a brute-force scan of the forwar
     return { min: xs[a], max: xs[b], height: ys[b] - ys[a] };
   }
 
-  it.each(['P', 'B', 'As', 'Sb', 'Ga'])('every freeze-out fold wider than two grid steps is found, down to where it appears (%s)', (dopant) => {
-    let folds = 0;
-    for (const temperature of [50, 77, 100, 105, 110, 120, 125, 130]) {
-      const fold = bruteForceFold(dopant, temperature);
-      if (fold === undefined) continue;
-      const separation = Math.log10(fold.max / fold.min);
-      // The bound the module comment relies on: height ≲ 0.25·s³ (s in decades).
-      expect(fold.height).toBeLessThan(0.3 * separation ** 3);
-      if (separation <= 2 * GRID_STEP_DECADES) continue;
-      folds++;
-      // The scan's turning points are the brute-force extrema (to the brute-force grid's 0.002 decade).
-      const turns = resistivityTurningPoints(siliconSampleWithoutDensity(dopant, temperature), MODEL);
-      expect(turns.map((t) => t.kind)).toEqual(['minimum', 'maximum']);
-      expect(Math.abs(Math.log10(turns[0].netDensity / fold.min))).toBeLessThan(0.002);
-      expect(Math.abs(Math.log10(turns[1].netDensity / fold.max))).toBeLessThan(0.002);
-      const target = Math.exp(Math.log(resistivity(siliconSample(dopant, fold.min, temperature), MODEL)) + fold.height / 2);
-      const found = densities(target, dopant, temperature);
-      expect(found).toHaveLength(3);
-      expect(found[1]).toBeGreaterThan(fold.min);
-      expect(found[1]).toBeLessThan(fold.max);
-    }
-    expect(folds).toBeGreaterThanOrEqual(4);
-  });
+  it.each(['P', 'B', 'As', 'Sb', 'Ga'])(
+    'every freeze-out fold wider than two grid steps is found, down to where it appears (%s)',
+    (dopant) => {
+      let folds = 0;
+      for (const temperature of [50, 77, 100, 105, 110, 120, 125, 130]) {
+        const fold = bruteForceFold(dopant, temperature);
+        if (fold === undefined) continue;
+        const separation = Math.log10(fold.max / fold.min);
+        // The bound the module comment relies on: height ≲ 0.25·s³ (s in decades).
+        expect(fold.height).toBeLessThan(0.3 * separation ** 3);
+        if (separation <= 2 * GRID_STEP_DECADES) continue;
+        folds++;
+        // The scan's turning points are the brute-force extrema (to the brute-force grid's 0.002 decade).
+        const turns = resistivityTurningPoints(siliconSampleWithoutDensity(dopant, temperature), MODEL);
+        expect(turns.map((t) => t.kind)).toEqual(['minimum', 'maximum']);
+        expect(Math.abs(Math.log10(turns[0].netDensity / fold.min))).toBeLessThan(0.002);
+        expect(Math.abs(Math.log10(turns[1].netDensity / fold.max))).toBeLessThan(0.002);
+        const target = Math.exp(Math.log(resistivity(siliconSample(dopant, fold.min, temperature), MODEL)) + fold.height / 2);
+        const found = densities(target, dopant, temperature);
+        expect(found).toHaveLength(3);
+        expect(found[1]).toBeGreaterThan(fold.min);
+        expect(found[1]).toBeLessThan(fold.max);
+      }
+      expect(folds).toBeGreaterThanOrEqual(4);
+    },
+  );
 });

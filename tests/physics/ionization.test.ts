@@ -1,11 +1,7 @@
 import { thermalVoltage } from '../../src/physics/constants';
 import { resolveDopant } from '../../src/physics/dopants';
 import { PhysicsDomainError } from '../../src/physics/errors';
-import {
-  dopantIonizationEnergy,
-  ionizationState,
-  localizedFraction,
-} from '../../src/physics/ionization';
+import { dopantIonizationEnergy, ionizationState, localizedFraction } from '../../src/physics/ionization';
 import { SILICON } from '../../src/physics/materials';
 
 const phosphorus = resolveDopant(SILICON, 'P');
@@ -70,7 +66,7 @@ describe('ionizationState', () => {
     const eta = 5; // Fermi level above the donor level by many kT
     const x = -eta - dopantIonizationEnergy(phosphorus, N) / thermalVoltage(T);
     const split = localizedFraction(phosphorus, N);
-    const expected = split.delocalized + split.localized * (Math.exp(x) / 2) / (1 + Math.exp(x) / 2);
+    const expected = split.delocalized + (split.localized * (Math.exp(x) / 2)) / (1 + Math.exp(x) / 2);
     expect(ionizationState(phosphorus, N, T, eta).ionized / expected).toBeCloseTo(1, 12);
   });
 

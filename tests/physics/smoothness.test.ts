@@ -57,21 +57,30 @@ function expectNoKink(f: (x: number) => number, from: number, to: number, coarse
   const fine = largestSlopeChange(f, logGrid(fineFrom, fineTo, Math.round(((fineTo - fineFrom) / h) * 10)));
   if (coarse.change < 1e-3) return;
   if (fine.change > 0.5 * coarse.change) {
-    throw new Error(`${what}: slope change ${coarse.change.toExponential(2)} near ${coarse.at.toFixed(3)} does not shrink on refinement (${fine.change.toExponential(2)})`);
+    throw new Error(
+      `${what}: slope change ${coarse.change.toExponential(2)} near ${coarse.at.toFixed(3)} does not shrink on refinement (${fine.change.toExponential(2)})`,
+    );
   }
 }
 
 const CASES = MATERIALS.flatMap((material) =>
-  namedDopants(material.code).flatMap((dopant) => mobilityModelCodes(material).filter((model) => model !== 'astm-f723').map((model) => ({ material: material.code, dopant, model }))),
+  namedDopants(material.code).flatMap((dopant) =>
+    mobilityModelCodes(material)
+      .filter((model) => model !== 'astm-f723')
+      .map((model) => ({ material: material.code, dopant, model })),
+  ),
 );
 
 describe('resistivity over 1e12–1e21 cm⁻³ and 50–700 K, every material and mobility model', () => {
-  it.each(CASES)('$material:$dopant with $model: finite, positive, no kinks in doping at any temperature', ({ material, dopant, model }) => {
-    for (const temperature of TEMPERATURES) {
-      const rho = (logN: number) => value('RESISTIVITY', 10 ** logN, dopant, temperature, model, material);
-      expectNoKink(rho, LOG_DENSITY.from, LOG_DENSITY.to, 36, `${material}:${dopant} ${model} at ${temperature} K`);
-    }
-  });
+  it.each(CASES)(
+    '$material:$dopant with $model: finite, positive, no kinks in doping at any temperature',
+    ({ material, dopant, model }) => {
+      for (const temperature of TEMPERATURES) {
+        const rho = (logN: number) => value('RESISTIVITY', 10 ** logN, dopant, temperature, model, material);
+        expectNoKink(rho, LOG_DENSITY.from, LOG_DENSITY.to, 36, `${material}:${dopant} ${model} at ${temperature} K`);
+      }
+    },
+  );
 
   it.each(CASES)('$material:$dopant with $model: no kinks in temperature from 50 to 700 K', ({ material, dopant, model }) => {
     for (const logN of [12, 15, 17, 18, 19, 20, 21]) {
@@ -80,17 +89,20 @@ describe('resistivity over 1e12–1e21 cm⁻³ and 50–700 K, every material an
     }
   });
 
-  it.each(CASES)('$material:$dopant with $model: ρ falls as doping rises at 300, 500 and 700 K wherever N ≥ 10·ni', ({ material, dopant, model }) => {
-    for (const temperature of [300, 500, 700]) {
-      const extrinsic = Math.log10(10 * value('INTRINSIC', temperature, material));
-      let previous = Infinity;
-      for (const logN of logGrid(LOG_DENSITY.from, LOG_DENSITY.to, 36).filter((x) => x >= extrinsic)) {
-        const rho = value('RESISTIVITY', 10 ** logN, dopant, temperature, model, material);
-        expect(rho).toBeLessThan(previous);
-        previous = rho;
+  it.each(CASES)(
+    '$material:$dopant with $model: ρ falls as doping rises at 300, 500 and 700 K wherever N ≥ 10·ni',
+    ({ material, dopant, model }) => {
+      for (const temperature of [300, 500, 700]) {
+        const extrinsic = Math.log10(10 * value('INTRINSIC', temperature, material));
+        let previous = Infinity;
+        for (const logN of logGrid(LOG_DENSITY.from, LOG_DENSITY.to, 36).filter((x) => x >= extrinsic)) {
+          const rho = value('RESISTIVITY', 10 ** logN, dopant, temperature, model, material);
+          expect(rho).toBeLessThan(previous);
+          previous = rho;
+        }
       }
-    }
-  });
+    },
+  );
 });
 
 describe('carrier densities over the same space', () => {

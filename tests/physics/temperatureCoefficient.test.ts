@@ -20,7 +20,7 @@ describe('temperatureDerivative on closed forms', () => {
   const cases: [string, (t: number) => number, (t: number) => number][] = [
     ['a·ln T (power law)', (t) => -2.33 * Math.log(t), (t) => -2.33 / t],
     ['θ/T (activation)', (t) => 6726 / t, (t) => -6726 / (t * t)],
-    ['ln(1 + e^(θ/T)) (a switch-over)', (t) => Math.log1p(Math.exp(300 / t)), (t) => (-300 / (t * t)) / (1 + Math.exp(-300 / t))],
+    ['ln(1 + e^(θ/T)) (a switch-over)', (t) => Math.log1p(Math.exp(300 / t)), (t) => -300 / (t * t) / (1 + Math.exp(-300 / t))],
   ];
   // Error bounds of the module comment for h = T/100: central ≤ 2.5e-9 of |g'| for
   // θ/T (a few times that for the sharper switch-over), one-sided ≤ 24·(1/200)⁴
@@ -78,7 +78,8 @@ function analyticLogResistivitySlope(density: number, temperature: number): numb
     const reference = c.referenceDensity.value * tn ** c.referenceDensity.exponent;
     const alpha = c.alpha.value * tn ** c.alpha.exponent;
     const u = (density / reference) ** alpha;
-    const dLogU = ((alpha * c.alpha.exponent) / temperature) * Math.log(density / reference) - (alpha * c.referenceDensity.exponent) / temperature;
+    const dLogU =
+      ((alpha * c.alpha.exponent) / temperature) * Math.log(density / reference) - (alpha * c.referenceDensity.exponent) / temperature;
     const mu = minimum + amplitude / (1 + u);
     const dMu =
       (minimum * c.minimum.exponent) / temperature +

@@ -42,7 +42,11 @@ describe('resistivityAtTemperature', () => {
 
   it('round trips: T1 → T2 → T1 returns the reading (to the inverse’s 1e-9), for several models', () => {
     for (const model of [undefined, 'masetti', 'arora', 'caughey-thomas', 'klaassen']) {
-      for (const [dopant, reading] of [['B', 10], ['phosphorus', 0.02], ['As', 0.003]] as const) {
+      for (const [dopant, reading] of [
+        ['B', 10],
+        ['phosphorus', 0.02],
+        ['As', 0.003],
+      ] as const) {
         const there = resistivityAtTemperature(reading, siliconSampleWithoutDensity(dopant, 303.15), 280, model);
         const back = resistivityAtTemperature(there, siliconSampleWithoutDensity(dopant, 280), 303.15, model);
         expect(Math.abs(back / reading - 1)).toBeLessThan(1e-9);

@@ -1,10 +1,4 @@
-import {
-  RESISTIVITY_MODEL_CODES,
-  conductivity,
-  currentDensity,
-  resistivity,
-  resolveResistivityModel,
-} from '../../src/physics/transport';
+import { RESISTIVITY_MODEL_CODES, conductivity, currentDensity, resistivity, resolveResistivityModel } from '../../src/physics/transport';
 import { MOBILITY_MODEL_CODES, fitMobility, freeCarrierMobility } from '../../src/physics/mobility';
 import { solveEquilibrium } from '../../src/physics/equilibrium';
 import { intrinsicDensity } from '../../src/physics/bands';

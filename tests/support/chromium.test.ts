@@ -4,11 +4,18 @@ import os from 'os';
 import path from 'path';
 import { CHROMIUM_ARGS, CHROMIUM_VARIABLE, ChromiumNotFound, findChromium, systemChromiumLocations } from './chromium';
 
-const only = (...files: string[]) => (file: string) => files.includes(file);
+const only =
+  (...files: string[]) =>
+  (file: string) =>
+    files.includes(file);
 
 describe('findChromium', () => {
   it('takes DRIFTCELL_CHROMIUM over every system location', () => {
-    const found = findChromium({ env: { [CHROMIUM_VARIABLE]: '/opt/my/chrome' }, platform: 'linux', isFile: only('/opt/my/chrome', '/usr/bin/chromium') });
+    const found = findChromium({
+      env: { [CHROMIUM_VARIABLE]: '/opt/my/chrome' },
+      platform: 'linux',
+      isFile: only('/opt/my/chrome', '/usr/bin/chromium'),
+    });
     expect(found).toBe('/opt/my/chrome');
   });
 
@@ -19,7 +26,9 @@ describe('findChromium', () => {
       writeFileSync(file, '');
       expect(findChromium({ env: { [CHROMIUM_VARIABLE]: file } })).toBe(file);
       // A folder is not an executable.
-      expect(() => findChromium({ env: { [CHROMIUM_VARIABLE]: folder } })).toThrow(`${CHROMIUM_VARIABLE} is set to ${folder}, which is not a file`);
+      expect(() => findChromium({ env: { [CHROMIUM_VARIABLE]: folder } })).toThrow(
+        `${CHROMIUM_VARIABLE} is set to ${folder}, which is not a file`,
+      );
     } finally {
       rmSync(folder, { recursive: true, force: true });
     }
@@ -38,12 +47,16 @@ describe('findChromium', () => {
   });
 
   it("an empty variable counts as unset (a shell's `DRIFTCELL_CHROMIUM= npm test`)", () => {
-    expect(findChromium({ env: { [CHROMIUM_VARIABLE]: '' }, platform: 'linux', isFile: only('/usr/bin/chromium') })).toBe('/usr/bin/chromium');
+    expect(findChromium({ env: { [CHROMIUM_VARIABLE]: '' }, platform: 'linux', isFile: only('/usr/bin/chromium') })).toBe(
+      '/usr/bin/chromium',
+    );
   });
 
   it("tries Debian's /usr/bin/chromium first on Linux, then the other usual names", () => {
     expect(systemChromiumLocations('linux')[0]).toBe('/usr/bin/chromium');
-    expect(findChromium({ env: {}, platform: 'linux', isFile: only('/usr/bin/google-chrome', '/usr/bin/chromium-browser') })).toBe('/usr/bin/chromium-browser');
+    expect(findChromium({ env: {}, platform: 'linux', isFile: only('/usr/bin/google-chrome', '/usr/bin/chromium-browser') })).toBe(
+      '/usr/bin/chromium-browser',
+    );
   });
 
   it('finds Chromium or Chrome in /Applications or ~/Applications on macOS', () => {
@@ -58,7 +71,13 @@ describe('findChromium', () => {
     const perUser = 'C:\\Users\\ana\\AppData\\Local\\Google\\Chrome\\Application\\chrome.exe';
     expect(findChromium({ env, platform: 'win32', isFile: only(perUser) })).toBe(perUser);
     expect(systemChromiumLocations('win32', env)).toContain('D:\\Apps\\Google\\Chrome\\Application\\chrome.exe');
-    expect(findChromium({ env: { [CHROMIUM_VARIABLE]: 'D:\\Portable\\chrome.exe' }, platform: 'win32', isFile: only('D:\\Portable\\chrome.exe') })).toBe('D:\\Portable\\chrome.exe');
+    expect(
+      findChromium({
+        env: { [CHROMIUM_VARIABLE]: 'D:\\Portable\\chrome.exe' },
+        platform: 'win32',
+        isFile: only('D:\\Portable\\chrome.exe'),
+      }),
+    ).toBe('D:\\Portable\\chrome.exe');
   });
 
   it('without any browser, lists every place tried and how to name one', () => {
@@ -77,6 +96,13 @@ describe('findChromium', () => {
   });
 
   it('launch flags stay those of the closed test network', () => {
-    expect(CHROMIUM_ARGS).toEqual(['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run']);
+    expect(CHROMIUM_ARGS).toEqual([
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+    ]);
   });
 });

@@ -13,7 +13,14 @@ import path from 'path';
 export const CHROMIUM_VARIABLE = 'DRIFTCELL_CHROMIUM';
 
 /** Launch flags every test browser gets: this machine's closed network, no sandbox inside containers. */
-export const CHROMIUM_ARGS: string[] = ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
+export const CHROMIUM_ARGS: string[] = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--no-first-run',
+];
 
 /** What the finder looks at; each part can be replaced in tests. */
 export interface ChromiumSearch {
@@ -39,19 +46,34 @@ function isFile(file: string): boolean {
  * @param env - environment (Windows program folders come from it)
  * @param homeDir - the user's home folder (per-user installs on macOS)
  */
-export function systemChromiumLocations(platform: NodeJS.Platform, env: NodeJS.ProcessEnv = process.env, homeDir: string = os.homedir()): string[] {
+export function systemChromiumLocations(
+  platform: NodeJS.Platform,
+  env: NodeJS.ProcessEnv = process.env,
+  homeDir: string = os.homedir(),
+): string[] {
   if (platform === 'darwin') {
     const apps = ['Chromium.app/Contents/MacOS/Chromium', 'Google Chrome.app/Contents/MacOS/Google Chrome'];
-    return [...apps.map((app) => path.posix.join('/Applications', app)), ...apps.map((app) => path.posix.join(homeDir, 'Applications', app))];
+    return [
+      ...apps.map((app) => path.posix.join('/Applications', app)),
+      ...apps.map((app) => path.posix.join(homeDir, 'Applications', app)),
+    ];
   }
   if (platform === 'win32') {
-    const folders = [env.PROGRAMFILES ?? 'C:\\Program Files', env['PROGRAMFILES(X86)'] ?? 'C:\\Program Files (x86)', env.LOCALAPPDATA].filter(
-      (folder): folder is string => folder !== undefined && folder !== '',
-    );
+    const folders = [
+      env.PROGRAMFILES ?? 'C:\\Program Files',
+      env['PROGRAMFILES(X86)'] ?? 'C:\\Program Files (x86)',
+      env.LOCALAPPDATA,
+    ].filter((folder): folder is string => folder !== undefined && folder !== '');
     const installs = ['Chromium\\Application\\chrome.exe', 'Google\\Chrome\\Application\\chrome.exe'];
     return installs.flatMap((install) => folders.map((folder) => path.win32.join(folder, install)));
   }
-  return ['/usr/bin/chromium', '/usr/bin/chromium-browser', '/usr/bin/google-chrome', '/usr/bin/google-chrome-stable', '/snap/bin/chromium'];
+  return [
+    '/usr/bin/chromium',
+    '/usr/bin/chromium-browser',
+    '/usr/bin/google-chrome',
+    '/usr/bin/google-chrome-stable',
+    '/snap/bin/chromium',
+  ];
 }
 
 /** No usable browser; the message says what was tried and what to do. */
@@ -75,8 +97,12 @@ export function findChromium(search: ChromiumSearch = {}): string {
   if (named !== undefined && named !== '') {
     // Set on purpose: never fall back silently to another browser.
     const absolute = platform === 'win32' ? path.win32.isAbsolute(named) : path.posix.isAbsolute(named);
-    if (!absolute) throw new ChromiumNotFound(`${CHROMIUM_VARIABLE} must be an absolute path to the Chromium or Chrome executable; it is "${named}"`);
-    if (!exists(named)) throw new ChromiumNotFound(`${CHROMIUM_VARIABLE} is set to ${named}, which is not a file; set it to the Chromium or Chrome executable, or unset it to use a system location`);
+    if (!absolute)
+      throw new ChromiumNotFound(`${CHROMIUM_VARIABLE} must be an absolute path to the Chromium or Chrome executable; it is "${named}"`);
+    if (!exists(named))
+      throw new ChromiumNotFound(
+        `${CHROMIUM_VARIABLE} is set to ${named}, which is not a file; set it to the Chromium or Chrome executable, or unset it to use a system location`,
+      );
     return named;
   }
   const tried = systemChromiumLocations(platform, env, search.homeDir ?? os.homedir());

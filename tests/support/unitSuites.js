@@ -23,7 +23,10 @@ const TESTS = path.join(ROOT, 'tests');
 
 /** Why a suite is left out, tested in order against its code (comments removed). */
 const NEEDS = [
-  { reason: 'uses a helper that needs the build or a browser', pattern: /\b(requireAddinBuild|ADDIN_DIR|buildCli|startHarness|ensureHarnessBuilt|HARNESS_DIR|launchLocalBrowser)\b/ },
+  {
+    reason: 'uses a helper that needs the build or a browser',
+    pattern: /\b(requireAddinBuild|ADDIN_DIR|buildCli|startHarness|ensureHarnessBuilt|HARNESS_DIR|launchLocalBrowser)\b/,
+  },
   { reason: 'reads a build output by path', pattern: /['"`]dist['"`]\s*[,)]/ },
   { reason: 'runs LibreOffice or Python', pattern: /['"`]\/usr\/bin\/(soffice|libreoffice|python3?)['"`]/ },
 ];

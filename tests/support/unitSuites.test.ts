@@ -35,13 +35,23 @@ describe('npm run test:unit', () => {
   });
 
   it('keeps suites that need only ts-jest, including ones that merely mention a build in comments', () => {
-    for (const relative of ['tests/physics/solve.test.ts', 'tests/engine/plugin.test.ts', 'tests/dev/devServer.test.ts', 'tests/support/chromium.test.ts']) {
+    for (const relative of [
+      'tests/physics/solve.test.ts',
+      'tests/engine/plugin.test.ts',
+      'tests/dev/devServer.test.ts',
+      'tests/support/chromium.test.ts',
+    ]) {
       expect([relative, excluded(relative)]).toEqual([relative, undefined]);
     }
-    const commentOnly = "/** Checks what dist/addin holds (requireAddinBuild elsewhere). */\n// join('dist', 'node')\nit('adds', () => expect(1 + 1).toBe(2));\n";
+    const commentOnly =
+      "/** Checks what dist/addin holds (requireAddinBuild elsewhere). */\n// join('dist', 'node')\nit('adds', () => expect(1 + 1).toBe(2));\n";
     expect(needsBeyondUnit(suite('tests/physics/example.test.ts'), commentOnly)).toBeUndefined();
-    expect(needsBeyondUnit(suite('tests/physics/example.test.ts'), "const cli = join(ROOT, 'dist', 'node', 'cli', 'main.js');")).toBe('reads a build output by path');
-    expect(needsBeyondUnit(suite('tests/physics/example.test.ts'), "const SOFFICE = '/usr/bin/soffice';")).toBe('runs LibreOffice or Python');
+    expect(needsBeyondUnit(suite('tests/physics/example.test.ts'), "const cli = join(ROOT, 'dist', 'node', 'cli', 'main.js');")).toBe(
+      'reads a build output by path',
+    );
+    expect(needsBeyondUnit(suite('tests/physics/example.test.ts'), "const SOFFICE = '/usr/bin/soffice';")).toBe(
+      'runs LibreOffice or Python',
+    );
   });
 
   it('the jest config ignores exactly the excluded suites, and most suites run', () => {

@@ -3,7 +3,13 @@ import { CATALOG, evaluate } from '../../src/catalog';
 import { createEnginePort } from '../../src/taskpane/enginePort';
 import type { CellBlock } from '../../src/taskpane/port';
 
-const cell = (row: number, column: number, rowCount = 1, columnCount = 1, sheet = 'Sheet1'): CellBlock => ({ sheet, row, column, rowCount, columnCount });
+const cell = (row: number, column: number, rowCount = 1, columnCount = 1, sheet = 'Sheet1'): CellBlock => ({
+  sheet,
+  row,
+  column,
+  rowCount,
+  columnCount,
+});
 const RESISTIVITY = CATALOG.find((f) => f.name === 'RESISTIVITY')!;
 
 describe('createEnginePort', () => {
@@ -58,7 +64,16 @@ describe('createEnginePort', () => {
 
   it('records chart, highlight and style plans in order', async () => {
     const port = createEnginePort();
-    const chart = { sheet: 'Sheet1', title: 't', series: [{ name: 's', x: cell(0, 0, 2, 1), y: cell(0, 1, 2, 1) }], xTitle: 'x', yTitle: 'y', xLogarithmic: true, yLogarithmic: false, anchor: cell(0, 3) };
+    const chart = {
+      sheet: 'Sheet1',
+      title: 't',
+      series: [{ name: 's', x: cell(0, 0, 2, 1), y: cell(0, 1, 2, 1) }],
+      xTitle: 'x',
+      yTitle: 'y',
+      xLogarithmic: true,
+      yLogarithmic: false,
+      anchor: cell(0, 3),
+    };
     await port.addChart(chart);
     await port.addHighlight({ block: cell(0, 0, 3, 1), text: 'FAIL', fill: '#ffeeee', fontColor: '#660000' });
     await port.style({ block: cell(0, 0), bold: true });

@@ -99,7 +99,9 @@ describe('the production pane inside (a stand-in for) Excel', () => {
   it('outside Excel (Office.js unavailable) shows the reason and no tools', async () => {
     const outside = await browser.context.newPage();
     await outside.goto(`${server.url}/taskpane.html`, { waitUntil: 'load' });
-    expect(await outside.locator('#status').textContent()).toMatch(/Office\.js is not available here, so this page is not running inside Excel/);
+    expect(await outside.locator('#status').textContent()).toMatch(
+      /Office\.js is not available here, so this page is not running inside Excel/,
+    );
     expect(await outside.locator('#tools').isHidden()).toBe(true);
     expect(await outside.getByRole('tab').count()).toBe(0);
     await outside.close();
@@ -111,13 +113,57 @@ describe('the production pane inside (a stand-in for) Excel', () => {
     await page.waitForFunction(() => /Inserted|Not inserted|Nothing written/.test(document.getElementById('messages')?.textContent ?? ''));
     expect(await page.locator('#messages').textContent()).toMatch(/^Inserted at Sheet1!B2:C34/);
     const log = await page.evaluate(() => {
-      const l = (window as unknown as { __excelLog: { formulas: Record<string, unknown[][]>; numberFormats: string[][]; bold: string[]; charts: { type: string; by: string; title: { text: string }; axes: { categoryAxis: { scaleType: string }; valueAxis: { scaleType: string } }; position: string; list: { name: string; x: string; y: string }[] }[] } }).__excelLog;
-      return JSON.parse(JSON.stringify({ ...l, charts: l.charts.map((c) => ({ type: c.type, by: c.by, title: c.title.text, x: c.axes.categoryAxis.scaleType, y: c.axes.valueAxis.scaleType, position: c.position, series: c.list.map((s) => ({ name: s.name, x: s.x, y: s.y })) })) }));
+      const l = (
+        window as unknown as {
+          __excelLog: {
+            formulas: Record<string, unknown[][]>;
+            numberFormats: string[][];
+            bold: string[];
+            charts: {
+              type: string;
+              by: string;
+              title: { text: string };
+              axes: { categoryAxis: { scaleType: string }; valueAxis: { scaleType: string } };
+              position: string;
+              list: { name: string; x: string; y: string }[];
+            }[];
+          };
+        }
+      ).__excelLog;
+      return JSON.parse(
+        JSON.stringify({
+          ...l,
+          charts: l.charts.map((c) => ({
+            type: c.type,
+            by: c.by,
+            title: c.title.text,
+            x: c.axes.categoryAxis.scaleType,
+            y: c.axes.valueAxis.scaleType,
+            position: c.position,
+            series: c.list.map((s) => ({ name: s.name, x: s.x, y: s.y })),
+          })),
+        }),
+      );
     });
     expect(log.formulas['C4']).toEqual([['=DRIFT.RESISTIVITY(B4:B34,"B",300)']]);
     expect(log.formulas['B2:C3'][1]).toEqual(['Doping (cm⁻³)', 'Resistivity ρ (Ω·cm)']);
     expect(log.formulas['B4:B34']).toHaveLength(31);
-    expect(log.numberFormats).toEqual(expect.arrayContaining([['B4:B34', '0.00E+00'], ['C4:C34', '0.000E+00']]));
-    expect(log.charts).toEqual([{ type: 'XYScatterLines', by: 'Columns', title: 'Resistivity ρ (Ω·cm)', x: 'Logarithmic', y: 'Logarithmic', position: 'E2', series: [{ name: 'Resistivity ρ', x: 'B4:B34', y: 'C4:C34' }] }]);
+    expect(log.numberFormats).toEqual(
+      expect.arrayContaining([
+        ['B4:B34', '0.00E+00'],
+        ['C4:C34', '0.000E+00'],
+      ]),
+    );
+    expect(log.charts).toEqual([
+      {
+        type: 'XYScatterLines',
+        by: 'Columns',
+        title: 'Resistivity ρ (Ω·cm)',
+        x: 'Logarithmic',
+        y: 'Logarithmic',
+        position: 'E2',
+        series: [{ name: 'Resistivity ρ', x: 'B4:B34', y: 'C4:C34' }],
+      },
+    ]);
   });
 });

@@ -13,7 +13,14 @@ import type { CellBlock } from '../../src/taskpane/port';
 
 /** Builds a mock Excel whose worksheets/ranges/charts record every call into `log`. */
 function mockExcel(rangeData: Record<string, unknown> = {}) {
-  const log: { getItem: string[]; getRange: string[]; chartAdd: unknown[][]; seriesAdd: string[]; position: unknown[]; conditional: string[] } = {
+  const log: {
+    getItem: string[];
+    getRange: string[];
+    chartAdd: unknown[][];
+    seriesAdd: string[];
+    position: unknown[];
+    conditional: string[];
+  } = {
     getItem: [],
     getRange: [],
     chartAdd: [],
@@ -21,7 +28,18 @@ function mockExcel(rangeData: Record<string, unknown> = {}) {
     position: [],
     conditional: [],
   };
-  const makeSeries = () => ({ name: '', x: null as unknown, y: null as unknown, format: { line: { weight: 0 } }, setXAxisValues(r: unknown) { this.x = r; }, setValues(r: unknown) { this.y = r; } });
+  const makeSeries = () => ({
+    name: '',
+    x: null as unknown,
+    y: null as unknown,
+    format: { line: { weight: 0 } },
+    setXAxisValues(r: unknown) {
+      this.x = r;
+    },
+    setValues(r: unknown) {
+      this.y = r;
+    },
+  });
   const firstSeries = makeSeries();
   const addedSeries: ReturnType<typeof makeSeries>[] = [];
   const conditionalFormat = { cellValue: { rule: null as unknown, format: { fill: { color: '' }, font: { color: '' } } } };
@@ -91,7 +109,13 @@ function mockExcel(rangeData: Record<string, unknown> = {}) {
   return { excel, log, firstSeries, addedSeries, conditionalFormat };
 }
 
-const block = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({ sheet: 'Lots', row, column, rowCount, columnCount });
+const block = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({
+  sheet: 'Lots',
+  row,
+  column,
+  rowCount,
+  columnCount,
+});
 
 describe('createExcelPort', () => {
   it('selection() loads the selected range and its sheet name, 0-based', async () => {
@@ -101,15 +125,30 @@ describe('createExcelPort', () => {
 
   it('read() asks for the block by address and maps empty cells, errors and formulas', async () => {
     const { excel, log } = mockExcel({
-      values: [[1e15, '', '#VALUE!'], ['p', 12.5, true]],
-      formulas: [[1e15, '', '=DRIFT.RESISTIVITY(A1,"B")'], ['p', '=B1*2', true]],
-      valueTypes: [['Double', 'Empty', 'Error'], ['String', 'Double', 'Boolean']],
+      values: [
+        [1e15, '', '#VALUE!'],
+        ['p', 12.5, true],
+      ],
+      formulas: [
+        [1e15, '', '=DRIFT.RESISTIVITY(A1,"B")'],
+        ['p', '=B1*2', true],
+      ],
+      valueTypes: [
+        ['Double', 'Empty', 'Error'],
+        ['String', 'Double', 'Boolean'],
+      ],
     });
     const contents = await createExcelPort(excel).read(block(1, 0, 2, 3));
     expect(log.getItem).toEqual(['Lots']);
     expect(log.getRange).toEqual(['A2:C3']);
-    expect(contents.values).toEqual([[1e15, null, { error: '#VALUE!' }], ['p', 12.5, true]]);
-    expect(contents.formulas).toEqual([[null, null, '=DRIFT.RESISTIVITY(A1,"B")'], [null, '=B1*2', null]]);
+    expect(contents.values).toEqual([
+      [1e15, null, { error: '#VALUE!' }],
+      ['p', 12.5, true],
+    ]);
+    expect(contents.formulas).toEqual([
+      [null, null, '=DRIFT.RESISTIVITY(A1,"B")'],
+      [null, '=B1*2', null],
+    ]);
   });
 
   it('write() sets the formulas of exactly the block, empty cells as ""', async () => {
@@ -122,11 +161,19 @@ describe('createExcelPort', () => {
   it('write() of a row whose tuple formula spills right leaves the spill cells empty ("") and the formulas after them in place', async () => {
     // The certificate check's model spread: one DOPINGSPREAD per end, two null cells for its spill, then the next column's formula.
     const { excel, log } = mockExcel();
-    const header = ['Doping at ρmax over models: lowest (cm⁻³)', 'Doping at ρmax over models: highest (cm⁻³)', 'Doping at ρmax over models: relative spread (highest/lowest − 1)', 'Pass/fail'];
+    const header = [
+      'Doping at ρmax over models: lowest (cm⁻³)',
+      'Doping at ρmax over models: highest (cm⁻³)',
+      'Doping at ρmax over models: relative spread (highest/lowest − 1)',
+      'Pass/fail',
+    ];
     const row = ['=DRIFT.DOPINGSPREAD(F3,L3,$AB$5)', null, null, '=IF(O3="yes","PASS","FAIL")'];
     await createExcelPort(excel).write(block(1, 15, 2, 4), [header, row]);
     expect(log.getRange).toEqual(['P2:S3']);
-    expect(excel.context.workbook.worksheets.sheet.range.formulas).toEqual([header, ['=DRIFT.DOPINGSPREAD(F3,L3,$AB$5)', '', '', '=IF(O3="yes","PASS","FAIL")']]);
+    expect(excel.context.workbook.worksheets.sheet.range.formulas).toEqual([
+      header,
+      ['=DRIFT.DOPINGSPREAD(F3,L3,$AB$5)', '', '', '=IF(O3="yes","PASS","FAIL")'],
+    ]);
   });
 
   it('write() of a spilled formula touches only its anchor cell', async () => {
@@ -146,7 +193,10 @@ describe('createExcelPort', () => {
     await createExcelPort(excel).style({ block: block(0, 0, 2, 2), bold: true, numberFormat: '0.00E+00' });
     const range = excel.context.workbook.worksheets.sheet.range;
     expect(range.format.font.bold).toBe(true);
-    expect(range.numberFormat).toEqual([['0.00E+00', '0.00E+00'], ['0.00E+00', '0.00E+00']]);
+    expect(range.numberFormat).toEqual([
+      ['0.00E+00', '0.00E+00'],
+      ['0.00E+00', '0.00E+00'],
+    ]);
   });
 
   it('addChart() adds an XY chart with explicit series ranges, titles and log axes', async () => {
@@ -191,18 +241,31 @@ describe('createExcelPort', () => {
         { name: 'masetti', x: block(2, 0, 5, 1), y: block(2, 2, 5, 1) },
         { name: 'arora', x: block(2, 0, 5, 1), y: block(2, 3, 5, 1) },
       ],
-      xTitle: 'doping (cm⁻³)', yTitle: 'ρ (Ω·cm)', xLogarithmic: true, yLogarithmic: true, anchor: block(0, 5),
+      xTitle: 'doping (cm⁻³)',
+      yTitle: 'ρ (Ω·cm)',
+      xLogarithmic: true,
+      yLogarithmic: true,
+      anchor: block(0, 5),
     });
     expect(firstSeries.name).toBe('f723-anchored');
     expect(firstSeries.format.line.weight).toBe(EMPHASISED_LINE_POINTS);
-    expect(addedSeries.map((s) => [s.name, s.format.line.weight])).toEqual([['masetti', 0], ['arora', 0]]);
+    expect(addedSeries.map((s) => [s.name, s.format.line.weight])).toEqual([
+      ['masetti', 0],
+      ['arora', 0],
+    ]);
   });
 
   it('addChart() keeps a linear axis linear', async () => {
     const { excel } = mockExcel();
     await createExcelPort(excel).addChart({
-      sheet: 'Lots', title: 'ni', series: [{ name: 'ni', x: block(1, 0, 3, 1), y: block(1, 1, 3, 1) }],
-      xTitle: 'T (K)', yTitle: 'ni (cm⁻³)', xLogarithmic: false, yLogarithmic: true, anchor: block(0, 3),
+      sheet: 'Lots',
+      title: 'ni',
+      series: [{ name: 'ni', x: block(1, 0, 3, 1), y: block(1, 1, 3, 1) }],
+      xTitle: 'T (K)',
+      yTitle: 'ni (cm⁻³)',
+      xLogarithmic: false,
+      yLogarithmic: true,
+      anchor: block(0, 3),
     });
     const chart = excel.context.workbook.worksheets.sheet.charts.chart;
     expect(chart.axes.categoryAxis.scaleType).toBe('Linear');
@@ -213,8 +276,21 @@ describe('createExcelPort', () => {
     const { excel, log } = mockExcel();
     const port = createExcelPort(excel, (set, version) => !(set === 'ExcelApi' && Number(version) >= 1.6));
     const series = [{ name: 'ni', x: block(1, 0, 3, 1), y: block(1, 1, 3, 1) }];
-    await expect(port.addChart({ sheet: 'Lots', title: 'ni', series, xTitle: 'x', yTitle: 'y', xLogarithmic: false, yLogarithmic: true, anchor: block(0, 3) })).rejects.toThrow(/needs ExcelApi 1\.7/);
-    await expect(port.addHighlight({ block: block(1, 7, 10, 1), text: 'FAIL', fill: '#f8d7da', fontColor: '#6b0f1a' })).rejects.toThrow(/needs ExcelApi 1\.6/);
+    await expect(
+      port.addChart({
+        sheet: 'Lots',
+        title: 'ni',
+        series,
+        xTitle: 'x',
+        yTitle: 'y',
+        xLogarithmic: false,
+        yLogarithmic: true,
+        anchor: block(0, 3),
+      }),
+    ).rejects.toThrow(/needs ExcelApi 1\.7/);
+    await expect(port.addHighlight({ block: block(1, 7, 10, 1), text: 'FAIL', fill: '#f8d7da', fontColor: '#6b0f1a' })).rejects.toThrow(
+      /needs ExcelApi 1\.6/,
+    );
     expect(log.chartAdd).toEqual([]);
     expect(log.conditional).toEqual([]);
   });

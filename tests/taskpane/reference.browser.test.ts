@@ -35,7 +35,10 @@ describe('the Function reference in Chromium', () => {
     const search = panel.getByRole('searchbox', { name: 'Search functions' });
     await search.fill('sheet res');
     expect(await panel.locator('#reference-count').textContent()).toMatch(/^\d+ of \d+ functions match$/);
-    await panel.getByRole('option', { name: /DRIFT\.SHEETRES\b/ }).first().click();
+    await panel
+      .getByRole('option', { name: /DRIFT\.SHEETRES\b/ })
+      .first()
+      .click();
     const sheetRes = findFunction('SHEETRES')!;
     const details = panel.locator('#reference-details');
     expect(await details.locator('h3').textContent()).toBe('DRIFT.SHEETRES');
@@ -46,13 +49,18 @@ describe('the Function reference in Chromium', () => {
 
     // A model-based entry cites its models, with validity, from the registry.
     await search.fill('DRIFT.DOPING');
-    await panel.getByRole('option', { name: /^DRIFT\.DOPING\b/ }).first().click();
+    await panel
+      .getByRole('option', { name: /^DRIFT\.DOPING\b/ })
+      .first()
+      .click();
     const doping = findFunction('DOPING')!;
     const cited = MODEL_REGISTRY.filter((entry) => doping.models.includes(entry.code));
     expect(cited.length).toBeGreaterThan(0);
     const modelItems = await details.locator('.dc-models li').allTextContents();
     expect(modelItems).toHaveLength(doping.models.length);
-    cited.forEach((entry) => expect(modelItems.some((item) => item.includes(entry.citation) && item.includes(`Valid: ${entry.validity}`))).toBe(true));
+    cited.forEach((entry) =>
+      expect(modelItems.some((item) => item.includes(entry.citation) && item.includes(`Valid: ${entry.validity}`))).toBe(true),
+    );
     await saveScreenshot(page, 'reference-350-light');
 
     // Insert at D4: labelled argument rows, then the formula referencing them.

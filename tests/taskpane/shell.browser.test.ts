@@ -75,7 +75,11 @@ describe('the pane shell in Chromium', () => {
 
   it.each([
     ['prefers-color-scheme', { colorScheme: 'light' as const }, { colorScheme: 'dark' as const }],
-    ['the Office theme', { officeBackground: '#ffffff', colorScheme: 'dark' as const }, { officeBackground: '#262626', colorScheme: 'light' as const }],
+    [
+      'the Office theme',
+      { officeBackground: '#ffffff', colorScheme: 'dark' as const },
+      { officeBackground: '#262626', colorScheme: 'light' as const },
+    ],
   ])('light and dark differ and both keep text readable (%s)', async (_source, light, dark) => {
     const lightPage = await harness.openPane(light);
     const darkPage = await harness.openPane(dark);

@@ -124,7 +124,9 @@ describe('prose refuses layouts a reader could misread', () => {
   });
 
   it('refuses a line break inside a code span', () => {
-    expect(refusal(() => prose(tagged('Run `npm run\n  docs` now.')))).toMatch(/a line break falls inside a code span \(before "docs` now."\)/);
+    expect(refusal(() => prose(tagged('Run `npm run\n  docs` now.')))).toMatch(
+      /a line break falls inside a code span \(before "docs` now."\)/,
+    );
   });
 
   it('refuses \\n and \\r escapes and carriage returns, line breaks the source would hide', () => {

@@ -17,7 +17,6 @@ import {
   F723_ANCHOR_TEMPERATURE,
 } from '../../physics';
 
-
 /** Points per decade of the sweep (a model's deviation changes little within a tenth of a decade). */
 const PER_DECADE = 10;
 

@@ -157,10 +157,12 @@ ${(spec.parameters as readonly ParameterSpec[]).map((p) => parameterRow(p, linke
 function blankCellNote(spec: FunctionSpec): string {
   const names = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.zeroIsBlank).map((p) => p.name);
   if (names.length === 0) return '';
-  return `\n<p>Blank cells: some Excel versions pass an empty cell as 0. In ` +
+  return (
+    `\n<p>Blank cells: some Excel versions pass an empty cell as 0. In ` +
     `${escapeHtml(names.join(', '))}, where 0 is never a valid value, a 0 is read as a blank cell, so an ` +
     `optional argument takes its default and a required one reports that it is missing. Elsewhere 0 is a ` +
-    `value.</p>`;
+    `value.</p>`
+  );
 }
 
 function resultBlock(spec: FunctionSpec): string {
@@ -179,8 +181,10 @@ function resultBlock(spec: FunctionSpec): string {
             'functions do; a bad element gets an error with a message, and the other elements still ' +
             'compute.';
   const reducing = (spec.parameters as readonly ParameterSpec[]).filter((p) => p.reduce).map((p) => p.name);
-  const whole = reducing.length === 0 ? '' : ` ${reducing.join(', ')} is taken whole, as one argument: a ` +
-    `range there is reduced to one value, not broadcast.`;
+  const whole =
+    reducing.length === 0
+      ? ''
+      : ` ${reducing.join(', ')} is taken whole, as one argument: a ` + `range there is reduced to one value, not broadcast.`;
   return `<p>${escapeHtml(spec.result.description)}${unit}. ${escapeHtml(shape + whole)}</p>`;
 }
 
@@ -219,13 +223,17 @@ function modelsBlock(spec: FunctionSpec, lookup: ModelLookup): string {
       info = lookup(code);
     } catch (e) {
       // A page that cites a model the registry lacks must not be built.
-      throw new Error(`help page for ${qualifiedName(spec)}: model code "${code}" is not in the model ` +
-        `registry (${e instanceof Error ? e.message : String(e)})`);
+      throw new Error(
+        `help page for ${qualifiedName(spec)}: model code "${code}" is not in the model ` +
+          `registry (${e instanceof Error ? e.message : String(e)})`,
+      );
     }
     return modelBlock(info);
   });
-  return `<h2>Models used</h2>\n<p>Model codes are typed in the <code>model</code> argument where the ` +
-    `function has one; the first listed is the default.</p>\n${blocks.join('\n')}`;
+  return (
+    `<h2>Models used</h2>\n<p>Model codes are typed in the <code>model</code> argument where the ` +
+    `function has one; the first listed is the default.</p>\n${blocks.join('\n')}`
+  );
 }
 
 /**
@@ -273,13 +281,11 @@ const INDEX_USAGE = prose`Type a function in a cell as <code>=DRIFT.NAME(…)</c
 
 export function renderHelpIndex(catalog: readonly FunctionSpec[]): string {
   const rows = catalog
-    .map(
-      (spec) => {
-        const link = `<a href="${helpFileName(spec.name)}"><code>${escapeHtml(qualifiedName(spec))}</code></a>`;
-        const unit = spec.result.unit === null ? '—' : escapeHtml(spec.result.unit);
-        return `<tr><th scope="row">${link}</th><td>${escapeHtml(spec.summary)}</td><td>${unit}</td></tr>`;
-      },
-    )
+    .map((spec) => {
+      const link = `<a href="${helpFileName(spec.name)}"><code>${escapeHtml(qualifiedName(spec))}</code></a>`;
+      const unit = spec.result.unit === null ? '—' : escapeHtml(spec.result.unit);
+      return `<tr><th scope="row">${link}</th><td>${escapeHtml(spec.summary)}</td><td>${unit}</td></tr>`;
+    })
     .join('\n');
   const body = `<main id="content">
 <h1>${PRODUCT} functions</h1>

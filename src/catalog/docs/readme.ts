@@ -24,9 +24,7 @@ function cell(text: string): string {
 }
 
 export function renderFunctionTable(catalog: readonly FunctionSpec[]): string {
-  const rows = catalog.map(
-    (spec) => `| \`${signature(spec)}\` | ${spec.result.unit ?? '—'} | ${cell(spec.summary)} |`,
-  );
+  const rows = catalog.map((spec) => `| \`${signature(spec)}\` | ${spec.result.unit ?? '—'} | ${cell(spec.summary)} |`);
   return ['| Function | Result unit | What it gives |', '| --- | --- | --- |', ...rows].join('\n');
 }
 

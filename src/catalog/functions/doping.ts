@@ -28,9 +28,9 @@ function windowEnd(name: string, description: string, minExclusive: boolean): Pa
     description,
     details:
       'Where several dopant densities give the same resistivity (at low temperature, freeze-out makes ρ ' +
-        'rise and fall again with doping; near intrinsic, light p-type doping exceeds the intrinsic ρ), ' +
-        'the result is an error listing them. doping_min and doping_max (ends included) choose the one ' +
-        'meant: exactly one solution between them is returned. Blank: no bound.',
+      'rise and fall again with doping; near intrinsic, light p-type doping exceeds the intrinsic ρ), ' +
+      'the result is an error listing them. doping_min and doping_max (ends included) choose the one ' +
+      'meant: exactly one solution between them is returned. Blank: no bound.',
     optional: true,
     zeroIsBlank: present.zeroIsBlank,
     parse: (value) => (isBlank(value) ? undefined : present.parse(value)),
@@ -38,11 +38,17 @@ function windowEnd(name: string, description: string, minExclusive: boolean): Pa
 }
 
 /** Lowest dopant density to accept, for picking one of several solutions. */
-export const dopingMin = windowEnd(DOPING_WINDOW_NAMES.min, 'Lowest dopant density accepted in cm⁻³, to ' +
-  'pick one where several give the resistivity; blank: no bound.', false);
+export const dopingMin = windowEnd(
+  DOPING_WINDOW_NAMES.min,
+  'Lowest dopant density accepted in cm⁻³, to ' + 'pick one where several give the resistivity; blank: no bound.',
+  false,
+);
 /** Highest dopant density to accept, for picking one of several solutions. */
-export const dopingMax = windowEnd(DOPING_WINDOW_NAMES.max, 'Highest dopant density accepted in cm⁻³, to ' +
-  'pick one where several give the resistivity; blank: no bound.', true);
+export const dopingMax = windowEnd(
+  DOPING_WINDOW_NAMES.max,
+  'Highest dopant density accepted in cm⁻³, to ' + 'pick one where several give the resistivity; blank: no bound.',
+  true,
+);
 
 /** The window the two optional arguments give. */
 export function dopingWindowOf(min: number | undefined, max: number | undefined): DensityWindow {

@@ -7,8 +7,14 @@ import { DOPING_WINDOW_NAMES, dopingMax, dopingMin, dopingWindowOf } from './dop
 import { prose } from '../../text/prose';
 
 function resistivityBound(name: string, what: string) {
-  return requiredNumber({ name, unit: 'Ω·cm', description: prose`${what} of the certificate's window, in Ω·cm,
-    > 0.`, min: 0, minExclusive: true });
+  return requiredNumber({
+    name,
+    unit: 'Ω·cm',
+    description: prose`${what} of the certificate's window, in Ω·cm,
+    > 0.`,
+    min: 0,
+    minExclusive: true,
+  });
 }
 
 export const DOPINGRANGE = tupleFunction({

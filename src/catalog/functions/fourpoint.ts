@@ -33,8 +33,10 @@ export const FOURPOINT = elementwise({
     probeCurrent,
     length('spacing_um', 'Probe spacing s (equal for all three gaps)'),
     optionalLength('thickness_um', 'Sample thickness t in µm, > 0; blank means a semi-infinite sample.'),
-    optionalLength('diameter_um', 'Diameter d of a circular slice probed at its centre, ≥ 3 spacings; blank ' +
-      'means no lateral edge. Needs thickness_um.'),
+    optionalLength(
+      'diameter_um',
+      'Diameter d of a circular slice probed at its centre, ≥ 3 spacings; blank ' + 'means no lateral edge. Needs thickness_um.',
+    ),
   ] as const,
   examples: [
     { formula: '=DRIFT.FOURPOINT(0.0159,0.001,1000)', note: 'semi-infinite ingot end, 1 mm probe: about 10 Ω·cm' },

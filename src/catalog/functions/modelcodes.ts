@@ -46,8 +46,11 @@ export const MODELCODES = rowFunction({
   parameters: [modelQuantity, material, anyDopant] as const,
   examples: [
     { formula: '=DRIFT.MODELCODES("resistivity","Si","B")', note: listed('resistivity', 'Si', 'B') },
-    { formula: '=DRIFT.MODELCODES("resistivity",,"Ga")', note: prose`${listed('resistivity', 'Si', 'Ga')}: no
-      astm-f723, which does not cover gallium` },
+    {
+      formula: '=DRIFT.MODELCODES("resistivity",,"Ga")',
+      note: prose`${listed('resistivity', 'Si', 'Ga')}: no
+      astm-f723, which does not cover gallium`,
+    },
     {
       formula: '=DRIFT.RESISTIVITY(1e15,"B",296.15,DRIFT.MODELCODES("resistivity","Si","B"))',
       note: '1e15 cm⁻³ boron at 23 °C under every silicon resistivity model, one value per model',

@@ -5,7 +5,8 @@ import { tupleFunction } from '../types';
 import { DOPING_WINDOW_NAMES, dopingMax, dopingMin, dopingWindowOf } from './doping';
 import { prose } from '../../text/prose';
 
-const WHAT_SPREAD_IS = `The spread is how far the published fits disagree for this sample, not a ` +
+const WHAT_SPREAD_IS =
+  `The spread is how far the published fits disagree for this sample, not a ` +
   `measurement uncertainty: fits made against the same data agree closely and can share a bias, and a ` +
   `resistivity measured on a wafer has its own tolerance besides. The models are every resistivity model ` +
   `of the material (see DRIFT.MODELS()): in silicon f723-anchored, masetti, arora, caughey-thomas, ` +

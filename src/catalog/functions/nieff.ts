@@ -1,9 +1,4 @@
-import {
-  BANDGAP_NARROWING_MODEL_CODES,
-  effectiveIntrinsicDensity,
-  resolveBandgapNarrowingModel,
-  resolveDopant,
-} from '../../physics';
+import { BANDGAP_NARROWING_MODEL_CODES, effectiveIntrinsicDensity, resolveBandgapNarrowingModel, resolveDopant } from '../../physics';
 import { dopant, doping, material, temperature } from '../common';
 import { codeParameter } from '../parameters';
 import { elementwise } from '../types';

@@ -58,10 +58,5 @@ export const TCR = elementwise({
   ],
   models: RESISTIVITY_MODELS,
   compute: (density, dopantCode, temperatureK, model, materialValue) =>
-    PPM *
-    resistivityTemperatureCoefficient(
-      sampleOf(materialValue, temperatureK, dopantCode, density, 0),
-      model,
-      TEMPERATURE_RANGE_K,
-    ),
+    PPM * resistivityTemperatureCoefficient(sampleOf(materialValue, temperatureK, dopantCode, density, 0), model, TEMPERATURE_RANGE_K),
 });

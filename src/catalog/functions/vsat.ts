@@ -43,11 +43,12 @@ function si(carrier: Carrier, temperatureK: number): string {
 export const SILICON_HOLE_VSAT_300K_TEXT = si('hole', 300);
 
 /** Canali's 300 K field exponents, for VELOCITY's help text. */
-export const SILICON_FIELD_EXPONENTS_TEXT = `β = ${canaliExponentAt300K('electron').toFixed(3)} (electrons) ` +
-  `and ${canaliExponentAt300K('hole').toFixed(3)} (holes)`;
+export const SILICON_FIELD_EXPONENTS_TEXT =
+  `β = ${canaliExponentAt300K('electron').toFixed(3)} (electrons) ` + `and ${canaliExponentAt300K('hole').toFixed(3)} (holes)`;
 
 /** The temperatures at which Si saturation velocities are given, for help texts. */
-export const SILICON_HIGH_FIELD_RANGE_TEXT = `electrons ` +
+export const SILICON_HIGH_FIELD_RANGE_TEXT =
+  `electrons ` +
   `${SI_ELECTRON.evaluationRange.min}–${SI_ELECTRON.evaluationRange.max} K, holes ` +
   `${SI_HOLE.evaluationRange.min}–${SI_HOLE.evaluationRange.max} K`;
 
@@ -76,6 +77,5 @@ export const VSAT = elementwise({
     { formula: '=DRIFT.VSAT(A2:A10,"electron","Ge")', note: 'a temperature column for Ge' },
   ],
   models: SATURATION_VELOCITY_MODELS,
-  compute: (temperatureK, carrierValue, materialValue) =>
-    saturationVelocity(materialValue.code, carrierValue, temperatureK),
+  compute: (temperatureK, carrierValue, materialValue) => saturationVelocity(materialValue.code, carrierValue, temperatureK),
 });

@@ -4,12 +4,7 @@
  */
 
 export { bandgap } from './bandgap';
-export {
-  conductionBandDensity,
-  valenceBandDensity,
-  logConductionBandDensity,
-  logValenceBandDensity,
-} from './densityOfStates';
+export { conductionBandDensity, valenceBandDensity, logConductionBandDensity, logValenceBandDensity } from './densityOfStates';
 export {
   INTRINSIC_MODEL_CODES,
   DOS_INTRINSIC_MODEL,
@@ -27,13 +22,7 @@ export {
   type CarrierStatistics,
   type LevelOccupancy,
 } from './statistics';
-export {
-  fermiDiracIntegral,
-  fermiDiracHalf,
-  fermiDiracMinusHalf,
-  fermiDiracOverBoltzmann,
-  type FermiDiracOrder,
-} from './fermiDirac';
+export { fermiDiracIntegral, fermiDiracHalf, fermiDiracMinusHalf, fermiDiracOverBoltzmann, type FermiDiracOrder } from './fermiDirac';
 export {
   BANDGAP_NARROWING_MODELS,
   BANDGAP_NARROWING_MODEL_CODES,

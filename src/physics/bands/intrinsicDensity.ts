@@ -61,18 +61,14 @@ export function resolveIntrinsicModel(material: Material, model?: string): strin
           `${material.name} supports: ${codes.join(', ')}`,
       );
     }
-    throw new PhysicsDomainError(
-      `unknown intrinsic density model '${model}' for ${material.name}: allowed models are ${codes.join(', ')}`,
-    );
+    throw new PhysicsDomainError(`unknown intrinsic density model '${model}' for ${material.name}: allowed models are ${codes.join(', ')}`);
   }
   return found;
 }
 
 function logFit(fit: IntrinsicDensityFit, temperature: number): number {
   return (
-    Math.log(fit.prefactor) +
-    fit.exponent * Math.log(temperature / fit.referenceTemperature) -
-    fit.activationTemperature / temperature
+    Math.log(fit.prefactor) + fit.exponent * Math.log(temperature / fit.referenceTemperature) - fit.activationTemperature / temperature
   );
 }
 
@@ -90,8 +86,7 @@ export function logIntrinsicDensity(material: Material, temperature: number, mod
   const code = resolveIntrinsicModel(material, model);
   if (code === DOS_INTRINSIC_MODEL) {
     const kT = thermalVoltage(temperature);
-    const logEffectiveDensity =
-      0.5 * (logConductionBandDensity(material, temperature) + logValenceBandDensity(material, temperature));
+    const logEffectiveDensity = 0.5 * (logConductionBandDensity(material, temperature) + logValenceBandDensity(material, temperature));
     return logEffectiveDensity - bandgap(material, temperature) / (2 * kT);
   }
   const fit = material.intrinsicFits.find((candidate) => candidate.code === code) as IntrinsicDensityFit;

@@ -15,9 +15,7 @@ import { FERMI_DIRAC_TABLE_DEGREE, SERIES_LIMIT, SOMMERFELD_LIMIT } from './ferm
 import { parameterText as t } from '../parameterText';
 
 const NI = 'intrinsic density ni';
-const [phosphorus, boron] = ['P', 'B'].map(
-  (symbol) => SILICON.dopants.find((dopant) => dopant.symbol === symbol)!,
-);
+const [phosphorus, boron] = ['P', 'B'].map((symbol) => SILICON.dopants.find((dopant) => dopant.symbol === symbol)!);
 
 /** Every model owned by the band-structure part of the core, lower-case codes. */
 export const BAND_MODELS: readonly ModelInfo[] = [

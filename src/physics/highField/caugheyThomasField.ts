@@ -21,8 +21,7 @@ export const CAUGHEY_THOMAS_FIELD_SOURCE = {
     'D. M. Caughey, R. E. Thomas, Proc. IEEE 55, 2192 (1967): v = μ0E/(1 + (μ0E/v_sat)^β)^(1/β); ' +
     `β = ${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.electron)} for electrons, ` +
     `${t(CAUGHEY_THOMAS_FIELD_EXPONENTS.hole)} for holes in Si at 300 K (from memory)`,
-  validity:
-    'fitted to silicon at 300 K; used with material- and temperature-dependent μ0, v_sat and β from the tables of each material',
+  validity: 'fitted to silicon at 300 K; used with material- and temperature-dependent μ0, v_sat and β from the tables of each material',
 } as const;
 
 /**
@@ -40,12 +39,7 @@ export const CAUGHEY_THOMAS_FIELD_SOURCE = {
  * @throws PhysicsDomainError for non-positive or non-finite μ0, v_sat, β or a non-finite field
  * @example caugheyThomasVelocity(1e4, 1400, 1.07e7, 1.109) // ≈ 6.5e6 cm/s
  */
-export function caugheyThomasVelocity(
-  field: number,
-  lowFieldMobility: number,
-  saturationVelocity: number,
-  fieldExponent: number,
-): number {
+export function caugheyThomasVelocity(field: number, lowFieldMobility: number, saturationVelocity: number, fieldExponent: number): number {
   for (const [name, value] of [
     ['low-field mobility', lowFieldMobility],
     ['saturation velocity', saturationVelocity],

@@ -49,8 +49,7 @@ export const KHAN_COOPER_SILICON_CARBIDE: MaterialHighFieldTables = {
     },
   },
   hole: {
-    missing:
-      'no published hole saturation velocity for 4H-SiC in this release: for material 4H-SiC only the electron carrier is tabulated',
+    missing: 'no published hole saturation velocity for 4H-SiC in this release: for material 4H-SiC only the electron carrier is tabulated',
   },
   limitations: 'Electron transport in 4H-SiC is anisotropic; the value is for fields perpendicular to the c axis.',
 };

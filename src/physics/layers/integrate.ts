@@ -113,11 +113,7 @@ function kronrodPiece(f: (x: number) => number, lo: number, hi: number): Piece {
  *   tolerance not met within maxPieces (the message gives the estimate reached)
  * @example integrate(Math.sin, [0, Math.PI]).value // ≈ 2.00000000000000 (to about 1e-15)
  */
-export function integrate(
-  f: (x: number) => number,
-  breakpoints: readonly number[],
-  options: QuadratureOptions = {},
-): QuadratureResult {
+export function integrate(f: (x: number) => number, breakpoints: readonly number[], options: QuadratureOptions = {}): QuadratureResult {
   const relativeTolerance = options.relativeTolerance ?? DEFAULTS.relativeTolerance;
   const absoluteTolerance = options.absoluteTolerance ?? DEFAULTS.absoluteTolerance;
   const maxPieces = options.maxPieces ?? DEFAULTS.maxPieces;
@@ -143,9 +139,7 @@ export function integrate(
   let { value, error } = totals();
   while (error > Math.max(absoluteTolerance, relativeTolerance * Math.abs(value))) {
     if (pieces.length + 1 > maxPieces) {
-      throw new PhysicsDomainError(
-        `integrate: tolerance not met within ${maxPieces} pieces (integral ${value}, estimated error ${error})`,
-      );
+      throw new PhysicsDomainError(`integrate: tolerance not met within ${maxPieces} pieces (integral ${value}, estimated error ${error})`);
     }
     let worst = 0;
     for (let i = 1; i < pieces.length; i++) if (pieces[i].error > pieces[worst].error) worst = i;

@@ -10,11 +10,11 @@ import { prose } from '../../text/prose';
 
 const IRVIN_CITATION =
   'J. C. Irvin, "Resistivity of bulk silicon and of diffused layers in silicon", Bell Syst. Tech. J. 41, ' +
-    '387–410 (1962) (citation from memory)';
+  '387–410 (1962) (citation from memory)';
 
 const AS_DIFFUSED =
   'Ideal as-diffused profile: no concentration-dependent diffusion, no kink-and-tail, no surface pile-up or ' +
-    'depletion; Ns up to about solid solubility (≈ 1e20–5e20 cm⁻³).';
+  'depletion; Ns up to about solid solubility (≈ 1e20–5e20 cm⁻³).';
 
 /** Every model owned by the layer part of the core, lower-case codes. */
 export const LAYER_MODELS: readonly ModelInfo[] = [
@@ -25,19 +25,16 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     citation: IRVIN_CITATION,
     validity:
       'Layers thicker than a few Debye lengths; 20–1000 K as the equilibrium and mobility models; ' +
-        'Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about ' +
-        '1e19 cm⁻³ results are approximate.',
+      'Fermi–Dirac carrier statistics; no band-gap narrowing in the equilibrium solve, so above about ' +
+      '1e19 cm⁻³ results are approximate.',
     notes:
       'Each depth is treated as a uniform sample of the layer dopant over the opposite-type background ' +
-        '(incomplete ionization, compensation, default mobility model), where Irvin used his bulk ' +
-        'resistivity curve and full ionization; depletion at the junction is ignored. Adaptive ' +
-        `Gauss–Kronrod (7/15) quadrature, target ${t(LAYER_INTEGRATION.relativeTolerance)} relative.`,
+      '(incomplete ionization, compensation, default mobility model), where Irvin used his bulk ' +
+      'resistivity curve and full ionization; depletion at the junction is ignored. Adaptive ' +
+      `Gauss–Kronrod (7/15) quadrature, target ${t(LAYER_INTEGRATION.relativeTolerance)} relative.`,
     equation: 'src/physics/layers/sheetResistance.ts',
     parameterTable: 'src/physics/layers/sheetResistance.ts',
-    tests: [
-      'tests/physics/reference/irvin-1962-layers.reference.test.ts',
-      'tests/physics/layers/sheetResistance.test.ts',
-    ],
+    tests: ['tests/physics/reference/irvin-1962-layers.reference.test.ts', 'tests/physics/layers/sheetResistance.test.ts'],
   },
   {
     code: 'gaussian',
@@ -72,12 +69,12 @@ export const LAYER_MODELS: readonly ModelInfo[] = [
     name: 'As-implanted Gaussian N(x) = Φ/(√(2π)ΔRp)·exp(−(x−Rp)²/2ΔRp²) from range Rp and straggle ΔRp',
     citation:
       'J. Lindhard, M. Scharff, H. E. Schiøtt, Mat. Fys. Medd. Dan. Vid. Selsk. 33, no. 14 (1963) (range ' +
-        'theory giving Rp and ΔRp; citation from memory); Gaussian form: common practice, no source',
+      'theory giving Rp and ΔRp; citation from memory); Gaussian form: common practice, no source',
     validity:
       'Amorphous-target approximation: no channelling tail, no skew (light ions such as B are skewed); as implanted, before any anneal.',
     notes:
       'Truncated at the surface: the part of the Gaussian above x = 0 is lost, not reflected. Assumed fully ' +
-        'electrically activated with no implant damage (as-implanted, fully activated, no damage).',
+      'electrically activated with no implant damage (as-implanted, fully activated, no damage).',
     equation: 'src/physics/layers/profiles.ts',
     parameterTable: 'src/physics/layers/profiles.ts',
     tests: ['tests/physics/layers/profiles.test.ts', 'tests/physics/layers/sheetResistance.test.ts'],

@@ -24,14 +24,7 @@ import { SILICON, type Material } from '../materials';
 import type { Sample } from '../sample';
 import { conductivity } from '../transport';
 import { integrate, type QuadratureResult } from './integrate';
-import {
-  characteristicLength,
-  diffusedDensity,
-  implantDensity,
-  implantPeakDensity,
-  implantSpan,
-  type ProfileCode,
-} from './profiles';
+import { characteristicLength, diffusedDensity, implantDensity, implantPeakDensity, implantSpan, type ProfileCode } from './profiles';
 
 /**
  * Accuracy settings of the layer integrals. The target (1e-6 relative) leaves

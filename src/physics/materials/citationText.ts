@@ -51,7 +51,9 @@ export function absolutePowerLawText(band: DensityOfStatesModel['conductionBand'
 export function intrinsicFitText(
   fit: Pick<IntrinsicDensityFit, 'prefactor' | 'referenceTemperature' | 'exponent' | 'activationTemperature'>,
 ): string {
-  return `ni = ` +
+  return (
+    `ni = ` +
     `${t(fit.prefactor)}·(T/${t(fit.referenceTemperature)})^${exponentText(fit.exponent)}·exp(−${t(fit.activationTemperature)}/T) ` +
-    `cm⁻³`;
+    `cm⁻³`
+  );
 }

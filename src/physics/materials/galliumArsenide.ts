@@ -63,7 +63,6 @@ export const SZE_NG_2007_GALLIUM_ARSENIDE_DENSITY_OF_STATES: DensityOfStatesMode
 /** Melting point of GaAs, 1238 °C (common practice, no source). */
 const GALLIUM_ARSENIDE_MELTING_POINT = 1511; // K
 
-
 /** 8 atoms per cubic cell, lattice constant 5.653 Å (common practice, no source). */
 const GALLIUM_ARSENIDE_ATOMIC_DENSITY = 4.42e22; // cm⁻³
 

@@ -53,8 +53,7 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
     `${densityOfStatesText(GERMANIUM_BANDS.valenceBand, 2)} cm⁻³ ` +
     `(from memory); T^${exponentText(GERMANIUM_BANDS.conductionBand.exponent)} law: constant effective masses ` +
     '(common practice, no source)',
-  validity:
-    '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is an estimate',
+  validity: '300 K values; the T^3/2 law ignores the temperature dependence of the masses, so ni away from 300 K is an estimate',
   equation: 'src/physics/bands/densityOfStates.ts',
   parameterTable: 'src/physics/materials/germanium.ts',
   tests: ['tests/physics/reference/sze-ng-2007-ge-gaas.reference.test.ts', 'tests/physics/materials/hosts.test.ts'],
@@ -62,7 +61,6 @@ export const SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES: DensityOfStatesModel = {
 
 /** Melting point of Ge, 938 °C: solid-state models end there (common practice, no source). */
 const GERMANIUM_MELTING_POINT = 1211; // K
-
 
 /** 8 atoms per cubic cell, lattice constant 5.658 Å (common practice, no source). */
 const GERMANIUM_ATOMIC_DENSITY = 4.42e22; // cm⁻³

@@ -46,9 +46,7 @@ export function resolveMaterial(code: string): Material {
   const wanted = String(code).trim().toLowerCase();
   const found = MATERIALS.find((material) => material.code.toLowerCase() === wanted);
   if (!found) {
-    throw new PhysicsDomainError(
-      `unknown material '${code}': allowed materials are ${MATERIAL_CODES.join(', ')}`,
-    );
+    throw new PhysicsDomainError(`unknown material '${code}': allowed materials are ${MATERIAL_CODES.join(', ')}`);
   }
   return found;
 }

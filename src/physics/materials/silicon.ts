@@ -21,8 +21,7 @@ export const THURMOND_1975_BANDGAP: VarshniBandgap = {
   code: 'thurmond',
   name: 'Thurmond (1975) Varshni-form band gap',
   ...THURMOND_CONSTANTS,
-  citation:
-    `C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); ${varshniText(THURMOND_CONSTANTS, 4)} (values from memory)`,
+  citation: `C. D. Thurmond, J. Electrochem. Soc. 122, 1133 (1975); ${varshniText(THURMOND_CONSTANTS, 4)} (values from memory)`,
   validity:
     'fitted to Si gap data from near 0 K to well above room temperature (from memory); the physics core ' +
     'evaluates it over 1–1687 K (between 1.17 and 0.59 eV there), the spreadsheet functions at 20–1000 K',
@@ -77,9 +76,11 @@ export const GREEN_1990_DENSITY_OF_STATES: DensityOfStatesModel = {
 const MISIAKOS_CONSTANTS = { prefactor: 5.29e19, referenceTemperature: 300, exponent: 2.54, activationTemperature: 6726 } as const;
 
 /** ni of a fit at its reference temperature, A·exp(−Θ/Tref), in the form help texts print (e.g. 9.70e9). */
-function atReference(
-  fit: { readonly prefactor: number; readonly referenceTemperature: number; readonly activationTemperature: number },
-): string {
+function atReference(fit: {
+  readonly prefactor: number;
+  readonly referenceTemperature: number;
+  readonly activationTemperature: number;
+}): string {
   return (fit.prefactor * Math.exp(-fit.activationTemperature / fit.referenceTemperature)).toExponential(2).replace('e+', 'e');
 }
 
@@ -115,7 +116,7 @@ export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
   citation:
     `A. B. Sproul, M. A. Green, J. Appl. Phys. 70, 846 (1991): ${intrinsicFitText(SPROUL_GREEN_CONSTANTS)}; ` +
     `these constants give ${atReference(SPROUL_GREEN_CONSTANTS)} cm⁻³ at 300 K, the paper quotes 1.00e10 ` +
-      `(fit constants and quote from memory)`,
+    `(fit constants and quote from memory)`,
   validity: 'measured 275–375 K; extrapolated outside',
   notes:
     'About 5% above the default at 300 K; Altermatt et al., J. Appl. Phys. 93, 1598 (2003) attribute the ' +
@@ -127,7 +128,6 @@ export const SPROUL_GREEN_1991_FIT: IntrinsicDensityFit = {
 
 /** Melting point of Si: solid-state models end there. */
 const SILICON_MELTING_POINT = 1687; // K (1414 °C), common practice, no source
-
 
 /** 8 atoms per cubic cell, lattice constant 5.431 Å (common practice, no source). */
 const SILICON_ATOMIC_DENSITY = 4.994e22; // cm⁻³

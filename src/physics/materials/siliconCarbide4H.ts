@@ -60,7 +60,6 @@ export const LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES: DensityOfSta
 /** 4H-SiC decomposes (sublimes) near 2830 °C instead of melting (common practice, no source). */
 const SILICON_CARBIDE_DECOMPOSITION = 3100; // K
 
-
 /** Si–C pairs per volume of the 4H cell, 9.64e22 atoms/cm³ (common practice, no source). */
 const SILICON_CARBIDE_ATOMIC_DENSITY = 9.64e22; // cm⁻³
 

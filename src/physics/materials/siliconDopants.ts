@@ -25,8 +25,7 @@
 
 import type { Dopant, IonizationParameters } from './types';
 
-const SZE_NG_2007 =
-  'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, Fig. 12 (from memory)';
+const SZE_NG_2007 = 'S. M. Sze, K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 1, Fig. 12 (from memory)';
 
 const ALTERMATT_VALIDITY =
   'fitted to Hall and resistivity data on single-species samples, about 1e14–1e20 cm⁻³, ' +
@@ -39,8 +38,7 @@ const PHOSPHORUS_IONIZATION: IonizationParameters = {
   screeningExponent: 2,
   localizationDensity: 6.0e18,
   localizationExponent: 2.3,
-  citation:
-    'P. P. Altermatt, A. Schenk, G. Heiser, J. Appl. Phys. 100, 113714 (2006), Si:P (parameter values from memory)',
+  citation: 'P. P. Altermatt, A. Schenk, G. Heiser, J. Appl. Phys. 100, 113714 (2006), Si:P (parameter values from memory)',
   validity: ALTERMATT_VALIDITY,
 };
 
@@ -63,17 +61,12 @@ const BORON_IONIZATION: IonizationParameters = {
   screeningExponent: 1.4,
   localizationDensity: 6.0e18,
   localizationExponent: 2.4,
-  citation:
-    'P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100, 113715 (2006), Si:B (parameter values from memory)',
+  citation: 'P. P. Altermatt, A. Schenk, B. Schmithüsen, G. Heiser, J. Appl. Phys. 100, 113715 (2006), Si:B (parameter values from memory)',
   validity: ALTERMATT_VALIDITY,
 };
 
 /** An unfitted species: own ΔE0, density dependence borrowed from a fitted one. */
-function borrowedIonization(
-  isolatedEnergy: number,
-  shape: IonizationParameters,
-  shapeSpecies: string,
-): IonizationParameters {
+function borrowedIonization(isolatedEnergy: number, shape: IonizationParameters, shapeSpecies: string): IonizationParameters {
   return {
     ...shape,
     isolatedEnergy,
@@ -91,8 +84,7 @@ const OWN_FIT = 'Masetti et al. (1983) fitted this species';
 const AS_PROXY_FOR_SB =
   'Masetti et al. (1983) fitted only As and P donors; Sb, like As, is a heavy group-V donor used for ' +
   'the same heavily doped layers, so the As fit is taken (assumption)';
-const B_PROXY =
-  'Masetti et al. (1983) fitted only B among acceptors; its fit is used for every acceptor (assumption)';
+const B_PROXY = 'Masetti et al. (1983) fitted only B among acceptors; its fit is used for every acceptor (assumption)';
 
 /** Dopants in the order users see them: acceptors, donors, then the generic donor and acceptor. */
 export const SILICON_DOPANTS: readonly Dopant[] = [

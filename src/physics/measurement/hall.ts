@@ -16,8 +16,9 @@ import { PhysicsDomainError } from '../errors';
 
 function checkHallCoefficient(value: number): void {
   if (!Number.isFinite(value) || value === 0) {
-    throw new PhysicsDomainError(`hall coefficient ${value} cm³/C is not allowed: it must be a finite ` +
-      `number other than 0 (its sign gives the carrier type)`);
+    throw new PhysicsDomainError(
+      `hall coefficient ${value} cm³/C is not allowed: it must be a finite ` + `number other than 0 (its sign gives the carrier type)`,
+    );
   }
 }
 
@@ -63,8 +64,10 @@ function representable(value: number, log10Magnitude: number, sign: number, what
   if (fromLogs !== 0 && Number.isFinite(fromLogs)) return fromLogs;
   const magnitude = `about 1e${Math.round(log10Magnitude)} ${unit}`;
   const limit = fromLogs === 0 ? 'smaller than 5e-324, the smallest number above 0' : 'larger than 1.8e308, the largest number';
-  throw new PhysicsDomainError(`the ${what} for these arguments is ${magnitude}, ${limit} a spreadsheet can ` +
-    `hold; check the units of the Hall coefficient (cm³/C) and the other arguments`);
+  throw new PhysicsDomainError(
+    `the ${what} for these arguments is ${magnitude}, ${limit} a spreadsheet can ` +
+      `hold; check the units of the Hall coefficient (cm³/C) and the other arguments`,
+  );
 }
 
 /**

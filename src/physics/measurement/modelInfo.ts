@@ -11,7 +11,8 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     code: 'valdes-1954',
     quantity: 'four-point-probe resistivity of bulk and finite-thickness samples',
     name: 'Valdes (1954) collinear four-point probe, image method',
-    citation: 'L. B. Valdes, "Resistivity measurements on germanium for transistors", Proc. IRE 42, 420 ' +
+    citation:
+      'L. B. Valdes, "Resistivity measurements on germanium for transistors", Proc. IRE 42, 420 ' +
       '(1954) (tabulated divisors recalled from memory)',
     validity:
       'homogeneous isotropic sample, point contacts far from lateral edges; non-conducting bottom face; any thickness (exact image series)',
@@ -24,7 +25,8 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     code: 'smits-1958',
     quantity: 'four-point-probe sheet resistance of thin layers and circular slices',
     name: 'Smits (1958) thin-layer and finite-slice correction factors',
-    citation: 'F. M. Smits, "Measurement of sheet resistivities with the four-point probe", Bell Syst. ' +
+    citation:
+      'F. M. Smits, "Measurement of sheet resistivities with the four-point probe", Bell Syst. ' +
       'Tech. J. 37, 711 (1958) (tabulated factors recalled from memory)',
     validity: `thin layer (t ≪ s) on an insulator; circular slice measured at its centre along a diameter, d/s ≥ ${MINIMUM_DIAMETER_RATIO}`,
     notes:
@@ -39,7 +41,8 @@ export const MEASUREMENT_MODELS: readonly ModelInfo[] = [
     code: 'van-der-pauw-1958',
     quantity: 'sheet resistance of a layer of arbitrary shape',
     name: 'van der Pauw (1958) four-contact method',
-    citation: 'L. J. van der Pauw, "A method of measuring specific resistivity and Hall effect of discs of ' +
+    citation:
+      'L. J. van der Pauw, "A method of measuring specific resistivity and Hall effect of discs of ' +
       'arbitrary shape", Philips Res. Rep. 13, 1 (1958)',
     validity: 'uniform layer without holes, contacts small and on its periphery',
     notes: 'exp(−πRa/Rs) + exp(−πRb/Rs) = 1 solved exactly with a bracketed root finder.',

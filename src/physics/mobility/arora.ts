@@ -18,7 +18,7 @@ import { memoize } from '../memo';
 export const ARORA_SOURCE = {
   citation:
     'N. D. Arora, J. R. Hauser, D. J. Roulston, IEEE Trans. Electron Devices 29, 292 (1982) ' +
-    '(parameter values from memory, checked against the transcription in Sandia\'s Charon simulator, ' +
+    "(parameter values from memory, checked against the transcription in Sandia's Charon simulator, " +
     'github tcadsoftware/charon, src/Charon_Material_Properties.cpp)',
   validity: '250–500 K, up to about 1e20 cm⁻³, within ±13 % of the data (abstract); extrapolated outside',
 } as const;

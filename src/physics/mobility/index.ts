@@ -104,13 +104,8 @@ export function resolveMobilityModel(code?: string, material: Material = SILICON
         `${material.name} supports: ${allowed.join(', ')}.`,
     );
   }
-  const hint =
-    normalized === 'astm-f723'
-      ? ` 'astm-f723' converts resistivity and dopant density directly and has no mobility;`
-      : '';
-  throw new PhysicsDomainError(
-    `unknown mobility model '${code}'.${hint} Allowed: ${allowed.join(', ')}.`,
-  );
+  const hint = normalized === 'astm-f723' ? ` 'astm-f723' converts resistivity and dopant density directly and has no mobility;` : '';
+  throw new PhysicsDomainError(`unknown mobility model '${code}'.${hint} Allowed: ${allowed.join(', ')}.`);
 }
 
 /** The registry entry of an already-parsed model code (resolveMobilityModel returns only registered codes). */
@@ -177,7 +172,6 @@ export function defaultMobilityModelFor(carrier: Carrier, sample: Sample): strin
   const isMinority = majority !== undefined && carrier !== majority;
   return isMinority ? defaultMinorityMobilityModel(sample.material) : defaultMobilityModel(sample.material);
 }
-
 
 /**
  * The model a blank code chooses for minority carriers of a material: its

@@ -15,7 +15,7 @@ export const MASETTI_SOURCE = {
   citation:
     'G. Masetti, M. Severi, S. Solmi, IEEE Trans. Electron Devices 30, 764 (1983), Table I ' +
     '(As, P electrons; B holes; parameter values from memory, checked against the transcription in ' +
-    'Sandia\'s Charon simulator, github tcadsoftware/charon, src/Charon_Material_Properties.cpp)',
+    "Sandia's Charon simulator, github tcadsoftware/charon, src/Charon_Material_Properties.cpp)",
   validity: '300 K fit, about 1e13–1e21 cm⁻³ (eight decades, per the abstract)',
 } as const;
 

@@ -141,9 +141,9 @@ const KLAASSEN: MobilityModel<typeof KLAASSEN_PARAMETERS> = {
     'Own temperature dependence (lattice and impurity terms with their own power laws); donors and acceptors ' +
     'enter separately (minority carriers see repelling dopants weighted by G ≤ 1, the other carrier type by 1/F), ' +
     'clustering above ~1e20 cm⁻³. Dopant densities as in the fit (full ionization); n, p from the equilibrium ' +
-    'with the net-majority density times N_net / n_eq(300 K), and that carrier\'s mobility times the same factor, ' +
+    "with the net-majority density times N_net / n_eq(300 K), and that carrier's mobility times the same factor, " +
     'so that 300 K resistivity follows the fit; G is evaluated no lower than its minimum in P. At 300 K the ' +
-    'majority mobility is the Caughey–Thomas form with Masetti\'s P and B parameters (within 5 % of masetti).',
+    "majority mobility is the Caughey–Thomas form with Masetti's P and B parameters (within 5 % of masetti).",
   equation: 'src/physics/mobility/klaassen/equations.ts',
   parameterTable: 'src/physics/mobility/klaassen/parameters.ts',
   tests: ['tests/physics/reference/klaassen-1992.reference.test.ts', 'tests/physics/mobility/klaassen.test.ts'],

@@ -106,9 +106,10 @@ const TYPE_VALUES = new Set([
 
 function looksLikeTypeColumn(values: readonly unknown[]): boolean {
   const texts = values.filter((value) => value !== null && value !== '');
-  return texts.length > 0 && texts.every((value) => typeof value === 'string' && TYPE_VALUES.has(
-    value.trim().toLowerCase().replace(/[-_]/g, ' '),
-  ));
+  return (
+    texts.length > 0 &&
+    texts.every((value) => typeof value === 'string' && TYPE_VALUES.has(value.trim().toLowerCase().replace(/[-_]/g, ' ')))
+  );
 }
 
 /**

@@ -71,7 +71,7 @@ const FORMATS = { density: '0.00E+00', sheetResistance: '0.0', percent: '0.00', 
 export function rowReferences(columns: readonly number[], row: number): string {
   const sorted = [...columns].sort((a, b) => a - b);
   const parts: string[] = [];
-  for (let i = 0; i < sorted.length; ) {
+  for (let i = 0; i < sorted.length;) {
     let j = i;
     while (j + 1 < sorted.length && sorted[j + 1] === sorted[j] + 1) j += 1;
     parts.push(areaName(row, sorted[i], row, sorted[j]));
@@ -158,20 +158,22 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     ...(has('type') ? [] : [{ key: 'dopant', label: 'Dopant (no type column)', value: settings.dopant.trim() }]),
     { key: 'temperature', label: `Temperature (${parameterNamed(doping, 'temperature_K').unit ?? 'K'})`, value: settings.temperatureK },
     // Written in K whatever unit was typed, so the formulas reference it without a conversion.
-    ...(correcting ? [
-      {
-        key: 'measuredAt',
-        label: `Readings measured at (${parameterNamed(resistivityAt, 'measured_temperature_K').unit ?? 'K'})`,
-        value: kelvinOf(measuredAt!.value, measuredAt!.unit),
-      },
-    ] : []),
+    ...(correcting
+      ? [
+          {
+            key: 'measuredAt',
+            label: `Readings measured at (${parameterNamed(resistivityAt, 'measured_temperature_K').unit ?? 'K'})`,
+            value: kelvinOf(measuredAt!.value, measuredAt!.unit),
+          },
+        ]
+      : []),
     // A model or material left to its default gets no cell: the formulas then omit the argument, rather than
     // pass a reference to a blank cell (how Excel hands a blank cell to a custom function is not documented).
     ...(settings.model.trim() === '' ? [] : [{ key: 'model', label: 'Doping model', value: settings.model.trim() }]),
     ...(settings.material.trim() === '' ? [] : [{ key: 'material', label: 'Material', value: settings.material.trim() }]),
-    ...(radialLimit === null ? [] : [
-      { key: 'radialLimit', label: `Max |radial variation| (${radial.result.unit ?? '%'})`, value: radialLimit },
-    ]),
+    ...(radialLimit === null
+      ? []
+      : [{ key: 'radialLimit', label: `Max |radial variation| (${radial.result.unit ?? '%'})`, value: radialLimit }]),
   ];
 
   const columns: PlannedColumn[] = [];
@@ -197,14 +199,16 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     });
   }
   const dopantArgument = (row: number): string => (dopantColumn >= 0 ? newCell(dopantColumn, row) : parameterRef('dopant'));
-  const dopingAt = (role: 'rho-min' | 'rho-max') => (row: number): string =>
-    callText(doping, {
-      resistivity: scaled(ref(role, row), rhoFactor),
-      dopant: dopantArgument(row),
-      temperature_K: parameterRef('temperature'),
-      model: optionalParameterRef('model'),
-      material: optionalParameterRef('material'),
-    });
+  const dopingAt =
+    (role: 'rho-min' | 'rho-max') =>
+    (row: number): string =>
+      callText(doping, {
+        resistivity: scaled(ref(role, row), rhoFactor),
+        dopant: dopantArgument(row),
+        temperature_K: parameterRef('temperature'),
+        model: optionalParameterRef('model'),
+        material: optionalParameterRef('material'),
+      });
   const atRhoMaxColumn = columns.length;
   columns.push({ header: `Doping at ρmax (${densityUnit})`, numberFormat: FORMATS.density, formula: dopingAt('rho-max') });
   const atRhoMinColumn = columns.length;
@@ -226,12 +230,14 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
 
   if (settings.modelSpread === true) {
     // The spilled row's names come from the catalog entry; the relative spread has no unit (shown as %).
-    if (dopingSpread.kind !== 'tuple' || dopingSpread.columns.length !== 3) throw new Error(
-      `${dopingSpread.name} is not a row of three values`,
-    );
+    if (dopingSpread.kind !== 'tuple' || dopingSpread.columns.length !== 3)
+      throw new Error(`${dopingSpread.name} is not a row of three values`);
     const [lowest, highest, relative] = dopingSpread.columns;
     const spreadUnit = dopingSpread.result.unit ?? densityUnit;
-    for (const [role, end] of [['rho-max', 'ρmax'], ['rho-min', 'ρmin']] as const) {
+    for (const [role, end] of [
+      ['rho-max', 'ρmax'],
+      ['rho-min', 'ρmin'],
+    ] as const) {
       columns.push(
         {
           header: `Doping at ${end} over models: ${lowest} (${spreadUnit})`,
@@ -257,7 +263,8 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
       const header = headers[column - block.column] ?? '';
       correctedOffset.set(column, columns.length);
       columns.push({
-        header: `${header === '' ? `Column ${columnName(column)}` : header} at certificate temperature ` +
+        header:
+          `${header === '' ? `Column ${columnName(column)}` : header} at certificate temperature ` +
           `(${resistivityAt.result.unit ?? 'Ω·cm'})`,
         numberFormat: FORMATS.resistivity,
         formula: (row) => {
@@ -278,10 +285,12 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
   }
   /** References of reading cells in a row, corrected where correcting (then in Ω·cm). */
   const readingRefs = (columnsWanted: readonly number[], row: number): string =>
-    correcting ? rowReferences(
-      columnsWanted.map((column) => firstNew + correctedOffset.get(column)!),
-      row,
-    ) : rowReferences(columnsWanted, row);
+    correcting
+      ? rowReferences(
+          columnsWanted.map((column) => firstNew + correctedOffset.get(column)!),
+          row,
+        )
+      : rowReferences(columnsWanted, row);
   const readingRef = (role: ColumnRole, row: number): string => readingRefs([sheetColumn(role)], row);
 
   const readingsColumn = readingColumns.length > 0 ? columns.length : -1;
@@ -304,7 +313,8 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     const thicknessFactor = unitByCode(THICKNESS_UNITS, settings.thicknessUnit ?? '').factor;
     const fromReadings = readingColumns.length > 0;
     columns.push({
-      header: `Rs at nominal thickness, ` +
+      header:
+        `Rs at nominal thickness, ` +
         `${fromReadings ? (correcting ? 'mean corrected reading' : 'mean reading') : 'mid-window ρ'} ` +
         `(${sheetRes.result.unit ?? 'Ω/sq'})`,
       numberFormat: FORMATS.sheetResistance,
@@ -389,12 +399,14 @@ export function planCertificateCheck(table: CertificateTable, settings: Certific
     { block: { ...parameterBlock, rowCount: 1, columnCount: 1 }, bold: true },
     ...columns.flatMap((column, offset) => (column.numberFormat ? [{ block: dataColumn(offset), numberFormat: column.numberFormat }] : [])),
     ...parameters.flatMap((parameter, index) =>
-      parameter.numberFormat ? [
-        {
-          block: { sheet: block.sheet, row: block.row + index, column: parameterColumn + 1, rowCount: 1, columnCount: 1 },
-          numberFormat: parameter.numberFormat,
-        },
-      ] : [],
+      parameter.numberFormat
+        ? [
+            {
+              block: { sheet: block.sheet, row: block.row + index, column: parameterColumn + 1, rowCount: 1, columnCount: 1 },
+              numberFormat: parameter.numberFormat,
+            },
+          ]
+        : [],
     ),
   ];
 

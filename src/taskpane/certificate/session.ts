@@ -37,21 +37,25 @@ function headerText(value: unknown): string {
  */
 export function guessUnits(headers: readonly string[], mapping: readonly ColumnRole[]): Omit<CertificateGuess, 'headers' | 'mapping'> {
   const notes: string[] = [];
-  const resistivityReadings = mapping.flatMap((role, index) => (RESISTIVITY_ROLES.has(role) ? [
-    { header: headers[index], reading: readResistivityUnit(headers[index]) },
-  ] : []));
+  const resistivityReadings = mapping.flatMap((role, index) =>
+    RESISTIVITY_ROLES.has(role) ? [{ header: headers[index], reading: readResistivityUnit(headers[index]) }] : [],
+  );
   let resistivityUnit: string | null = RESISTIVITY_UNITS[0].code;
   const unsupported = resistivityReadings.find((entry) => entry.reading.kind === 'unsupported');
   const named = new Set(resistivityReadings.flatMap((entry) => (entry.reading.kind === 'unit' ? [entry.reading.unit.code] : [])));
   if (unsupported !== undefined) {
     resistivityUnit = null;
-    notes.push(`'${unsupported.header}' gives resistivity in a unit the check does not convert; only ` +
-      `${RESISTIVITY_UNITS.map((unit) => unit.label).join(' and ')} are known. Convert the column or ` +
-      `choose the unit if the header is misleading.`);
+    notes.push(
+      `'${unsupported.header}' gives resistivity in a unit the check does not convert; only ` +
+        `${RESISTIVITY_UNITS.map((unit) => unit.label).join(' and ')} are known. Convert the column or ` +
+        `choose the unit if the header is misleading.`,
+    );
   } else if (named.size > 1) {
     resistivityUnit = null;
-    notes.push('The resistivity headers name different units; all resistivity columns must be in one unit. ' +
-      'Choose it, or convert the columns first.');
+    notes.push(
+      'The resistivity headers name different units; all resistivity columns must be in one unit. ' +
+        'Choose it, or convert the columns first.',
+    );
   } else if (named.size === 1) {
     resistivityUnit = [...named][0];
   } else if (resistivityReadings.length > 0) {
@@ -62,9 +66,12 @@ export function guessUnits(headers: readonly string[], mapping: readonly ColumnR
   if (thicknessIndex >= 0) {
     const reading = readThicknessUnit(headers[thicknessIndex]);
     if (reading.kind === 'unit') thicknessUnit = reading.unit.code;
-    else if (reading.kind === 'unsupported') notes.push(`The thickness header '${headers[thicknessIndex]}' ` +
-      `gives the unit '${reading.text}', which the check does not convert (µm, mm, mil). Choose the unit ` +
-      `or set the column to 'not used'.`);
+    else if (reading.kind === 'unsupported')
+      notes.push(
+        `The thickness header '${headers[thicknessIndex]}' ` +
+          `gives the unit '${reading.text}', which the check does not convert (µm, mm, mil). Choose the unit ` +
+          `or set the column to 'not used'.`,
+      );
     else notes.push(`The thickness header '${headers[thicknessIndex]}' names no unit: choose µm, mm or mil.`);
   }
   return { resistivityUnit, thicknessUnit, notes };
@@ -110,10 +117,10 @@ export async function readCertificateTable(port: WorkbookPort): Promise<{ table:
   const columns = headers.map((_, column) => table.contents.values.slice(1).map((row) => row[column] ?? null));
   const mapping = guessMapping(headers, columns);
   const units = guessUnits(headers, mapping);
-  const notes = rowCount < block.rowCount ? [
-    `The empty rows at the end of the selection (${block.rowCount - rowCount}) are left out.`,
-    ...units.notes,
-  ] : units.notes;
+  const notes =
+    rowCount < block.rowCount
+      ? [`The empty rows at the end of the selection (${block.rowCount - rowCount}) are left out.`, ...units.notes]
+      : units.notes;
   return { table, guess: { headers, mapping, ...units, notes } };
 }
 

@@ -29,7 +29,7 @@ function isPositiveNumber(value: CellShown | undefined): value is number {
 
 /** The material the dopant look-up uses: the chosen one, or the function's default when blank. */
 export function materialCode(settings: CertificateSettings): string {
-  return settings.material.trim() === '' ? parameterNamed(catalogEntry('DOPING'), 'material').defaultText ?? 'Si' : settings.material;
+  return settings.material.trim() === '' ? (parameterNamed(catalogEntry('DOPING'), 'material').defaultText ?? 'Si') : settings.material;
 }
 
 /**
@@ -40,8 +40,9 @@ export function materialCode(settings: CertificateSettings): string {
  */
 export function requireTableRows(block: CellBlock): void {
   if (block.rowCount < 2) {
-    throw new PaneRefusal(`Select the whole certificate table, header row included: the selection ` +
-      `${sheetAddress(block)} has only one row.`);
+    throw new PaneRefusal(
+      `Select the whole certificate table, header row included: the selection ` + `${sheetAddress(block)} has only one row.`,
+    );
   }
 }
 
@@ -67,7 +68,10 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
     }
   }
   const { neededMin, neededMax } = settings;
-  for (const [label, value] of [['Needed doping min', neededMin], ['Needed doping max', neededMax]] as const) {
+  for (const [label, value] of [
+    ['Needed doping min', neededMin],
+    ['Needed doping max', neededMax],
+  ] as const) {
     if (!Number.isFinite(value) || value <= 0 || value > MAX_DENSITY) {
       throw new PaneRefusal(`${label} must be a number above 0 and at most ${MAX_DENSITY} cm⁻³ (e.g. 1e15); got ${String(value)}.`);
     }
@@ -75,11 +79,14 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
   if (neededMin > neededMax) {
     throw new PaneRefusal(`Needed doping min (${neededMin}) is above needed doping max (${neededMax}); swap them.`);
   }
-  if (!Number.isFinite(
-    settings.temperatureK,
-  ) || settings.temperatureK < TEMPERATURE_RANGE_K.min || settings.temperatureK > TEMPERATURE_RANGE_K.max) {
-    throw new PaneRefusal(`Temperature must be ${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K; got ` +
-      `${String(settings.temperatureK)}.`);
+  if (
+    !Number.isFinite(settings.temperatureK) ||
+    settings.temperatureK < TEMPERATURE_RANGE_K.min ||
+    settings.temperatureK > TEMPERATURE_RANGE_K.max
+  ) {
+    throw new PaneRefusal(
+      `Temperature must be ${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K; got ` + `${String(settings.temperatureK)}.`,
+    );
   }
   const doping = catalogEntry('DOPING');
   for (const name of ['model', 'material'] as const) {
@@ -92,8 +99,9 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
     }
   }
   if (!settings.mapping.includes('type') && knownDopant(settings.dopant, materialCode(settings)) === null) {
-    throw new PaneRefusal(`No column is mapped to 'Type or dopant', and the dopant '${settings.dopant}' is ` +
-      `unknown; choose one of the listed dopants.`);
+    throw new PaneRefusal(
+      `No column is mapped to 'Type or dopant', and the dopant '${settings.dopant}' is ` + `unknown; choose one of the listed dopants.`,
+    );
   }
   if (settings.mapping.includes('thickness') && settings.thicknessUnit === null) {
     const header = headers[settings.mapping.indexOf('thickness')];
@@ -108,9 +116,8 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
   const measuredAt = settings.measuredAt ?? null;
   if (measuredAt !== null) {
     const unit = TEMPERATURE_UNITS.find((candidate) => candidate.code === measuredAt.unit);
-    if (unit === undefined) throw new PaneRefusal(
-      `Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((u) => u.label).join(' or ')}).`,
-    );
+    if (unit === undefined)
+      throw new PaneRefusal(`Choose the unit of 'Readings measured at' (${TEMPERATURE_UNITS.map((u) => u.label).join(' or ')}).`);
     const kelvin = kelvinOf(measuredAt.value, measuredAt.unit);
     if (!Number.isFinite(kelvin) || kelvin < TEMPERATURE_RANGE_K.min || kelvin > TEMPERATURE_RANGE_K.max) {
       const celsius = (kelvinValue: number) => (kelvinValue - CELSIUS_ZERO_K).toFixed(2);
@@ -119,7 +126,7 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
         `Readings measured at ${String(measuredAt.value)} ${unit.label} is outside ` +
           `${TEMPERATURE_RANGE_K.min}–${TEMPERATURE_RANGE_K.max} K` +
           `${measuredAt.unit === 'C' ? celsiusRangeText : ''}; ` +
-            `is the unit right?`,
+          `is the unit right?`,
       );
     }
     if (settings.model.trim().toLowerCase() === 'astm-f723') {
@@ -130,8 +137,9 @@ export function validateSettings(table: CertificateTable, settings: CertificateS
     }
   }
   if (settings.radialLimitPercent !== null && (!Number.isFinite(settings.radialLimitPercent) || settings.radialLimitPercent < 0)) {
-    throw new PaneRefusal(`The radial variation limit must be a number ≥ 0 (%), or left blank; got ` +
-      `${String(settings.radialLimitPercent)}.`);
+    throw new PaneRefusal(
+      `The radial variation limit must be a number ≥ 0 (%), or left blank; got ` + `${String(settings.radialLimitPercent)}.`,
+    );
   }
 }
 
@@ -173,11 +181,10 @@ export function rowWarnings(table: CertificateTable, settings: CertificateSettin
         `mapping (the first row must be the header row).`,
     );
   }
-  if (notNumbers.length > 0) warnings.push(`Rows ${notNumbers.join(', ')}: ρ min or ρ max is not a positive ` +
-    `number, so their doping shows an error.`);
-  if (swapped.length > 0) warnings.push(
-    `Rows ${swapped.join(', ')}: ρ min is above ρ max; the check uses the lower and higher of the two.`,
-  );
+  if (notNumbers.length > 0)
+    warnings.push(`Rows ${notNumbers.join(', ')}: ρ min or ρ max is not a positive ` + `number, so their doping shows an error.`);
+  if (swapped.length > 0)
+    warnings.push(`Rows ${swapped.join(', ')}: ρ min is above ρ max; the check uses the lower and higher of the two.`);
   if (unknownTypes.length > 0) {
     warnings.push(
       `Type not known as a dopant in ${unknownTypes.join(', ')}; those rows show an error. ` +

@@ -46,11 +46,12 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   let table: { block: CellBlock; guess: CertificateGuess } | null = null;
 
   const readButton = element(doc, 'button', { type: 'button', id: `${ID}-read`, class: 'dc-button', text: 'Read selected table' });
-  const mappingSection = element(
-    doc,
-    'section',
-    { id: `${ID}-mapping`, class: 'dc-group', 'aria-labelledby': `${ID}-mapping-title`, hidden: true },
-  );
+  const mappingSection = element(doc, 'section', {
+    id: `${ID}-mapping`,
+    class: 'dc-group',
+    'aria-labelledby': `${ID}-mapping-title`,
+    hidden: true,
+  });
   const notes = element(doc, 'ul', { id: `${ID}-notes`, class: 'dc-notes' });
 
   // Units and type options, filled per table.
@@ -73,7 +74,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     doc,
     `${ID}-dopant`,
     dopants.codes.map((code) => [code, code] as const),
-    dopants.codes.includes('B') ? 'B' : dopants.codes[0] ?? '',
+    dopants.codes.includes('B') ? 'B' : (dopants.codes[0] ?? ''),
   );
   const thicknessField = labelledControl(
     doc,
@@ -92,16 +93,22 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const dopantField = labelledControl(doc, 'Dopant (no type column mapped)', dopantSelect);
 
   // Window and options.
-  const neededMin = element(
-    doc,
-    'input',
-    { type: 'text', id: `${ID}-needed-min`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 1e15' },
-  );
-  const neededMax = element(
-    doc,
-    'input',
-    { type: 'text', id: `${ID}-needed-max`, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder: 'e.g. 2e15' },
-  );
+  const neededMin = element(doc, 'input', {
+    type: 'text',
+    id: `${ID}-needed-min`,
+    inputmode: 'decimal',
+    autocomplete: 'off',
+    spellcheck: 'false',
+    placeholder: 'e.g. 1e15',
+  });
+  const neededMax = element(doc, 'input', {
+    type: 'text',
+    id: `${ID}-needed-max`,
+    inputmode: 'decimal',
+    autocomplete: 'off',
+    spellcheck: 'false',
+    placeholder: 'e.g. 2e15',
+  });
   const windowRule = selectOf(doc, `${ID}-window-rule`, WINDOW_RULES, WINDOW_RULES[0][0]);
   const temperature = element(doc, 'input', { type: 'text', id: `${ID}-temperature`, inputmode: 'decimal', autocomplete: 'off' });
   // Certificates state resistivity at 23 °C (the temperature of ASTM F723 and F84), so the check starts
@@ -109,18 +116,14 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const defaultTemperature = String(F723_ANCHOR_TEMPERATURE);
   temperature.value = defaultTemperature;
   // Readings taken at the lab's temperature: optional; its unit is chosen by the user, never read from the number.
-  const measuredAt = element(
-    doc,
-    'input',
-    {
-      type: 'text',
-      id: `${ID}-measured-at`,
-      inputmode: 'decimal',
-      autocomplete: 'off',
-      spellcheck: 'false',
-      placeholder: 'blank: at the certificate temperature',
-    },
-  );
+  const measuredAt = element(doc, 'input', {
+    type: 'text',
+    id: `${ID}-measured-at`,
+    inputmode: 'decimal',
+    autocomplete: 'off',
+    spellcheck: 'false',
+    placeholder: 'blank: at the certificate temperature',
+  });
   const measuredUnit = selectOf(
     doc,
     `${ID}-measured-unit`,
@@ -131,7 +134,12 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const models = dopingChoices('model');
   const modelSelect = selectOf(doc, `${ID}-model`, [['', models.defaultCode], ...models.codes.map((code) => [code, code] as const)], '');
   const materials = dopingChoices('material');
-  const materialSelect = selectOf(doc, `${ID}-material`, materials.codes.map((code) => [code, code] as const), materials.defaultCode);
+  const materialSelect = selectOf(
+    doc,
+    `${ID}-material`,
+    materials.codes.map((code) => [code, code] as const),
+    materials.defaultCode,
+  );
   // Model spread beside the doping window: off unless asked for, so the check is unchanged by default.
   const spreadSwitch = element(doc, 'input', { type: 'checkbox', id: `${ID}-model-spread` });
   const spreadField = checkField(
@@ -139,15 +147,17 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     spreadSwitch,
     'Show the model spread: lowest and highest doping over the published models',
     'The spread is how far the published resistivity fits disagree for the certificate’s ρ, not a ' +
-    'measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
-    'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever ' +
-    'doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
+      'measurement uncertainty: the fits can share a bias, and the measured ρ has its own tolerance. ' +
+      'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever ' +
+      'doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
   );
-  const radialLimit = element(
-    doc,
-    'input',
-    { type: 'text', id: `${ID}-radial-limit`, inputmode: 'decimal', autocomplete: 'off', placeholder: 'no limit' },
-  );
+  const radialLimit = element(doc, 'input', {
+    type: 'text',
+    id: `${ID}-radial-limit`,
+    inputmode: 'decimal',
+    autocomplete: 'off',
+    placeholder: 'no limit',
+  });
   const addButton = element(doc, 'button', { type: 'button', id: `${ID}-add`, class: 'dc-button dc-primary', text: 'Add check columns' });
 
   const roleSelects: HTMLSelectElement[] = [];
@@ -229,13 +239,18 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     const temperatureK = parseNumberField(temperature.value, 'Temperature') ?? Number(defaultTemperature);
     const measuredValue = parseNumberField(measuredAt.value, 'Readings measured at');
     if (measuredValue !== null && measuredUnit.value === CHOOSE) {
-      throw new PaneRefusal(`Choose the unit of 'Readings measured at' ` +
-        `(${TEMPERATURE_UNITS.map((unit) => unit.label).join(' or ')}): ${measuredValue} could be either.`);
+      throw new PaneRefusal(
+        `Choose the unit of 'Readings measured at' ` +
+          `(${TEMPERATURE_UNITS.map((unit) => unit.label).join(' or ')}): ${measuredValue} could be either.`,
+      );
     }
-    const measured: MeasuredAt | null = measuredValue === null ? null : {
-      value: measuredValue,
-      unit: measuredUnit.value as TemperatureUnit,
-    };
+    const measured: MeasuredAt | null =
+      measuredValue === null
+        ? null
+        : {
+            value: measuredValue,
+            unit: measuredUnit.value as TemperatureUnit,
+          };
     return {
       mapping: currentMapping(),
       neededMin: min,
@@ -270,9 +285,9 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
         context.announce(
           mapped === 0
             ? `Read ${read.block.rowCount - 1} rows, but no header was recognised: is the first selected ` +
-              `row the header row? Choose each column’s meaning by hand.`
+                `row the header row? Choose each column’s meaning by hand.`
             : `Read ${read.block.rowCount - 1} wafer rows; ${mapped} of ${guess.headers.length} columns ` +
-              `recognised. Check the mapping, then add the check.`,
+                `recognised. Check the mapping, then add the check.`,
           'info',
         );
         roleSelects[0]?.focus();
@@ -285,8 +300,10 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   addButton.addEventListener('click', () => {
     void (async () => {
       try {
-        if (table === null) throw new PaneRefusal('Select the certificate table in the sheet (header row ' +
-          'included) and press “Read selected table” first.');
+        if (table === null)
+          throw new PaneRefusal(
+            'Select the certificate table in the sheet (header row ' + 'included) and press “Read selected table” first.',
+          );
         const plan = await addCertificateCheck(context.port, table.block, readSettings());
         showNotes(plan.warnings);
         context.announce(
@@ -314,8 +331,12 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   ]);
   const more = element(doc, 'details', { class: 'dc-group' }, [
     element(doc, 'summary', { text: 'More settings' }),
-    labelledControl(doc, 'Temperature (K)', temperature, 'Temperature at which the certificate’s ' +
-      'resistivity values hold; blank means the functions’ default.'),
+    labelledControl(
+      doc,
+      'Temperature (K)',
+      temperature,
+      'Temperature at which the certificate’s ' + 'resistivity values hold; blank means the functions’ default.',
+    ),
     element(doc, 'div', { class: 'dc-row' }, [
       labelledControl(
         doc,
@@ -341,7 +362,8 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
     element(doc, 'h2', { text: 'Certificate check' }),
     element(doc, 'p', {
       class: 'dc-hint',
-      text: 'Select a supplier’s certificate table in the sheet, header row included. The check adds ' +
+      text:
+        'Select a supplier’s certificate table in the sheet, header row included. The check adds ' +
         'columns of live formulas to its right and never writes over your cells.',
     }),
     readButton,

@@ -97,6 +97,9 @@ export function describeFunction(spec: FunctionSpec): FunctionDetails {
     columns: spec.kind === 'tuple' ? spec.columns : [],
     models: spec.models.map((code) => ({ code, info: citedModel(code) })),
     examples: spec.examples,
-    help: spec.help.split(/\n\s*\n/).map((paragraph) => paragraph.trim()).filter((paragraph) => paragraph !== ''),
+    help: spec.help
+      .split(/\n\s*\n/)
+      .map((paragraph) => paragraph.trim())
+      .filter((paragraph) => paragraph !== ''),
   };
 }

@@ -32,10 +32,14 @@ export type ExampleArgument =
 export function exampleArguments(formula: string, spec: FunctionSpec): ExampleArgument[] | null {
   const call = readCall(formula);
   if (call === null || call.name.toUpperCase() !== qualifiedName(spec).toUpperCase()) return null;
-  return call.arguments.map((argument): ExampleArgument => (argument.kind === 'array' ? {
-    kind: 'array',
-    values: argument.rows.flat(),
-  } : argument));
+  return call.arguments.map((argument): ExampleArgument =>
+    argument.kind === 'array'
+      ? {
+          kind: 'array',
+          values: argument.rows.flat(),
+        }
+      : argument,
+  );
 }
 
 /** What goes into one argument's value cells: one value, or a row of values for a reducing argument. */
@@ -58,10 +62,9 @@ function usable(argument: ExampleArgument | undefined, parameter: ParameterSpec)
  * @example prefillValues(DOPING) // [[10], ['B'], [null], [null], [null], [null]]
  */
 export function prefillValues(spec: FunctionSpec): Prefill[] {
-  const parsed = spec.examples.map((example) => exampleArguments(
-    example.formula,
-    spec,
-  )).filter((args): args is ExampleArgument[] => args !== null);
+  const parsed = spec.examples
+    .map((example) => exampleArguments(example.formula, spec))
+    .filter((args): args is ExampleArgument[] => args !== null);
   const complete = parsed.find((args) => spec.parameters.every((parameter, index) => usable(args[index], parameter) !== null));
   const chosen = complete ?? parsed[0] ?? [];
   return spec.parameters.map((parameter, index) => usable(chosen[index], parameter) ?? [null]);
@@ -75,7 +78,10 @@ export function prefillValues(spec: FunctionSpec): Prefill[] {
 export function resultSize(spec: FunctionSpec): { rows: number; columns: number } {
   if (spec.kind === 'tuple') return { rows: 1, columns: spec.columns.length };
   if (spec.kind === 'row') {
-    const row = evaluate(spec, prefillValues(spec).map((cells) => cells[0]));
+    const row = evaluate(
+      spec,
+      prefillValues(spec).map((cells) => cells[0]),
+    );
     return { rows: 1, columns: Math.max(1, row[0]?.length ?? 1) };
   }
   if (spec.kind === 'table') {

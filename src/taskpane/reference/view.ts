@@ -57,7 +57,8 @@ function detailsContent(doc: Document, spec: FunctionSpec): Node[] {
       ]),
     );
   }
-  const resultText = `Result: ${details.result.description}${details.result.unit === null ? '' : `, in ${details.result.unit}`}` +
+  const resultText =
+    `Result: ${details.result.description}${details.result.unit === null ? '' : `, in ${details.result.unit}`}` +
     (details.columns.length > 0 ? `; spills one row: ${details.columns.join(' | ')}.` : '.');
   nodes.push(element(doc, 'p', { class: 'dc-result', text: resultText }));
   if (details.models.length > 0) {
@@ -128,27 +129,28 @@ export function mountFunctionReference(panel: HTMLElement, context: ToolContext)
     placeholder: 'name, quantity, unit or model',
   });
   const count = element(doc, 'p', { id: `${ID}-count`, class: 'dc-hint', 'aria-live': 'polite' });
-  const list = element(
-    doc,
-    'ul',
-    { id: `${ID}-results`, role: 'listbox', class: 'dc-listbox', tabindex: '0', 'aria-label': 'Matching functions' },
-  );
+  const list = element(doc, 'ul', {
+    id: `${ID}-results`,
+    role: 'listbox',
+    class: 'dc-listbox',
+    tabindex: '0',
+    'aria-label': 'Matching functions',
+  });
   const detailsPanel = element(doc, 'section', { id: `${ID}-details`, class: 'dc-details', 'aria-labelledby': `${ID}-details-title` });
-  const insertButton = element(
-    doc,
-    'button',
-    { type: 'button', id: `${ID}-insert`, class: 'dc-button dc-primary', text: 'Insert at the active cell' },
-  );
+  const insertButton = element(doc, 'button', {
+    type: 'button',
+    id: `${ID}-insert`,
+    class: 'dc-button dc-primary',
+    text: 'Insert at the active cell',
+  });
 
   let shown: FunctionSpec[] = [];
   let selected: FunctionSpec | null = null;
 
   function select(spec: FunctionSpec | null, scroll = true): void {
     selected = spec;
-    for (const option of Array.from(list.children)) option.setAttribute(
-      'aria-selected',
-      String(option.id === (spec ? optionId(spec) : '')),
-    );
+    for (const option of Array.from(list.children))
+      option.setAttribute('aria-selected', String(option.id === (spec ? optionId(spec) : '')));
     if (spec === null) {
       list.removeAttribute('aria-activedescendant');
       detailsPanel.replaceChildren(
@@ -180,7 +182,7 @@ export function mountFunctionReference(panel: HTMLElement, context: ToolContext)
       }),
     );
     count.textContent = search.value.trim() === '' ? `${shown.length} functions` : `${shown.length} of ${CATALOG.length} functions match`;
-    select(shown.includes(selected as FunctionSpec) ? selected : shown[0] ?? null, false);
+    select(shown.includes(selected as FunctionSpec) ? selected : (shown[0] ?? null), false);
   }
 
   function move(to: number): void {

@@ -59,14 +59,20 @@ function argumentsFor(
   const given: (SweepArgument | null)[] = parameters.map((spec) => {
     if (feeds !== null && spec.name === feeds) return { kind: 'inner' };
     if (models !== null && models.key === settingKey(owner, spec.name)) return models.argument;
-    if (owner === 'inner' && spec.name === DOPING_PARAMETER) return fixed.doping === null ? { kind: 'doping-axis' } : {
-      kind: 'number',
-      value: fixed.doping,
-    };
-    if (owner === 'inner' && spec.name === TEMPERATURE_PARAMETER) return fixed.temperatureK === null ? { kind: 'temperature-axis' } : {
-      kind: 'number',
-      value: fixed.temperatureK,
-    };
+    if (owner === 'inner' && spec.name === DOPING_PARAMETER)
+      return fixed.doping === null
+        ? { kind: 'doping-axis' }
+        : {
+            kind: 'number',
+            value: fixed.doping,
+          };
+    if (owner === 'inner' && spec.name === TEMPERATURE_PARAMETER)
+      return fixed.temperatureK === null
+        ? { kind: 'temperature-axis' }
+        : {
+            kind: 'number',
+            value: fixed.temperatureK,
+          };
     const entered = enteredArgument(spec, values[settingKey(owner, spec.name)]);
     if (typeof entered === 'string') {
       problems.push(entered);

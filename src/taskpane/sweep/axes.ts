@@ -47,20 +47,21 @@ export function dopingAxisProblems(axis: DopingAxisSettings): string[] {
   else {
     if (axis.from <= 0) problems.push(`Doping "from" must be above 0 cm⁻³ (got ${axis.from}).`);
     // The catalog's own upper limit for dopant densities, so every grid point is a doping the functions accept.
-    if (axis.to > MAX_DENSITY) problems.push(
-      `Doping "to" must be at most ${MAX_DENSITY.toExponential()} cm⁻³ (got ${axis.to.toExponential()}).`,
-    );
-    if (axis.from >= axis.to) problems.push(
-      `Doping "from" (${axis.from.toExponential()}) must be below "to" (${axis.to.toExponential()}).`,
-    );
+    if (axis.to > MAX_DENSITY)
+      problems.push(`Doping "to" must be at most ${MAX_DENSITY.toExponential()} cm⁻³ (got ${axis.to.toExponential()}).`);
+    if (axis.from >= axis.to)
+      problems.push(`Doping "from" (${axis.from.toExponential()}) must be below "to" (${axis.to.toExponential()}).`);
   }
   if (!Number.isInteger(axis.pointsPerDecade) || axis.pointsPerDecade < 1 || axis.pointsPerDecade > MAX_POINTS_PER_DECADE) {
     problems.push(`Points per decade must be a whole number from 1 to ${MAX_POINTS_PER_DECADE} (got ${axis.pointsPerDecade}).`);
   }
   if (problems.length === 0) {
     const count = dopingPointCount(axis);
-    if (count > MAX_DOPING_POINTS) problems.push(`That doping axis has ${count} points; at most ` +
-      `${MAX_DOPING_POINTS} are allowed. Use fewer points per decade or a narrower range.`);
+    if (count > MAX_DOPING_POINTS)
+      problems.push(
+        `That doping axis has ${count} points; at most ` +
+          `${MAX_DOPING_POINTS} are allowed. Use fewer points per decade or a narrower range.`,
+      );
   }
   return problems;
 }
@@ -101,15 +102,14 @@ export function fromKelvin(kelvin: number, unit: TemperatureUnit): number {
 export function temperatureAxisProblems(axis: TemperatureAxisSettings, maxPoints: number = MAX_TEMPERATURE_POINTS): string[] {
   const problems: string[] = [];
   if (![axis.from, axis.to, axis.step].every(Number.isFinite)) return [`Temperature from, to and step must be numbers in ${axis.unit}.`];
-  if (toKelvin(axis.from, axis.unit) <= 0) problems.push(
-    `Temperature "from" must be above absolute zero (0 K = −273.15 °C; got ${axis.from} ${axis.unit}).`,
-  );
+  if (toKelvin(axis.from, axis.unit) <= 0)
+    problems.push(`Temperature "from" must be above absolute zero (0 K = −273.15 °C; got ${axis.from} ${axis.unit}).`);
   if (axis.from >= axis.to) problems.push(`Temperature "from" (${axis.from} ${axis.unit}) must be below "to" (${axis.to} ${axis.unit}).`);
   if (axis.step <= 0) problems.push(`Temperature step must be above 0 (got ${axis.step} ${axis.unit}).`);
   if (problems.length === 0) {
     const count = Math.floor((axis.to - axis.from) / axis.step + 1e-9) + 1;
-    if (count > maxPoints) problems.push(`That temperature axis has ${count} points; at most ${maxPoints} ` +
-      `are allowed here. Use a larger step.`);
+    if (count > maxPoints)
+      problems.push(`That temperature axis has ${count} points; at most ${maxPoints} ` + `are allowed here. Use a larger step.`);
   }
   return problems;
 }

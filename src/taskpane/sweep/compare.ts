@@ -72,8 +72,11 @@ export function compareModels(
   values: SettingValues,
 ): { ok: true; comparison: ModelComparison } | { ok: false; problem: string } {
   const setting = modelSettingOf(quantity);
-  if (setting === null) return { ok: false, problem: `Compare models needs a model argument; ` +
-    `${quantity.label} (${qualifiedName(quantity.outer)}) has none.` };
+  if (setting === null)
+    return {
+      ok: false,
+      problem: `Compare models needs a model argument; ` + `${quantity.label} (${qualifiedName(quantity.outer)}) has none.`,
+    };
   const owner = setting.key.slice(0, setting.key.indexOf(':')) as 'inner' | 'outer';
   const function_ = owner === 'inner' ? quantity.inner : quantity.outer;
   const entered = (name: string): string | undefined => {

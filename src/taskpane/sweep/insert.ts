@@ -19,9 +19,11 @@ const NAMED_CELLS = 3;
 const tableNotEmpty: RefusalText = (footprint, occupied) => {
   const more = occupied.length > NAMED_CELLS ? ` and ${occupied.length - NAMED_CELLS} more` : '';
   const named = occupied.slice(0, NAMED_CELLS).join(', ') + more;
-  return `Nothing written: the table would fill ${sheetAddress(footprint)} (${footprint.rowCount} rows × ` +
+  return (
+    `Nothing written: the table would fill ${sheetAddress(footprint)} (${footprint.rowCount} rows × ` +
     `${footprint.columnCount} columns), but ${named} ${occupied.length === 1 ? 'is' : 'are'} not empty. ` +
-    `Select a cell with enough empty space below and to the right.`;
+    `Select a cell with enough empty space below and to the right.`
+  );
 };
 
 /** What was inserted; `chartError` says why the chart is missing when the workbook refused it. */

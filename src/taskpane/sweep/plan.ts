@@ -76,9 +76,8 @@ function kelvinName(kelvin: number): string {
  */
 export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan {
   const { quantity, call, doping, temperature } = input;
-  if (doping === null && temperature === null) throw new RangeError(
-    'Sweep doping, temperature or both: with both fixed there is nothing to tabulate.',
-  );
+  if (doping === null && temperature === null)
+    throw new RangeError('Sweep doping, temperature or both: with both fixed there is nothing to tabulate.');
   if (input.models !== undefined && input.models !== null) return planModelComparison(input, input.models, anchor);
   const sheet = anchor.sheet;
   const top = anchor.row;
@@ -125,7 +124,13 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
   } else if (doping !== null) {
     const dataTop = top + 2;
     footprint = block(sheet, top, left, 2 + doping.length, 2);
-    writes.push({ block: block(sheet, top, left, 2, 2), cells: [[title, null], ['Doping (cm⁻³)', resultHeader]] });
+    writes.push({
+      block: block(sheet, top, left, 2, 2),
+      cells: [
+        [title, null],
+        ['Doping (cm⁻³)', resultHeader],
+      ],
+    });
     const dopingCells = block(sheet, dataTop, left, doping.length, 1);
     writes.push({ block: dopingCells, cells: doping.map((d) => [d]) });
     references = { doping: blockAddress(dopingCells), temperature: null };
@@ -173,9 +178,11 @@ export function planSweep(input: SweepLayoutInput, anchor: CellBlock): SweepPlan
 /** Refuses a table that would run off the sheet (one spare column for the chart beside it). */
 function checkFits(footprint: CellBlock): void {
   if (footprint.row + footprint.rowCount > SHEET_ROWS || footprint.column + footprint.columnCount + 1 > SHEET_COLUMNS) {
-    throw new RangeError(`The table needs ${footprint.rowCount} rows × ${footprint.columnCount} columns ` +
-      `from ${cellName(footprint.row, footprint.column)}, which runs off the sheet; select a cell further ` +
-      `up or left.`);
+    throw new RangeError(
+      `The table needs ${footprint.rowCount} rows × ${footprint.columnCount} columns ` +
+        `from ${cellName(footprint.row, footprint.column)}, which runs off the sheet; select a cell further ` +
+        `up or left.`,
+    );
   }
 }
 
@@ -206,10 +213,12 @@ function planModelComparison(input: SweepLayoutInput, models: ModelComparison, a
   const valueLeft = left + axisColumns;
   const writes: BlockWrite[] = [];
   const styles: StylePlan[] = [{ block: block(sheet, top, left), bold: true }];
-  const labels: CellInput[] = doping !== null ? ['Doping (cm⁻³) ↓ · Model →'] : celsius ? [
-    'Temperature (°C)',
-    'Temperature (K) ↓ · Model →',
-  ] : ['Temperature (K) ↓ · Model →'];
+  const labels: CellInput[] =
+    doping !== null
+      ? ['Doping (cm⁻³) ↓ · Model →']
+      : celsius
+        ? ['Temperature (°C)', 'Temperature (K) ↓ · Model →']
+        : ['Temperature (K) ↓ · Model →'];
   writes.push({
     block: block(sheet, top, left, 2, axisColumns),
     cells: [[title, ...Array<CellInput>(axisColumns - 1).fill(null)], labels],

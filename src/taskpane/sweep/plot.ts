@@ -65,7 +65,10 @@ export function makeScale(min: number, max: number, start: number, end: number, 
     for (let e = first; e <= last; e += every) ticks.push(10 ** e);
     // Less than a decade shown (models compared at one doping, a narrow temperature range): 1-2-5, then every
     // mantissa, so the axis still carries at least two labelled values.
-    for (const mantissas of [[1, 2, 5], [1, 2, 3, 4, 5, 6, 7, 8, 9]]) {
+    for (const mantissas of [
+      [1, 2, 5],
+      [1, 2, 3, 4, 5, 6, 7, 8, 9],
+    ]) {
       if (ticks.length >= 2) break;
       ticks = [];
       for (let e = Math.floor(lo); e <= Math.ceil(hi); e++) {
@@ -101,9 +104,9 @@ function element<K extends keyof SVGElementTagNameMap>(
 
 /** A short number for the text alternative. */
 function short(value: number): string {
-  return Math.abs(value) >= 1e4 || (Math.abs(value) < 1e-2 && value !== 0) ? value.toExponential(2) : Number(
-    value.toPrecision(4),
-  ).toString();
+  return Math.abs(value) >= 1e4 || (Math.abs(value) < 1e-2 && value !== 0)
+    ? value.toExponential(2)
+    : Number(value.toPrecision(4)).toString();
 }
 
 /**
@@ -122,8 +125,10 @@ export function describePreview(preview: Preview, yLabel: string): string {
     return `${drawn.length > 1 ? `${s.name}: ` : ''}${short(first[1])} at ${short(first[0])} to ${short(last[1])} at ${short(last[0])}`;
   });
   const more = drawn.length > 4 ? `; ${drawn.length - 4} more curves` : '';
-  return `${yLabel} against ${preview.xLabel}, ${preview.xLogarithmic ? 'log' : 'linear'} x, ` +
-    `${preview.yLogarithmic ? 'log' : 'linear'} y: ${parts.join('; ')}${more}.`;
+  return (
+    `${yLabel} against ${preview.xLabel}, ${preview.xLogarithmic ? 'log' : 'linear'} x, ` +
+    `${preview.yLogarithmic ? 'log' : 'linear'} y: ${parts.join('; ')}${more}.`
+  );
 }
 
 /** The end values of a curve, e.g. '13.6 at 1.00e+15 to 0.205 at 1.00e+17'. */
@@ -140,15 +145,16 @@ function withoutFullStop(message: string): string {
 
 /** What each model refused, e.g. 'astm-f723 refused 3 of 4 values (#VALUE! …)'. */
 export function refusalText(series: PreviewSeries): string | null {
-  return series.refused === undefined ? null : `${series.name} refused ${series.refused.count} of ` +
-    `${series.refused.of} values (${withoutFullStop(series.refused.message)})`;
+  return series.refused === undefined
+    ? null
+    : `${series.name} refused ${series.refused.count} of ` + `${series.refused.of} values (${withoutFullStop(series.refused.message)})`;
 }
 
 /** The compare-models text: the models, the default's ends, how wide the band gets, and each model's refusals. */
 function describeComparison(preview: Preview, yLabel: string): string {
   const emphasised = preview.series[preview.emphasised ?? 0];
-  const axes = `${yLabel} against ${preview.xLabel}, ${preview.xLogarithmic ? 'log' : 'linear'} x, ` +
-    `${preview.yLogarithmic ? 'log' : 'linear'} y`;
+  const axes =
+    `${yLabel} against ${preview.xLabel}, ${preview.xLogarithmic ? 'log' : 'linear'} x, ` + `${preview.yLogarithmic ? 'log' : 'linear'} y`;
   const parts = [`${preview.series.length} models (${preview.series.map((s) => s.name).join(', ')})`];
   if (emphasised !== undefined && emphasised.points.length > 0) parts.push(`default ${emphasised.name} (heavier line) ${ends(emphasised)}`);
   const band = (preview.band ?? []).flat();
@@ -189,9 +195,12 @@ export function drawLegend(doc: Document, preview: Preview, id: string): HTMLULi
     if (refused !== null) {
       const note = doc.createElement('span');
       note.className = 'sw-legend-note';
-      note.textContent = series.points.length === 0 ? ` no values: ${series.refused!.message}` : ` gaps: ` +
-        `refused ${series.refused!.count} of ${series.refused!.of} values ` +
-        `(${withoutFullStop(series.refused!.message)})`;
+      note.textContent =
+        series.points.length === 0
+          ? ` no values: ${series.refused!.message}`
+          : ` gaps: ` +
+            `refused ${series.refused!.count} of ${series.refused!.of} values ` +
+            `(${withoutFullStop(series.refused!.message)})`;
       item.append(note);
     }
     list.append(item);
@@ -208,21 +217,21 @@ export function drawLegend(doc: Document, preview: Preview, id: string): HTMLULi
  * @param idPrefix - prefix for the title/desc ids (unique in the page)
  */
 export function drawPreview(doc: Document, preview: Preview, yLabel: string, idPrefix: string): SVGSVGElement {
-  const svg = element(
-    doc,
-    'svg',
-    { viewBox: `0 0 ${WIDTH} ${HEIGHT}`, class: 'sw-plot', role: 'img', 'aria-labelledby': `${idPrefix}-title ${idPrefix}-desc` },
-  );
+  const svg = element(doc, 'svg', {
+    viewBox: `0 0 ${WIDTH} ${HEIGHT}`,
+    class: 'sw-plot',
+    role: 'img',
+    'aria-labelledby': `${idPrefix}-title ${idPrefix}-desc`,
+  });
   const title = element(doc, 'title', { id: `${idPrefix}-title` });
   title.textContent = `Preview of ${yLabel}`;
   const desc = element(doc, 'desc', { id: `${idPrefix}-desc` });
   desc.textContent = describePreview(preview, yLabel);
   svg.append(title, desc);
   const usable = (v: number, log: boolean) => Number.isFinite(v) && (!log || v > 0);
-  const points = preview.series.flatMap((s) => s.points).filter(([x, y]) => usable(
-    x,
-    preview.xLogarithmic,
-  ) && usable(y, preview.yLogarithmic));
+  const points = preview.series
+    .flatMap((s) => s.points)
+    .filter(([x, y]) => usable(x, preview.xLogarithmic) && usable(y, preview.yLogarithmic));
   const plotLeft = MARGIN.left;
   const plotRight = WIDTH - MARGIN.right;
   const plotTop = MARGIN.top;
@@ -254,10 +263,9 @@ export function drawPreview(doc: Document, preview: Preview, yLabel: string, idP
   svg.append(xTitle);
   const pixel = (px: number, py: number) => `${x.toPixel(px).toFixed(1)},${y.toPixel(py).toFixed(1)}`;
   for (const segment of preview.band ?? []) {
-    const kept = segment.filter(([px, low, high]) => usable(px, preview.xLogarithmic) && usable(low, preview.yLogarithmic) && usable(
-      high,
-      preview.yLogarithmic,
-    ));
+    const kept = segment.filter(
+      ([px, low, high]) => usable(px, preview.xLogarithmic) && usable(low, preview.yLogarithmic) && usable(high, preview.yLogarithmic),
+    );
     if (kept.length < 2) continue;
     // Along the highest values, back along the lowest: one closed shape under the curves.
     const outline = [...kept.map(([px, , high]) => pixel(px, high)), ...[...kept].reverse().map(([px, low]) => pixel(px, low))];
@@ -272,7 +280,7 @@ export function drawPreview(doc: Document, preview: Preview, yLabel: string, idP
       .filter((part) => part.length > 0);
     if (parts.length === 0) continue;
     // A lone point between refusals would draw nothing as a path: it gets a dot of the curve's colour.
-    const line = (part: typeof parts[number]) => part.map(([px, py], i) => `${i === 0 ? 'M' : 'L'}${pixel(px, py)}`).join(' ');
+    const line = (part: (typeof parts)[number]) => part.map(([px, py], i) => `${i === 0 ? 'M' : 'L'}${pixel(px, py)}`).join(' ');
     const d = parts.map((part) => (part.length === 1 ? `M${pixel(...part[0])} l0,0` : line(part))).join(' ');
     svg.append(element(doc, 'path', { class: curveClasses(index, index === preview.emphasised), d, 'data-series': series.name }));
   }

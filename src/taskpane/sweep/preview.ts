@@ -56,9 +56,8 @@ export function previewSweep(input: SweepLayoutInput): Preview {
   const { call, doping, temperature, quantity } = input;
   const dopingColumn: Grid<CellInput> | null = doping === null ? null : doping.map((d) => [d]);
   // Temperatures run across a row when doping runs down a column, else down a column.
-  const temperatureGrid: Grid<CellInput> | null = temperature === null ? null : doping !== null ? [
-    [...temperature.kelvin],
-  ] : temperature.kelvin.map((k) => [k]);
+  const temperatureGrid: Grid<CellInput> | null =
+    temperature === null ? null : doping !== null ? [[...temperature.kelvin]] : temperature.kelvin.map((k) => [k]);
   let innerGrid: Grid<CellOutput> | null = null;
   const argumentValue = (argument: SweepArgument): ArgumentInput => {
     switch (argument.kind) {
@@ -97,11 +96,14 @@ export function previewSweep(input: SweepLayoutInput): Preview {
       gap = true;
       if (isFailure(y)) {
         firstError ??= `${y.code} ${y.message}`;
-        refused = refused === undefined ? {
-          count: 1,
-          of: ys.length,
-          message: `${y.code} ${y.message}`,
-        } : { ...refused, count: refused.count + 1 };
+        refused =
+          refused === undefined
+            ? {
+                count: 1,
+                of: ys.length,
+                message: `${y.code} ${y.message}`,
+              }
+            : { ...refused, count: refused.count + 1 };
       }
     });
     return { name, points, ...(breaks.length > 0 ? { breaks } : {}), ...(refused !== undefined ? { refused } : {}) };

@@ -113,9 +113,11 @@ export function settingParameters(quantity: SweepQuantity): SettingParameter[] {
     .filter((p) => p.name !== DOPING_PARAMETER && p.name !== TEMPERATURE_PARAMETER)
     .map((spec) => ({ owner: 'inner' as const, spec }));
   if (quantity.throughParameter === null) return inner;
-  const outer = quantity.outer.parameters.filter((p) => p.name !== quantity.throughParameter).map((spec) => ({
-    owner: 'outer' as const,
-    spec,
-  }));
+  const outer = quantity.outer.parameters
+    .filter((p) => p.name !== quantity.throughParameter)
+    .map((spec) => ({
+      owner: 'outer' as const,
+      spec,
+    }));
   return [...inner, ...outer];
 }

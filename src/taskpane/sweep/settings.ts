@@ -64,11 +64,12 @@ function number(text: string): number {
  */
 export function resolveSweep(form: SweepForm, quantities: readonly SweepQuantity[]): ResolvedSweep {
   const quantity = quantities.find((q) => q.id === form.quantityId);
-  if (quantity === undefined) return {
-    ok: false,
-    problems: [`Choose a quantity; "${form.quantityId}" is not one of ${quantities.map((q) => q.id).join(', ')}.`],
-    invalid: ['quantityId'],
-  };
+  if (quantity === undefined)
+    return {
+      ok: false,
+      problems: [`Choose a quantity; "${form.quantityId}" is not one of ${quantities.map((q) => q.id).join(', ')}.`],
+      invalid: ['quantityId'],
+    };
   const problems: string[] = [];
   const invalid: string[] = [];
   const dopingSwept = quantity.hasDoping && form.dopingSwept;
@@ -133,18 +134,19 @@ export function resolveSweep(form: SweepForm, quantities: readonly SweepQuantity
       invalid.push(COMPARE_MODELS_FIELD);
     } else if (dopingSwept && temperatureSwept) {
       // Models × doping × temperature would need a table per model; one axis keeps one spilled formula and one chart.
-      problems.push('Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature (with both, ' +
-        'each model would need a table of its own).');
+      problems.push(
+        'Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature (with both, ' +
+          'each model would need a table of its own).',
+      );
       invalid.push(COMPARE_MODELS_FIELD);
     } else models = compared.comparison;
   }
 
-  const { call, problems: callProblems, invalid: callInvalid } = buildCall(
-    quantity,
-    form.values,
-    { doping: fixedDoping, temperatureK: fixedKelvin },
-    models?.argument ?? null,
-  );
+  const {
+    call,
+    problems: callProblems,
+    invalid: callInvalid,
+  } = buildCall(quantity, form.values, { doping: fixedDoping, temperatureK: fixedKelvin }, models?.argument ?? null);
   problems.push(...callProblems);
   invalid.push(...callInvalid);
   if (problems.length > 0) return { ok: false, problems, invalid };

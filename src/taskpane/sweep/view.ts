@@ -131,9 +131,13 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
   const doc = context.doc;
   panel.classList.add('sw-tool');
   const quantities = availableQuantities();
-  const intro = make(doc, 'p', { className: 'sw-hint', textContent: 'Tabulates a quantity over doping ' +
-    'and/or temperature at the selected cell: axis values as cells, one spilled DRIFT formula, and an XY ' +
-    'chart.' });
+  const intro = make(doc, 'p', {
+    className: 'sw-hint',
+    textContent:
+      'Tabulates a quantity over doping ' +
+      'and/or temperature at the selected cell: axis values as cells, one spilled DRIFT formula, and an XY ' +
+      'chart.',
+  });
   const quantity = selectField(
     doc,
     'sw-quantity',
@@ -161,7 +165,10 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
     doc,
     'sw-temperature-unit',
     'Entered in',
-    [['K', 'K'], ['°C', '°C']],
+    [
+      ['K', 'K'],
+      ['°C', '°C'],
+    ],
     'K',
     'Formulas always receive kelvin; °C values are converted in the table.',
   );
@@ -331,7 +338,8 @@ export function mountSweepBuilder(panel: HTMLElement, context: ToolContext): voi
         plan.modelCodes === null
           ? ''
           : `, under ${plan.modelCodes.formula} in ${blockAddress(plan.modelCodes.cell)} (one model per column)`;
-      const table = `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ` +
+      const table =
+        `Inserted at ${where}: ${plan.formula} in ${blockAddress(plan.formulaCell)} spills ` +
         `${plan.results.rowCount} × ${plan.results.columnCount} values${codes}`;
       if (chartError === null) context.announce(`${table}; chart added (${axes}).`, 'success');
       else context.announce(`${table}; the chart could not be added: ${chartError}.`, 'error');

@@ -20,9 +20,21 @@ export interface BuiltCli {
 /** Compiles the project into a fresh temporary package folder. */
 export function buildCli(): BuiltCli {
   const pkg = mkdtempSync(join(tmpdir(), 'driftcell-cli-build-'));
-  execFileSync(process.execPath, [require.resolve('typescript/bin/tsc'), '-p', join(ROOT, 'tsconfig.json'), '--outDir', join(pkg, 'dist', 'node'), '--sourceMap', 'false'], {
-    stdio: 'pipe',
-  });
+  execFileSync(
+    process.execPath,
+    [
+      require.resolve('typescript/bin/tsc'),
+      '-p',
+      join(ROOT, 'tsconfig.json'),
+      '--outDir',
+      join(pkg, 'dist', 'node'),
+      '--sourceMap',
+      'false',
+    ],
+    {
+      stdio: 'pipe',
+    },
+  );
   copyFileSync(join(ROOT, 'package.json'), join(pkg, 'package.json'));
   symlinkSync(join(ROOT, 'node_modules'), join(pkg, 'node_modules'), 'dir');
   return { main: join(pkg, 'dist', 'node', 'cli', 'main.js'), remove: () => rmSync(pkg, { recursive: true, force: true }) };

@@ -21,7 +21,12 @@ function attributes(text: string): Record<string, string> {
 }
 
 function unescape(text: string): string {
-  return text.replace(/&quot;/g, '"').replace(/&apos;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
+  return text
+    .replace(/&quot;/g, '"')
+    .replace(/&apos;/g, "'")
+    .replace(/&lt;/g, '<')
+    .replace(/&gt;/g, '>')
+    .replace(/&amp;/g, '&');
 }
 
 export async function openPackage(bytes: Buffer): Promise<JSZip> {
@@ -45,7 +50,9 @@ async function sheetPart(zip: JSZip, sheet: string): Promise<string> {
 
 async function sharedStrings(zip: JSZip): Promise<string[]> {
   const xml = (await partText(zip, 'xl/sharedStrings.xml')) ?? '';
-  return [...xml.matchAll(/<si>([\s\S]*?)<\/si>/g)].map((m) => unescape([...m[1].matchAll(/<t[^>]*>([\s\S]*?)<\/t>/g)].map((t) => t[1]).join('')));
+  return [...xml.matchAll(/<si>([\s\S]*?)<\/si>/g)].map((m) =>
+    unescape([...m[1].matchAll(/<t[^>]*>([\s\S]*?)<\/t>/g)].map((t) => t[1]).join('')),
+  );
 }
 
 /** Every `<c>` of a sheet by address. */

@@ -43,7 +43,11 @@ export function installExcelHostSide(): void {
   const bridge: { onMessageFromHost?: (text: string) => void; sendMessageToHost(text: string): void } = {
     sendMessageToHost(text: string) {
       recorded.messages += 1;
-      const message = JSON.parse(text) as { id?: number; type: number; message?: { body?: { Actions?: { Name?: string; ArgumentInfo?: { Arguments?: unknown[] } }[] } } };
+      const message = JSON.parse(text) as {
+        id?: number;
+        type: number;
+        message?: { body?: { Actions?: { Name?: string; ArgumentInfo?: { Arguments?: unknown[] } }[] } };
+      };
       for (const action of message.message?.body?.Actions ?? []) {
         if (action.Name !== 'SetInvocationArrayResults') continue;
         const entries = (action.ArgumentInfo?.Arguments?.[0] ?? []) as unknown[][];
@@ -60,9 +64,16 @@ export function installExcelHostSide(): void {
 }
 
 /** Runs in the page: sends one recalculation batch to the add-in through the bridge, as the host does. */
-export function sendInvocations(invocations: [id: number, name: string, parameterValues: unknown[], address: string, flags: number][]): void {
+export function sendInvocations(
+  invocations: [id: number, name: string, parameterValues: unknown[], address: string, flags: number][],
+): void {
   const bridge = (window as unknown as { _richApiNativeBridge: { onMessageFromHost?: (text: string) => void } })._richApiNativeBridge;
   if (bridge.onMessageFromHost === undefined) throw new Error('Office never connected to the host bridge');
-  const entries = invocations.map((invocation) => ({ messageCategory: 1, messageType: 1000, targetId: '', message: JSON.stringify(invocation) }));
+  const entries = invocations.map((invocation) => ({
+    messageCategory: 1,
+    messageType: 1000,
+    targetId: '',
+    message: JSON.stringify(invocation),
+  }));
   bridge.onMessageFromHost(JSON.stringify({ type: 3, message: { entries } }));
 }

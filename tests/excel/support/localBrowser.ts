@@ -40,7 +40,11 @@ export interface LocalCopy {
   readonly folder: string;
 }
 
-const CONTENT_TYPES: Readonly<Record<string, string>> = { '.js': 'text/javascript; charset=utf-8', '.json': 'application/json; charset=utf-8', '.html': 'text/html; charset=utf-8' };
+const CONTENT_TYPES: Readonly<Record<string, string>> = {
+  '.js': 'text/javascript; charset=utf-8',
+  '.json': 'application/json; charset=utf-8',
+  '.html': 'text/html; charset=utf-8',
+};
 
 function localFile(url: string, copies: readonly LocalCopy[]): string | undefined {
   for (const copy of copies) {
@@ -68,7 +72,11 @@ export async function launchLocalBrowser(serverUrl: string, localCopies: readonl
     const file = localFile(url, localCopies);
     if (file !== undefined) {
       servedLocally.push(url);
-      return route.fulfill({ status: 200, contentType: CONTENT_TYPES[path.extname(file)] ?? 'application/octet-stream', body: readFileSync(file) });
+      return route.fulfill({
+        status: 200,
+        contentType: CONTENT_TYPES[path.extname(file)] ?? 'application/octet-stream',
+        body: readFileSync(file),
+      });
     }
     blocked.push(url);
     return route.abort();

@@ -29,9 +29,22 @@ export function parseXml(source: string): XmlElement {
     for (;;) {
       const rest = source.slice(pos);
       const ws = /^\s+/.exec(rest);
-      if (ws) { pos += ws[0].length; continue; }
-      if (rest.startsWith('<?')) { const end = source.indexOf('?>', pos); if (end < 0) fail('unclosed <?'); pos = end + 2; continue; }
-      if (rest.startsWith('<!--')) { const end = source.indexOf('-->', pos); if (end < 0) fail('unclosed comment'); pos = end + 3; continue; }
+      if (ws) {
+        pos += ws[0].length;
+        continue;
+      }
+      if (rest.startsWith('<?')) {
+        const end = source.indexOf('?>', pos);
+        if (end < 0) fail('unclosed <?');
+        pos = end + 2;
+        continue;
+      }
+      if (rest.startsWith('<!--')) {
+        const end = source.indexOf('-->', pos);
+        if (end < 0) fail('unclosed comment');
+        pos = end + 3;
+        continue;
+      }
       return;
     }
   };
@@ -50,8 +63,14 @@ export function parseXml(source: string): XmlElement {
     for (;;) {
       const ws = /^\s*/.exec(source.slice(pos)) as RegExpExecArray;
       pos += ws[0].length;
-      if (source.startsWith('/>', pos)) { pos += 2; return { name, attributes, children: [], text: '' }; }
-      if (source[pos] === '>') { pos++; break; }
+      if (source.startsWith('/>', pos)) {
+        pos += 2;
+        return { name, attributes, children: [], text: '' };
+      }
+      if (source[pos] === '>') {
+        pos++;
+        break;
+      }
       const attr = readName();
       if (attr in attributes) fail(`attribute ${attr} repeated on <${name}>`);
       const eq = /^\s*=\s*(["'])/.exec(source.slice(pos));
@@ -66,7 +85,12 @@ export function parseXml(source: string): XmlElement {
     const element: XmlElement = { name, attributes, children: [], text: '' };
     for (;;) {
       if (pos >= source.length) fail(`<${name}> is never closed`);
-      if (source.startsWith('<!--', pos)) { const end = source.indexOf('-->', pos); if (end < 0) fail('unclosed comment'); pos = end + 3; continue; }
+      if (source.startsWith('<!--', pos)) {
+        const end = source.indexOf('-->', pos);
+        if (end < 0) fail('unclosed comment');
+        pos = end + 3;
+        continue;
+      }
       if (source.startsWith('</', pos)) {
         pos += 2;
         const closing = readName();
@@ -77,7 +101,10 @@ export function parseXml(source: string): XmlElement {
         element.text = element.text.trim();
         return element;
       }
-      if (source[pos] === '<') { element.children.push(readElement()); continue; }
+      if (source[pos] === '<') {
+        element.children.push(readElement());
+        continue;
+      }
       const next = source.indexOf('<', pos);
       element.text += decode(source.slice(pos, next < 0 ? source.length : next));
       pos = next < 0 ? source.length : next;

@@ -3,15 +3,12 @@ import { thermalVoltage } from '../../../src/physics/constants';
 import { SILICON } from '../../../src/physics/materials';
 
 describe('bandEdges', () => {
-  it.each(INTRINSIC_MODEL_CODES.map((code) => [code]))(
-    'places Ec and Ev at kT·ln(Nc/ni) and kT·ln(Nv/ni) from Ei (%s)',
-    (code) => {
-      const edges = bandEdges(SILICON, 300, code);
-      expect(edges.conductionEdge).toBeCloseTo(edges.logConductionDensity - edges.logIntrinsicDensity, 12);
-      expect(edges.valenceEdge).toBeCloseTo(edges.logValenceDensity - edges.logIntrinsicDensity, 12);
-      expect(Math.exp(edges.logIntrinsicDensity)).toBe(intrinsicDensity(SILICON, 300, code));
-    },
-  );
+  it.each(INTRINSIC_MODEL_CODES.map((code) => [code]))('places Ec and Ev at kT·ln(Nc/ni) and kT·ln(Nv/ni) from Ei (%s)', (code) => {
+    const edges = bandEdges(SILICON, 300, code);
+    expect(edges.conductionEdge).toBeCloseTo(edges.logConductionDensity - edges.logIntrinsicDensity, 12);
+    expect(edges.valenceEdge).toBeCloseTo(edges.logValenceDensity - edges.logIntrinsicDensity, 12);
+    expect(Math.exp(edges.logIntrinsicDensity)).toBe(intrinsicDensity(SILICON, 300, code));
+  });
 
   it("with 'dos' the implied gap is exactly Eg(T)", () => {
     for (const T of [20, 300, 1000]) {

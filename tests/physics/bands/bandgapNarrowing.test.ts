@@ -42,7 +42,10 @@ describe('apparent bandgap narrowing', () => {
     }
     // Continuous across N = Nref, where the two algebraic forms meet.
     const at = KLAASSEN_BGN.referenceDensity;
-    expect(apparentBandgapNarrowing(KLAASSEN_BGN, at * (1 + 1e-12)) / apparentBandgapNarrowing(KLAASSEN_BGN, at * (1 - 1e-12))).toBeCloseTo(1, 11);
+    expect(apparentBandgapNarrowing(KLAASSEN_BGN, at * (1 + 1e-12)) / apparentBandgapNarrowing(KLAASSEN_BGN, at * (1 - 1e-12))).toBeCloseTo(
+      1,
+      11,
+    );
   });
 
   it('rejects negative or non-finite densities', () => {

@@ -1,9 +1,4 @@
-import {
-  conductionBandDensity,
-  logConductionBandDensity,
-  logValenceBandDensity,
-  valenceBandDensity,
-} from '../../../src/physics/bands';
+import { conductionBandDensity, logConductionBandDensity, logValenceBandDensity, valenceBandDensity } from '../../../src/physics/bands';
 import { SILICON } from '../../../src/physics/materials';
 import { PhysicsDomainError } from '../../../src/physics/errors';
 

@@ -38,25 +38,22 @@ describe('intrinsicDensity', () => {
     }
   });
 
-  it.each(INTRINSIC_MODEL_CODES.map((code) => [code]))(
-    '%s grows strictly, without kinks, from 50 K to 700 K',
-    (code) => {
-      // d ln ni / d(1/T) is the (apparent) activation energy: it must vary smoothly.
-      const step = 1; // K
-      let previousLog = -Infinity;
-      let previousSlope: number | undefined;
-      for (let T = 50; T <= 700; T += step) {
-        const log = logIntrinsicDensity(SILICON, T, code);
-        expect(log).toBeGreaterThan(previousLog);
-        const slope = (logIntrinsicDensity(SILICON, T + step, code) - log) / (1 / (T + step) - 1 / T);
-        if (previousSlope !== undefined) {
-          expect(Math.abs(slope / previousSlope - 1)).toBeLessThan(1e-2);
-        }
-        previousSlope = slope;
-        previousLog = log;
+  it.each(INTRINSIC_MODEL_CODES.map((code) => [code]))('%s grows strictly, without kinks, from 50 K to 700 K', (code) => {
+    // d ln ni / d(1/T) is the (apparent) activation energy: it must vary smoothly.
+    const step = 1; // K
+    let previousLog = -Infinity;
+    let previousSlope: number | undefined;
+    for (let T = 50; T <= 700; T += step) {
+      const log = logIntrinsicDensity(SILICON, T, code);
+      expect(log).toBeGreaterThan(previousLog);
+      const slope = (logIntrinsicDensity(SILICON, T + step, code) - log) / (1 / (T + step) - 1 / T);
+      if (previousSlope !== undefined) {
+        expect(Math.abs(slope / previousSlope - 1)).toBeLessThan(1e-2);
       }
-    },
-  );
+      previousSlope = slope;
+      previousLog = log;
+    }
+  });
 
   it('default stays within 10% of the independent dos model from 78 K to 1000 K (extrapolation check)', () => {
     for (const T of [78, 150, 300, 400, 500, 600, 700, 850, 1000]) {

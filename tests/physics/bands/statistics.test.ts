@@ -88,7 +88,7 @@ describe('carrier statistics (Fermi–Dirac, the default)', () => {
       const n = FERMI_DIRAC_STATISTICS.electronDensity(edges, etaC + edges.conductionEdge);
       const nc = Math.exp(edges.logConductionDensity);
       expect(n).toBeLessThanOrEqual(nc * Math.exp(etaC) * (1 + 1e-14));
-      expect(n).toBeGreaterThanOrEqual((nc * Math.exp(etaC)) / (1 + Math.exp(etaC)) * (1 - 1e-14));
+      expect(n).toBeGreaterThanOrEqual(((nc * Math.exp(etaC)) / (1 + Math.exp(etaC))) * (1 - 1e-14));
     }
   });
 

@@ -41,11 +41,14 @@ describe('saturatedCurrentDensity', () => {
     const eq = solveEquilibrium(sample.material, 300, sampleDopants(sample));
     const sigma = conductivity(sample, sample.material.code === 'Si' ? 'masetti' : undefined); // the saturating form's default low-field mobility
     let expected = 0;
-    for (const [carrier, density] of [['electron', eq.electrons], ['hole', eq.holes]] as const) {
+    for (const [carrier, density] of [
+      ['electron', eq.electrons],
+      ['hole', eq.holes],
+    ] as const) {
       const mu = freeCarrierMobility('masetti', carrier, sample);
       const share = (ELEMENTARY_CHARGE * density * mu) / sigma;
       const beta = fieldExponent('Si', carrier, 300);
-      expected += share * Math.pow(mu / saturationVelocity('Si', carrier, 300), beta) / beta;
+      expected += (share * Math.pow(mu / saturationVelocity('Si', carrier, 300), beta)) / beta;
     }
     const shortfall = 1 - saturatedCurrentDensity(1, sample) / sigma;
     expect(expected).toBeGreaterThan(1e-5); // Canali's β ≈ 1.1 makes the knee soft (Canali et al. 1975)
@@ -56,7 +59,9 @@ describe('saturatedCurrentDensity', () => {
   it('saturates: J at 1e6 V/cm is q·n·v_sat for n-type Si within 1 %', () => {
     const sample = sampleIn('Si', 'P', 1e16);
     const eq = solveEquilibrium(sample.material, 300, sampleDopants(sample));
-    expect(saturatedCurrentDensity(1e6, sample) / (ELEMENTARY_CHARGE * eq.electrons * saturationVelocity('Si', 'electron', 300))).toBeCloseTo(1, 2);
+    expect(
+      saturatedCurrentDensity(1e6, sample) / (ELEMENTARY_CHARGE * eq.electrons * saturationVelocity('Si', 'electron', 300)),
+    ).toBeCloseTo(1, 2);
   });
 
   it('leaves 4H-SiC holes out only where they cannot change J, and says so otherwise', () => {

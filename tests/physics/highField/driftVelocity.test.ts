@@ -9,13 +9,16 @@ import { mobility } from '../../../src/physics/mobility';
 import { SAMPLES_300K, sampleIn } from './samples';
 
 describe('driftVelocity', () => {
-  it.each(SAMPLES_300K)('%s: is exactly μ·E at 1e-15 V/cm (there (μE/v_sat)^β is below double precision), μ from mobility with the default model', (_, sample) => {
-    const carriers = sample.material.code === '4H-SiC' ? (['electron'] as const) : (['electron', 'hole'] as const);
-    for (const carrier of carriers) {
-      expect(driftVelocity(1e-15, carrier, sample)).toBe(mobility('', carrier, sample) * 1e-15);
-      expect(driftVelocity(-1e-15, carrier, sample)).toBe(-mobility('', carrier, sample) * 1e-15);
-    }
-  });
+  it.each(SAMPLES_300K)(
+    '%s: is exactly μ·E at 1e-15 V/cm (there (μE/v_sat)^β is below double precision), μ from mobility with the default model',
+    (_, sample) => {
+      const carriers = sample.material.code === '4H-SiC' ? (['electron'] as const) : (['electron', 'hole'] as const);
+      for (const carrier of carriers) {
+        expect(driftVelocity(1e-15, carrier, sample)).toBe(mobility('', carrier, sample) * 1e-15);
+        expect(driftVelocity(-1e-15, carrier, sample)).toBe(-mobility('', carrier, sample) * 1e-15);
+      }
+    },
+  );
 
   it.each(SAMPLES_300K)('%s: approaches v_sat at 1e8 V/cm', (_, sample) => {
     const v = driftVelocity(1e8, 'electron', sample);

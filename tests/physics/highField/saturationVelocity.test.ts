@@ -51,7 +51,11 @@ describe('high-field tables', () => {
 
 describe('saturationVelocity and fieldExponent', () => {
   it('decrease smoothly with temperature where a temperature law is tabulated', () => {
-    for (const [material, from] of [['Si', 77], ['Ge', 20], ['GaAs', 20]] as const) {
+    for (const [material, from] of [
+      ['Si', 77],
+      ['Ge', 20],
+      ['GaAs', 20],
+    ] as const) {
       for (const carrier of ['electron', 'hole'] as const) {
         let previous = Infinity;
         const start = Math.max(from, carrierHighFieldTable(material, carrier).evaluationRange.min);
@@ -83,9 +87,7 @@ describe('saturationVelocity and fieldExponent', () => {
   it('give 4H-SiC electrons at 300 K only and refuse 4H-SiC holes', () => {
     expect(saturationVelocity('4H-SiC', 'electron', 300)).toBeGreaterThan(0);
     expect(() => saturationVelocity('4H-SiC', 'electron', 301)).toThrow(/only 300 K/);
-    expect(() => saturationVelocity('4H-SiC', 'hole', 300)).toThrow(
-      'no published hole saturation velocity for 4H-SiC in this release',
-    );
+    expect(() => saturationVelocity('4H-SiC', 'hole', 300)).toThrow('no published hole saturation velocity for 4H-SiC in this release');
     expect(missingSaturationVelocity('4H-SiC', 'hole')).toMatch(/no published hole/);
     expect(missingSaturationVelocity('Si', 'hole')).toBeUndefined();
   });

@@ -32,7 +32,7 @@ describe('adaptive integration', () => {
     const sigma = conductivity(sample);
     const thicknessUm = 2.5;
     const result = integrate(() => sigma, [0, thicknessUm]);
-    expect((1 / (result.value * CM_PER_UM)) / sheetResistance(1 / sigma, thicknessUm)).toBeCloseTo(1, 14);
+    expect(1 / (result.value * CM_PER_UM) / sheetResistance(1 / sigma, thicknessUm)).toBeCloseTo(1, 14);
   });
 
   it('matches closed forms: ∫sin = 2 on [0, π], ∫e^(−x²) on [0, 3] = (√π/2)·erf(3)', () => {

@@ -23,7 +23,11 @@ describe('junction depth of diffused layers', () => {
   });
 
   it.each(PROFILE_CODES.map((p) => [p]))('puts N(xj) = background and inverts characteristicLength (%s)', (profile) => {
-    for (const [ns, nb, lengthUm] of [[1e19, 1e15, 0.5], [3e20, 1e17, 0.05], [2e16, 1e16, 3]] as const) {
+    for (const [ns, nb, lengthUm] of [
+      [1e19, 1e15, 0.5],
+      [3e20, 1e17, 0.05],
+      [2e16, 1e16, 3],
+    ] as const) {
       const xj = junctionDepth(profile, ns, lengthUm, nb);
       expect(diffusedDensity({ profile, surfaceConcentration: ns, characteristicLength: lengthUm }, xj) / nb).toBeCloseTo(1, 11);
       expect(characteristicLength(profile, ns, xj, nb) / lengthUm).toBeCloseTo(1, 13);

@@ -115,7 +115,12 @@ describe('diffused layers: physical behaviour (definitions, common practice)', (
 
 describe('implanted layers (as-implanted, fully activated, no damage)', () => {
   const implant = (dose: number, rangeUm: number, straggleUm: number, background: number, temperature = 300) => ({
-    dose, rangeUm, straggleUm, background, dopant: boron, temperature,
+    dose,
+    rangeUm,
+    straggleUm,
+    background,
+    dopant: boron,
+    temperature,
   });
 
   it('for a deep, light implant approaches 1/∫q·μ(N)·N dx over the whole Gaussian (≈ 1/(q·μ·Φ))', () => {
@@ -125,13 +130,14 @@ describe('implanted layers (as-implanted, fully activated, no damage)', () => {
     const density = (x: number) => peak * Math.exp(-(((x - rp) / straggle) ** 2) / 2);
     // At 23 °C the default resistivity model is ASTM F723 itself for uncompensated B (f723Anchored.ts),
     // so the layer's conductance is ∫ dx / ρ_F723(N(x)); the tolerance is the integration's.
-    const fullGaussian = simpson(
-      // Below F723's 1e12 cm⁻³ (beyond 4σ of this 4e15 cm⁻³ peak: < 1e-4 of the dose) nothing is counted.
-      (x) => (density(x) >= 1e12 ? 1 / f723Resistivity('B', density(x)) : 0),
-      rp - 8 * straggle,
-      rp + 8 * straggle,
-      1600,
-    ) * CM_PER_UM;
+    const fullGaussian =
+      simpson(
+        // Below F723's 1e12 cm⁻³ (beyond 4σ of this 4e15 cm⁻³ peak: < 1e-4 of the dose) nothing is counted.
+        (x) => (density(x) >= 1e12 ? 1 / f723Resistivity('B', density(x)) : 0),
+        rp - 8 * straggle,
+        rp + 8 * straggle,
+        1600,
+      ) * CM_PER_UM;
     const rs = implantedLayerSheetResistance(implant(dose, rp, straggle, 1e8, F723_ANCHOR_TEMPERATURE));
     expect(Math.abs(rs * fullGaussian - 1)).toBeLessThan(2e-3);
     // And, with μ nearly constant below 1e16 cm⁻³, close to 1/(q·μ·Φ) at the peak's mobility.
@@ -183,7 +189,14 @@ describe('layer dimensions beyond any wafer', () => {
     expect(() => implantedLayerSheetResistance(implant)).toThrow(/projected range must be ≤ 10000 µm/);
     expect(() => implantedLayerSheetResistance({ ...implant, rangeUm: 0.1, straggleUm: 1e16 })).toThrow(/straggle must be ≤/);
     expect(() =>
-      diffusedLayerSheetResistance({ profile: 'gaussian', surfaceConcentration: 1e19, junctionDepthUm: 1e5, background: 1e15, dopant: boron, temperature: 300 }),
+      diffusedLayerSheetResistance({
+        profile: 'gaussian',
+        surfaceConcentration: 1e19,
+        junctionDepthUm: 1e5,
+        background: 1e15,
+        dopant: boron,
+        temperature: 300,
+      }),
     ).toThrow(/junction depth must be ≤/);
   });
 });

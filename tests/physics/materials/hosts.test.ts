@@ -43,17 +43,20 @@ describe('look-up', () => {
 });
 
 describe('provenance', () => {
-  it.each(NEW_HOSTS.map((m) => [m.code, m]))('%s: every table has a citation saying where values were recalled, and a validity', (_code, material) => {
-    const host = material as Material;
-    const tables = [host.bandgap, host.densityOfStates, ...host.dopants.map((d) => d.ionization)];
-    for (const table of tables) {
-      expect(table.citation).toMatch(/from memory|common practice, no source/);
-      expect(table.validity.length).toBeGreaterThan(10);
-    }
-    for (const dopant of host.dopants) expect(dopant.ionizationEnergyCitation).toMatch(/from memory/);
-    expect(host.hostPropertiesCitation).toMatch(/common practice, no source/);
-    expect(host.intrinsicFits).toEqual([]);
-  });
+  it.each(NEW_HOSTS.map((m) => [m.code, m]))(
+    '%s: every table has a citation saying where values were recalled, and a validity',
+    (_code, material) => {
+      const host = material as Material;
+      const tables = [host.bandgap, host.densityOfStates, ...host.dopants.map((d) => d.ionization)];
+      for (const table of tables) {
+        expect(table.citation).toMatch(/from memory|common practice, no source/);
+        expect(table.validity.length).toBeGreaterThan(10);
+      }
+      for (const dopant of host.dopants) expect(dopant.ionizationEnergyCitation).toMatch(/from memory/);
+      expect(host.hostPropertiesCitation).toMatch(/common practice, no source/);
+      expect(host.intrinsicFits).toEqual([]);
+    },
+  );
 });
 
 describe('temperature domains', () => {
@@ -105,7 +108,9 @@ describe('dopant codes', () => {
   });
 
   it('refuses a dopant of another material, naming the allowed ones', () => {
-    expect(() => resolveDopant(GALLIUM_ARSENIDE, 'B')).toThrow(/unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor/);
+    expect(() => resolveDopant(GALLIUM_ARSENIDE, 'B')).toThrow(
+      /unknown dopant 'B' for gallium arsenide: allowed dopants are Zn, Be, C, Mg, Si, Te, Se, Sn, donor, acceptor/,
+    );
     expect(() => resolveDopant(GERMANIUM, 'Al')).toThrow(PhysicsDomainError);
   });
 
@@ -114,7 +119,12 @@ describe('dopant codes', () => {
     for (const s of ['P', 'As', 'Sb', 'B', 'Ga', 'In']) expect(energy(GERMANIUM, s)).toBeGreaterThanOrEqual(0.0096);
     for (const s of ['P', 'As', 'Sb', 'B', 'Ga', 'In']) expect(energy(GERMANIUM, s)).toBeLessThanOrEqual(0.0127);
     for (const s of ['Si', 'Te', 'Se', 'Sn']) expect(energy(GALLIUM_ARSENIDE, s)).toBeCloseTo(0.006, 3);
-    expect([energy(GALLIUM_ARSENIDE, 'Zn'), energy(GALLIUM_ARSENIDE, 'Be'), energy(GALLIUM_ARSENIDE, 'C'), energy(GALLIUM_ARSENIDE, 'Mg')]).toEqual([0.031, 0.028, 0.026, 0.028]);
+    expect([
+      energy(GALLIUM_ARSENIDE, 'Zn'),
+      energy(GALLIUM_ARSENIDE, 'Be'),
+      energy(GALLIUM_ARSENIDE, 'C'),
+      energy(GALLIUM_ARSENIDE, 'Mg'),
+    ]).toEqual([0.031, 0.028, 0.026, 0.028]);
     // 4H-SiC, Levinshtein et al. 2001 (from memory): Al ≈ 0.2 eV, B ≈ 0.3 eV; N, P effective levels.
     expect(energy(SILICON_CARBIDE_4H, 'Al')).toBe(0.2);
     expect(energy(SILICON_CARBIDE_4H, 'B')).toBe(0.3);
@@ -230,10 +240,11 @@ describe('incomplete ionization in the new hosts, 1e12–1e21 cm⁻³ and 50–7
         ionization: { ...effective.ionization, isolatedEnergy: energy },
       }));
       for (const n of [1e15, 1e16, 1e17, 1e18]) {
-        const twoLevel = solveEquilibrium(SILICON_CARBIDE_4H, 300, [
-          { dopant: hexagonal, density: n / 2 },
-          { dopant: cubic, density: n / 2 },
-        ]).ionizedDonors / n;
+        const twoLevel =
+          solveEquilibrium(SILICON_CARBIDE_4H, 300, [
+            { dopant: hexagonal, density: n / 2 },
+            { dopant: cubic, density: n / 2 },
+          ]).ionizedDonors / n;
         expect(Math.abs(ionized(SILICON_CARBIDE_4H, effective, n, 300) / twoLevel - 1)).toBeLessThan(0.07);
       }
     }

@@ -35,16 +35,24 @@ describe('resistivity model codes per material', () => {
     expect(() => resistivity(sample(GALLIUM_ARSENIDE, 'Zn', 1e17), 'astm-f723')).toThrow(
       /resistivity model 'astm-f723' has parameters for silicon only; gallium arsenide supports: sotoodeh/,
     );
-    expect(() => dopingForResistivity(1, { material: GERMANIUM, temperature: 300, dopant: resolveDopant(GERMANIUM, 'B'), counterDensity: 0 }, 'ASTM-F723')).toThrow(
-      /silicon only; germanium supports: hilsum/,
-    );
+    expect(() =>
+      dopingForResistivity(
+        1,
+        { material: GERMANIUM, temperature: 300, dopant: resolveDopant(GERMANIUM, 'B'), counterDensity: 0 },
+        'ASTM-F723',
+      ),
+    ).toThrow(/silicon only; germanium supports: hilsum/);
     expect(() => conductivity(sample(SILICON_CARBIDE_4H, 'N', 1e17), 'masetti')).toThrow(/4H silicon carbide supports: roschke-schwierz/);
   });
 });
 
 describe('resistivity in the new hosts', () => {
   it('is 1/q(nμn + pμp) with the solver’s carriers and the fits’ mobilities', () => {
-    for (const [material, symbol] of [[GERMANIUM, 'Sb'], [GALLIUM_ARSENIDE, 'Be'], [SILICON_CARBIDE_4H, 'Al']] as const) {
+    for (const [material, symbol] of [
+      [GERMANIUM, 'Sb'],
+      [GALLIUM_ARSENIDE, 'Be'],
+      [SILICON_CARBIDE_4H, 'Al'],
+    ] as const) {
       const s = sample(material, symbol, 1e17, 350);
       const eq = solveEquilibrium(material, 350, [{ dopant: s.dopant, density: 1e17 }]);
       const sigma = ELEMENTARY_CHARGE * (eq.electrons * mobility('', 'electron', s) + eq.holes * mobility('', 'hole', s));
@@ -73,9 +81,19 @@ describe('resistivity in the new hosts', () => {
   });
 
   it('inverts: DOPING of RESISTIVITY returns the doping, in every new host', () => {
-    for (const [material, symbol] of [[GERMANIUM, 'In'], [GALLIUM_ARSENIDE, 'Si'], [SILICON_CARBIDE_4H, 'N'], [SILICON_CARBIDE_4H, 'B']] as const) {
+    for (const [material, symbol] of [
+      [GERMANIUM, 'In'],
+      [GALLIUM_ARSENIDE, 'Si'],
+      [SILICON_CARBIDE_4H, 'N'],
+      [SILICON_CARBIDE_4H, 'B'],
+    ] as const) {
       const rho = resistivity(sample(material, symbol, 3e16));
-      const found = dopingForResistivity(rho, { material, temperature: 300, dopant: resolveDopant(material, symbol), counterDensity: 0 }).density;
+      const found = dopingForResistivity(rho, {
+        material,
+        temperature: 300,
+        dopant: resolveDopant(material, symbol),
+        counterDensity: 0,
+      }).density;
       expect(found / 3e16).toBeCloseTo(1, 6);
     }
   });

@@ -101,7 +101,12 @@ describe('circular slice (Smits 1958 closed form)', () => {
     // Sources ±I at x = ∓1.5 s, images at R²/x with the same sign, potential −ln r per unit.
     const u = 7;
     const r2 = (u / 2) ** 2;
-    const charges: [number, number][] = [[-1.5, 1], [1.5, -1], [-r2 / 1.5, 1], [r2 / 1.5, -1]];
+    const charges: [number, number][] = [
+      [-1.5, 1],
+      [1.5, -1],
+      [-r2 / 1.5, 1],
+      [r2 / 1.5, -1],
+    ];
     const potential = (x: number) => charges.reduce((sum, [at, q]) => sum - q * Math.log(Math.abs(x - at)), 0);
     // V/I per Rs = (φ(−s/2) − φ(s/2))/(2π)
     const voltagePerSheet = (potential(-0.5) - potential(0.5)) / (2 * Math.PI);

@@ -90,7 +90,9 @@ describe('freeCarrierMobility (mobility per free carrier)', () => {
   it('is the fit times N_net/n_net(300 K) for the net-majority carrier and the fit for the other', () => {
     for (const model of MOBILITY_MODEL_CODES) {
       const sample = siliconSample('P', 1e18, 250);
-      expect(freeCarrierMobility(model, 'electron', sample)).toBe(fitMobility(model, 'electron', sample) * fullIonizationCorrection(sample));
+      expect(freeCarrierMobility(model, 'electron', sample)).toBe(
+        fitMobility(model, 'electron', sample) * fullIonizationCorrection(sample),
+      );
       expect(freeCarrierMobility(model, 'hole', sample)).toBe(fitMobility(model, 'hole', sample));
     }
   });
@@ -128,7 +130,11 @@ describe('blank model: chosen per carrier', () => {
     expect(defaultMobilityModelFor('hole', compensated)).toBe('masetti');
   });
   it('keeps each other material’s own fit for both carriers', () => {
-    for (const [material, code] of [[GERMANIUM, 'hilsum'], [GALLIUM_ARSENIDE, 'sotoodeh'], [SILICON_CARBIDE_4H, 'roschke-schwierz']] as const) {
+    for (const [material, code] of [
+      [GERMANIUM, 'hilsum'],
+      [GALLIUM_ARSENIDE, 'sotoodeh'],
+      [SILICON_CARBIDE_4H, 'roschke-schwierz'],
+    ] as const) {
       expect(defaultMinorityMobilityModel(material)).toBe(code);
     }
     expect(defaultMinorityMobilityModel(SILICON)).toBe('klaassen');
@@ -153,7 +159,9 @@ describe('diffusivity', () => {
   });
   it('grows above μ·kT/q in degenerate n+ silicon (5e19 cm⁻³ As at 300 K)', () => {
     const sample = siliconSample('As', 5e19, 300);
-    expect(diffusivity('masetti', 'electron', sample) / (mobility('masetti', 'electron', sample) * thermalVoltage(300))).toBeGreaterThan(1.2);
+    expect(diffusivity('masetti', 'electron', sample) / (mobility('masetti', 'electron', sample) * thermalVoltage(300))).toBeGreaterThan(
+      1.2,
+    );
   });
   it('is about 30.6 cm²/s for electrons in 1e16 P-doped Si at 300 K (Masetti et al. 1983 eq. 1: 1184 × kT/q 0.02585)', () => {
     expect(diffusivity('masetti', 'electron', siliconSample('P', 1e16))).toBeGreaterThan(30.4);

@@ -279,7 +279,10 @@ describe('temperature at low doping', () => {
   it('decreases strictly from 50 to 700 K for undoped, 1e12 and 1e13 cm⁻³', () => {
     const temperatures = [50, 60, 77, 100, 150, 200, 250, 300, 350, 400, 500, 600, 700];
     for (const density of [0, 1e12, 1e13]) {
-      for (const [carrier, dopant] of [['electron', 'P'], ['hole', 'B']] as const) {
+      for (const [carrier, dopant] of [
+        ['electron', 'P'],
+        ['hole', 'B'],
+      ] as const) {
         let previous = Infinity;
         for (const temperature of temperatures) {
           const mu = fit(carrier, dopant, density, temperature);
@@ -294,7 +297,10 @@ describe('temperature at low doping', () => {
 describe('minority vs majority carriers of the same type (model property, Klaassen 1992 I)', () => {
   it('minority electrons in p+ exceed majority electrons in n+ at 1e19 and 1e20 cm⁻³, 300 K', () => {
     // Fit values (from the model): 211 vs 115 at 1e19, 200 vs 74 at 1e20 cm⁻³.
-    for (const [density, low, high] of [[1e19, 1.6, 2.1], [1e20, 2.3, 3.1]] as const) {
+    for (const [density, low, high] of [
+      [1e19, 1.6, 2.1],
+      [1e20, 2.3, 3.1],
+    ] as const) {
       const ratio = fit('electron', 'B', density) / fit('electron', 'P', density);
       expect(ratio).toBeGreaterThan(low);
       expect(ratio).toBeLessThan(high);
@@ -328,6 +334,8 @@ describe('minority vs majority carriers of the same type (model property, Klaass
 
 describe('citation', () => {
   it('quotes the r5 of F(P) the model computes with, beside the transcriptions’ disagreeing value', () => {
-    expect(KLAASSEN_SOURCE.citation).toContain(`(${parameterText(KLAASSEN_ELECTRON_HOLE_F.r5)} here, as in the simulators; −0.01552 in pvedu`);
+    expect(KLAASSEN_SOURCE.citation).toContain(
+      `(${parameterText(KLAASSEN_ELECTRON_HOLE_F.r5)} here, as in the simulators; −0.01552 in pvedu`,
+    );
   });
 });

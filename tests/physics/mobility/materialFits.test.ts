@@ -108,7 +108,9 @@ describe('drift mobility: the material fits describe free carriers (no full-ioni
     expect(mobility('', 'hole', al)).toBe(fitMobility('', 'hole', al));
     const zn = sample(GALLIUM_ARSENIDE, 'Zn', 1e18, 400, 1e17);
     expect(mobility('', 'hole', zn)).toBe(fitMobility('', 'hole', zn));
-    expect(mobility('', 'electron', sample(GERMANIUM, 'Sb', 1e16, 77))).toBe(fitMobility('', 'electron', sample(GERMANIUM, 'Sb', 1e16, 77)));
+    expect(mobility('', 'electron', sample(GERMANIUM, 'Sb', 1e16, 77))).toBe(
+      fitMobility('', 'electron', sample(GERMANIUM, 'Sb', 1e16, 77)),
+    );
   });
 
   it('uses the total impurity density for compensated samples', () => {

@@ -27,22 +27,28 @@ const ROOT = join(__dirname, '..', '..', '..');
 const CARRIERS: readonly Carrier[] = ['electron', 'hole'];
 
 describe('every entry', () => {
-  it.each(MOBILITY_MODEL_REGISTRY.map((model) => [model.code, model] as const))('%s names files that exist: equation, parameter table, tests', (_code, model) => {
-    expect(existsSync(join(ROOT, model.equation))).toBe(true);
-    expect(existsSync(join(ROOT, model.parameterTable))).toBe(true);
-    expect(model.tests.length).toBeGreaterThan(0);
-    for (const file of model.tests) expect([file, existsSync(join(ROOT, file))]).toEqual([file, true]);
-    // The first test file named is the check against the published source.
-    expect(model.tests[0]).toMatch(/^tests\/physics\/reference\/.+\.reference\.test\.ts$/);
-  });
+  it.each(MOBILITY_MODEL_REGISTRY.map((model) => [model.code, model] as const))(
+    '%s names files that exist: equation, parameter table, tests',
+    (_code, model) => {
+      expect(existsSync(join(ROOT, model.equation))).toBe(true);
+      expect(existsSync(join(ROOT, model.parameterTable))).toBe(true);
+      expect(model.tests.length).toBeGreaterThan(0);
+      for (const file of model.tests) expect([file, existsSync(join(ROOT, file))]).toEqual([file, true]);
+      // The first test file named is the check against the published source.
+      expect(model.tests[0]).toMatch(/^tests\/physics\/reference\/.+\.reference\.test\.ts$/);
+    },
+  );
 
-  it.each(MOBILITY_MODEL_REGISTRY.map((model) => [model.code, model] as const))('%s has a lower-case code, a material the core knows, and text for every column', (_code, model) => {
-    expect(model.code).toBe(model.code.toLowerCase());
-    expect(model.materials.length).toBeGreaterThan(0);
-    for (const code of model.materials) expect(MATERIALS.map((host) => host.code)).toContain(code);
-    for (const text of [model.quantity, model.name, model.citation, model.validity, model.notes]) expect(text.trim()).not.toBe('');
-    expect(model.parameters).toBeDefined();
-  });
+  it.each(MOBILITY_MODEL_REGISTRY.map((model) => [model.code, model] as const))(
+    '%s has a lower-case code, a material the core knows, and text for every column',
+    (_code, model) => {
+      expect(model.code).toBe(model.code.toLowerCase());
+      expect(model.materials.length).toBeGreaterThan(0);
+      for (const code of model.materials) expect(MATERIALS.map((host) => host.code)).toContain(code);
+      for (const text of [model.quantity, model.name, model.citation, model.validity, model.notes]) expect(text.trim()).not.toBe('');
+      expect(model.parameters).toBeDefined();
+    },
+  );
 
   it('has one code per model, across every material', () => {
     expect(new Set(ALL_MOBILITY_MODEL_CODES).size).toBe(MOBILITY_MODEL_REGISTRY.length);
@@ -102,17 +108,20 @@ describe('what is derived from the registry', () => {
 });
 
 describe('citations quote the parameter table', () => {
-  it.each(MATERIAL_MOBILITY_FITS.map((fit) => [fit.code, fit] as const))('%s: each 300 K value of its table appears in its citation as formatted from the data', (_code, fit) => {
-    for (const carrier of CARRIERS) {
-      const p = fit.parameters[carrier];
-      // μmin = 0 (Hilsum) is the form's, not a quoted value.
-      const quoted = [p.maximum.value, p.referenceDensity.value, p.alpha.value, ...(p.minimum.value === 0 ? [] : [p.minimum.value])];
-      for (const value of quoted) {
-        const written = [parameterText(value), parameterText(value, 2), exponentText(value)];
-        expect([value, written.some((text) => fit.citation.includes(text))]).toEqual([value, true]);
+  it.each(MATERIAL_MOBILITY_FITS.map((fit) => [fit.code, fit] as const))(
+    '%s: each 300 K value of its table appears in its citation as formatted from the data',
+    (_code, fit) => {
+      for (const carrier of CARRIERS) {
+        const p = fit.parameters[carrier];
+        // μmin = 0 (Hilsum) is the form's, not a quoted value.
+        const quoted = [p.maximum.value, p.referenceDensity.value, p.alpha.value, ...(p.minimum.value === 0 ? [] : [p.minimum.value])];
+        for (const value of quoted) {
+          const written = [parameterText(value), parameterText(value, 2), exponentText(value)];
+          expect([value, written.some((text) => fit.citation.includes(text))]).toEqual([value, true]);
+        }
       }
-    }
-  });
+    },
+  );
 });
 
 describe('parameterText', () => {

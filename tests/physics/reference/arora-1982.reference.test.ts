@@ -20,7 +20,10 @@ import { logSpaced, siliconSample } from '../transportSamples';
 
 describe('Arora et al. (1982)', () => {
   it('abstract: within ±13 % of measured mobility at 300 K up to 1e20 cm⁻³ (measured here: Thurber 1981 data via ASTM F723)', () => {
-    for (const [species, carrier] of [['B', 'hole'], ['P', 'electron']] as const) {
+    for (const [species, carrier] of [
+      ['B', 'hole'],
+      ['P', 'electron'],
+    ] as const) {
       for (const n of logSpaced(13, 20, 8)) {
         const measured = 1 / (ELEMENTARY_CHARGE * n * f723Resistivity(species, n));
         expect(Math.abs(aroraMobility(carrier, n, 300) / measured - 1)).toBeLessThan(0.13);
@@ -49,7 +52,10 @@ describe('Arora et al. (1982)', () => {
   it('lattice scattering dominates light doping: μ falls about as T^−2.3 (electrons) and T^−2.2 (holes) (exponents read in Charon)', () => {
     // The μ0·T^b term carries exponents −2.33 and −2.23 (read in Charon, above); the
     // Tn^−0.57 μmin term softens the slope slightly between 250 and 500 K.
-    for (const [carrier, lattice] of [['electron', -2.33], ['hole', -2.23]] as const) {
+    for (const [carrier, lattice] of [
+      ['electron', -2.33],
+      ['hole', -2.23],
+    ] as const) {
       const slope = Math.log(aroraMobility(carrier, 1e13, 500) / aroraMobility(carrier, 1e13, 250)) / Math.LN2;
       expect(slope).toBeLessThan(-1.9);
       expect(slope).toBeGreaterThan(lattice);

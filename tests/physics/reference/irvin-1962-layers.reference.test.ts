@@ -23,7 +23,6 @@ import { erfc, erfcinv } from '../../../src/physics/layers/specialFunctions';
 import { ELEMENTARY_CHARGE, CM_PER_UM, SILICON, resolveDopant } from '../../../src/physics';
 import { IRVIN_BULK_READINGS, READ_OFF_TOLERANCE } from './data/irvin1962Bulk';
 
-
 /** Irvin's mobility at total density N from his bulk curve, log-log interpolated, constant outside the table. */
 function irvinMobility(type: 'n' | 'p', density: number): number {
   const column = type === 'n' ? 1 : 2;
@@ -54,7 +53,12 @@ function irvinAverageConductivity(profile: 'gaussian' | 'erfc', type: 'n' | 'p',
 function ourAverageConductivity(profile: 'gaussian' | 'erfc', dopant: string, ns: number, nb: number): number {
   const xjUm = 1;
   const rs = diffusedLayerSheetResistance({
-    profile, surfaceConcentration: ns, junctionDepthUm: xjUm, background: nb, dopant: resolveDopant(SILICON, dopant), temperature: 300,
+    profile,
+    surfaceConcentration: ns,
+    junctionDepthUm: xjUm,
+    background: nb,
+    dopant: resolveDopant(SILICON, dopant),
+    temperature: 300,
   });
   return 1 / (rs * xjUm * CM_PER_UM);
 }
@@ -62,7 +66,14 @@ function ourAverageConductivity(profile: 'gaussian' | 'erfc', dopant: string, ns
 const CASES: ReadonlyArray<['gaussian' | 'erfc', 'P' | 'B', number, number]> = [];
 for (const profile of ['gaussian', 'erfc'] as const) {
   for (const dopant of ['P', 'B'] as const) {
-    for (const [ns, nb] of [[1e17, 1e15], [1e18, 1e15], [1e19, 1e15], [1e20, 1e15], [1e19, 1e17], [1e20, 1e18]] as const) {
+    for (const [ns, nb] of [
+      [1e17, 1e15],
+      [1e18, 1e15],
+      [1e19, 1e15],
+      [1e20, 1e15],
+      [1e19, 1e17],
+      [1e20, 1e18],
+    ] as const) {
       (CASES as Array<['gaussian' | 'erfc', 'P' | 'B', number, number]>).push([profile, dopant, ns, nb]);
     }
   }

@@ -11,7 +11,6 @@ import { resistivity } from '../../../src/physics/transport';
 import { siliconSample } from '../transportSamples';
 import { IRVIN_BULK_READINGS, READ_OFF_TOLERANCE } from './data/irvin1962Bulk';
 
-
 describe('default resistivity at 300 K vs Irvin (1962) curves (readings from memory, ±20 %)', () => {
   it.each(IRVIN_BULK_READINGS)('at %s cm⁻³: n-type (P) ≈ %s Ω·cm, p-type (B) ≈ %s Ω·cm', (density, nType, pType) => {
     expect(Math.abs(resistivity(siliconSample('P', density)) / nType - 1)).toBeLessThan(READ_OFF_TOLERANCE);

@@ -77,9 +77,12 @@ describe('Klaassen (1992) I: concentration dependence at 300 K', () => {
   // Kept as a failing expectation until the paper settles it (a value change is a physics change). With −0.01552
   // the 300 K minority mobilities fall by about 13 % (holes in n-Si, 1e19) to 21 % (holes, 1e20) and
   // 11–17 % (electrons in p-Si, 1e19–1e20).
-  it.failing('KNOWN DISAGREEMENT (expected to fail): r5 = −0.01552, the paper’s value as two transcriptions that follow the paper print it', () => {
-    expect(KLAASSEN_ELECTRON_HOLE_F.r5).toBe(-0.01552);
-  });
+  it.failing(
+    'KNOWN DISAGREEMENT (expected to fail): r5 = −0.01552, the paper’s value as two transcriptions that follow the paper print it',
+    () => {
+      expect(KLAASSEN_ELECTRON_HOLE_F.r5).toBe(-0.01552);
+    },
+  );
 
   it('majority mobility at 1e18 cm⁻³: 277 (electrons, P) and 153 (holes, B) cm²/(V·s)', () => {
     // Klaassen I (from memory): for majority carriers at 300 K the model reduces to the
@@ -92,7 +95,10 @@ describe('Klaassen (1992) I: concentration dependence at 300 K', () => {
   });
 
   it('the 300 K resistivity with model klaassen is 1/(q·N·μ_Klaassen): the fit assumed full ionization', () => {
-    for (const [dopant, carrier] of [['P', 'electron'], ['B', 'hole']] as const) {
+    for (const [dopant, carrier] of [
+      ['P', 'electron'],
+      ['B', 'hole'],
+    ] as const) {
       for (const n of logSpaced(14, 20, 1)) {
         const sample = siliconSample(dopant, n);
         const fromFit = 1 / (ELEMENTARY_CHARGE * n * klaassen(carrier, dopant, n));
@@ -125,7 +131,10 @@ describe('Klaassen (1992) I: concentration dependence at 300 K', () => {
 
 describe('Klaassen (1992) II: temperature dependence', () => {
   it('lattice mobility ∝ T^−2.285 (electrons) and T^−2.247 (holes), seen in undoped Si over 100–400 K (θ as read in Charon and Genius)', () => {
-    for (const [carrier, theta] of [['electron', 2.285], ['hole', 2.247]] as const) {
+    for (const [carrier, theta] of [
+      ['electron', 2.285],
+      ['hole', 2.247],
+    ] as const) {
       const ratio = klaassen(carrier, 'P', 0, 200) / klaassen(carrier, 'P', 0, 400);
       expect(ratio / 2 ** theta).toBeCloseTo(1, 2); // residual ≤ 5e-4: electron–hole scattering of ni at 400 K
       expect(klaassen(carrier, 'P', 0, 100) / klaassenLatticeMobility(carrier, 100)).toBeCloseTo(1, 4);

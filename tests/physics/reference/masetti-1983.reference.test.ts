@@ -64,7 +64,11 @@ describe('Masetti et al. (1983)', () => {
   });
 
   it('is what the default resistivity reproduces at 300 K: ρ = 1/(q·N·μ_Masetti) (the full-ionization correction, docs/physics.md)', () => {
-    for (const [dopant, carrier] of [['P', 'electron'], ['As', 'electron'], ['B', 'hole']] as const) {
+    for (const [dopant, carrier] of [
+      ['P', 'electron'],
+      ['As', 'electron'],
+      ['B', 'hole'],
+    ] as const) {
       for (const n of logSpaced(14, 21, 1)) {
         const sample = siliconSample(dopant, n);
         const fromFit = 1 / (ELEMENTARY_CHARGE * n * fitMobility('masetti', carrier, sample));

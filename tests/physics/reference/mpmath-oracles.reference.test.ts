@@ -34,7 +34,10 @@ describe('mpmath oracles (mpmath 1.3, 50 digits)', () => {
 
   // vanDerPauw.ts solves the equation "exactly" by a bracketed root in double precision: 1e-12 relative
   // allows a root tolerance of ~4500 ulp, far looser than exact but independent of our output.
-  it.each(reference.vanDerPauw.map((p) => [p.ra, p.rb, p.sheetResistance]))('Ra = %p Ω, Rb = %p Ω: Rs = %s Ω/sq to 1e-12 relative', (ra, rb, rs) => {
-    expect(Math.abs(vanDerPauwSheetResistance(Number(ra), Number(rb)) / Number(rs) - 1)).toBeLessThan(1e-12);
-  });
+  it.each(reference.vanDerPauw.map((p) => [p.ra, p.rb, p.sheetResistance]))(
+    'Ra = %p Ω, Rb = %p Ω: Rs = %s Ω/sq to 1e-12 relative',
+    (ra, rb, rs) => {
+      expect(Math.abs(vanDerPauwSheetResistance(Number(ra), Number(rb)) / Number(rs) - 1)).toBeLessThan(1e-12);
+    },
+  );
 });

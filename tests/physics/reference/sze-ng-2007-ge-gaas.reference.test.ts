@@ -47,7 +47,9 @@ describe('Sze & Ng (2007), Ge at 300 K (from memory)', () => {
     // μn = 4.9e7·T^−1.66, μp = 1.05e9·T^−2.33: the temperature laws the fit uses.
     expect(relative(4.9e7 * Math.pow(300, -1.66), 3900)).toBeLessThan(0.08);
     expect(relative(1.05e9 * Math.pow(300, -2.33), 1900)).toBeLessThan(0.08);
-    const ratio = fitMobility('', 'electron', lightlyDoped(GERMANIUM, 'electron', 200)) / fitMobility('', 'electron', lightlyDoped(GERMANIUM, 'electron', 300));
+    const ratio =
+      fitMobility('', 'electron', lightlyDoped(GERMANIUM, 'electron', 200)) /
+      fitMobility('', 'electron', lightlyDoped(GERMANIUM, 'electron', 300));
     expect(ratio).toBeCloseTo(Math.pow(200 / 300, -1.66), 2);
   });
 });

@@ -4,12 +4,7 @@
  * Nv = 2.65e19 cm⁻³, ni = 9.65e9 cm⁻³) and ch. 1, Fig. 12 (ionization
  * energies). All values from memory.
  */
-import {
-  bandgap,
-  conductionBandDensity,
-  intrinsicDensity,
-  valenceBandDensity,
-} from '../../../src/physics/bands';
+import { bandgap, conductionBandDensity, intrinsicDensity, valenceBandDensity } from '../../../src/physics/bands';
 import { thermalVoltage } from '../../../src/physics/constants';
 import { resolveDopant } from '../../../src/physics/dopants';
 import { solveEquilibrium } from '../../../src/physics/equilibrium';

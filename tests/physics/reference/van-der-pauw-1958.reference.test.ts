@@ -20,13 +20,16 @@ describe('van der Pauw (1958)', () => {
     expect(vanDerPauwSheetResistance(22.1, 22.1)).toBeCloseTo((Math.PI * 22.1) / Math.LN2, 12);
   });
 
-  it.each([1.2, 1.5, 2])('agrees with van der Pauw’s series correction f at Ra/Rb = %s (series from memory; truncation error of order x⁶)', (ratio) => {
-    const rb = 10;
-    const ra = rb * ratio;
-    const f = vanDerPauwSheetResistance(ra, rb) / ((Math.PI * (ra + rb)) / (2 * Math.LN2));
-    const x = (ratio - 1) / (ratio + 1);
-    expect(Math.abs(f - seriesCorrection(ra, rb))).toBeLessThan(0.1 * x ** 6 + 1e-12);
-  });
+  it.each([1.2, 1.5, 2])(
+    'agrees with van der Pauw’s series correction f at Ra/Rb = %s (series from memory; truncation error of order x⁶)',
+    (ratio) => {
+      const rb = 10;
+      const ra = rb * ratio;
+      const f = vanDerPauwSheetResistance(ra, rb) / ((Math.PI * (ra + rb)) / (2 * Math.LN2));
+      const x = (ratio - 1) / (ratio + 1);
+      expect(Math.abs(f - seriesCorrection(ra, rb))).toBeLessThan(0.1 * x ** 6 + 1e-12);
+    },
+  );
 
   it('f for Ra/Rb = 10 is about 0.70 (van der Pauw 1958, graph of f; read from memory)', () => {
     const f = vanDerPauwSheetResistance(100, 10) / ((Math.PI * 110) / (2 * Math.LN2));

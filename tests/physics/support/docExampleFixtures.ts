@@ -45,4 +45,3 @@ export const boronAt300K = siliconWithoutDensity('B', 300);
 export const boronAt296K = siliconWithoutDensity('B', 296.15);
 export const phosphorusAt300K = siliconWithoutDensity('phosphorus', 300);
 export const phosphorusAt77K = siliconWithoutDensity('phosphorus', 77);
-

@@ -257,20 +257,28 @@ export function mismatches(actual: unknown, expected: ResultPattern, where = 'th
       if (typeof actual !== 'number') return [`${where} is ${describe(actual)}, not a number`];
       const within = Math.abs(actual - expected.value) <= expected.tolerance;
       if (within) return [];
-      const stated = expected.tolerance === 0 ? `exactly ${expected.text}` : `≈ ${expected.text} (±${expected.tolerance.toPrecision(1)}, half a unit in its last printed digit)`;
+      const stated =
+        expected.tolerance === 0
+          ? `exactly ${expected.text}`
+          : `≈ ${expected.text} (±${expected.tolerance.toPrecision(1)}, half a unit in its last printed digit)`;
       return [`${where} is ${actual}; the example states ${stated}`];
     }
     case 'string': {
       if (typeof actual !== 'string') return [`${where} is ${describe(actual)}, not a string`];
       const agrees = expected.prefixOnly ? actual.startsWith(expected.value) : actual === expected.value;
-      return agrees ? [] : [`${where} is ${JSON.stringify(actual)}; the example states ${JSON.stringify(expected.value)}${expected.prefixOnly ? '…' : ''}`];
+      return agrees
+        ? []
+        : [`${where} is ${JSON.stringify(actual)}; the example states ${JSON.stringify(expected.value)}${expected.prefixOnly ? '…' : ''}`];
     }
     case 'constant':
       return actual === expected.value ? [] : [`${where} is ${describe(actual)}; the example states ${String(expected.value)}`];
     case 'array': {
       if (!Array.isArray(actual)) return [`${where} is ${describe(actual)}, not an array`];
       const lengthAgrees = expected.open ? actual.length >= expected.items.length : actual.length === expected.items.length;
-      if (!lengthAgrees) return [`${where} has ${actual.length} entries (${describe(actual)}); the example lists ${expected.items.length}${expected.open ? ' or more' : ''}`];
+      if (!lengthAgrees)
+        return [
+          `${where} has ${actual.length} entries (${describe(actual)}); the example lists ${expected.items.length}${expected.open ? ' or more' : ''}`,
+        ];
       return expected.items.flatMap((item, i) => mismatches(actual[i], item, `${where}[${i}]`));
     }
     case 'object': {
@@ -278,8 +286,15 @@ export function mismatches(actual: unknown, expected: ResultPattern, where = 'th
       const record = actual as Record<string, unknown>;
       const stated = new Set(expected.entries.map(([key]) => key));
       const extra = expected.open ? [] : Object.keys(record).filter((key) => !stated.has(key));
-      const problems = extra.length > 0 ? [`${where} also has ${extra.join(', ')}, which the example does not list (end the object with … if it need not)`] : [];
-      return problems.concat(expected.entries.flatMap(([key, item]) => (key in record ? mismatches(record[key], item, `${where}.${key}`) : [`${where} has no ${key}`])));
+      const problems =
+        extra.length > 0
+          ? [`${where} also has ${extra.join(', ')}, which the example does not list (end the object with … if it need not)`]
+          : [];
+      return problems.concat(
+        expected.entries.flatMap(([key, item]) =>
+          key in record ? mismatches(record[key], item, `${where}.${key}`) : [`${where} has no ${key}`],
+        ),
+      );
     }
   }
 }

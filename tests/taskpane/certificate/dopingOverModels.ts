@@ -27,7 +27,11 @@ const F723_INVERSE_DOPANTS = new Set(['boron', 'b', 'phosphorus']);
  * @returns lowest and highest density in cm⁻³, highest/lowest − 1 and the models used
  * @example dopingOverModels(12, 'acceptor', 296.15).models // the five physics-based models, no astm-f723
  */
-export function dopingOverModels(rho: number, code: string, temperatureK: number): { lowest: number; highest: number; relative: number; models: string[] } {
+export function dopingOverModels(
+  rho: number,
+  code: string,
+  temperatureK: number,
+): { lowest: number; highest: number; relative: number; models: string[] } {
   if (Math.abs(temperatureK - 296.15) > 0.5) throw new Error('dopingOverModels knows the models that apply at 23 °C only');
   const models: string[] = [...SILICON_MODELS, ...(F723_INVERSE_DOPANTS.has(code.toLowerCase()) ? ['astm-f723'] : [])];
   const densities = models.map((model) => value('DOPING', rho, code, temperatureK, model));

@@ -56,7 +56,16 @@ describe('role from one header', () => {
 describe('mapping of a whole header row', () => {
   it('maps the fictional test certificate completely', () => {
     expect(guessMapping(CERTIFICATE_HEADERS)).toEqual([
-      'lot', 'wafer', 'type', 'rho-min', 'rho-max', 'rho-center', 'rho-edge', 'rho-edge', 'rho-edge', 'thickness',
+      'lot',
+      'wafer',
+      'type',
+      'rho-min',
+      'rho-max',
+      'rho-center',
+      'rho-edge',
+      'rho-edge',
+      'rho-edge',
+      'thickness',
     ]);
   });
 
@@ -69,10 +78,18 @@ describe('mapping of a whole header row', () => {
   });
 
   it('takes a column of type words as the type column when no header says type', () => {
-    const columns = [['A1', 'A2'], ['P', 'n-type'], [8, 9]];
+    const columns = [
+      ['A1', 'A2'],
+      ['P', 'n-type'],
+      [8, 9],
+    ];
     expect(guessMapping(['Wafer', 'Class', 'Rho min'], columns)).toEqual(['wafer', 'type', 'rho-min']);
     // In any case, and with the generic words the functions take.
-    for (const words of [['p', 'N-TYPE'], ['Donor', 'ACCEPTOR'], ['Phosphorus', 'bOrOn']]) {
+    for (const words of [
+      ['p', 'N-TYPE'],
+      ['Donor', 'ACCEPTOR'],
+      ['Phosphorus', 'bOrOn'],
+    ]) {
       expect(guessMapping(['Wafer', 'Class', 'Rho min'], [['A1', 'A2'], words, [8, 9]])).toEqual(['wafer', 'type', 'rho-min']);
     }
   });
@@ -130,7 +147,10 @@ describe('units in headers', () => {
   });
 
   it('a table’s unit guess: one resistivity unit for all, thickness from its header', () => {
-    const guess = guessUnits(['Rho min (mOhm-cm)', 'Rho max (mOhm-cm)', 'Centre', 'Thk (mm)'], ['rho-min', 'rho-max', 'rho-center', 'thickness']);
+    const guess = guessUnits(
+      ['Rho min (mOhm-cm)', 'Rho max (mOhm-cm)', 'Centre', 'Thk (mm)'],
+      ['rho-min', 'rho-max', 'rho-center', 'thickness'],
+    );
     expect(guess.resistivityUnit).toBe('mohm-cm');
     expect(guess.thicknessUnit).toBe('mm');
   });

@@ -93,7 +93,18 @@ describe('readings measured at another temperature', () => {
     const values = port.engineValues();
     CERTIFICATE_ROWS.forEach((row, index) => {
       const sheetRow = TOP + 1 + index;
-      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [string, string, string, number, number, number, number, number, number, number];
+      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [
+        string,
+        string,
+        string,
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+      ];
       const code = type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : type;
       const corrected = [centre, e1, e2, e3].map((reading) => value('RESISTIVITYAT', reading, code, 298.15, 296.15));
       corrected.forEach((expected, k) => expect(numberAt(values, sheetRow, FIRST_NEW + 4 + k) / expected).toBeCloseTo(1, 12));
@@ -111,7 +122,11 @@ describe('readings measured at another temperature', () => {
     // Invented row: ρ window 8–12 Ω·cm, readings 12.1 at 25 °C (boron, TCR about +0.7 %/K at 23 °C).
     const table = [CERTIFICATE_TABLE[0], ['KS-9999', 'W01', 'P', 8, 12, 12.1, 12.1, 12.1, 12.1, 525]];
     const uncorrected = await portWithTable(table);
-    await addCertificateCheck(uncorrected.port, await uncorrected.port.selection(), { ...BASE, mapping: uncorrected.mapping, measuredAt: null });
+    await addCertificateCheck(uncorrected.port, await uncorrected.port.selection(), {
+      ...BASE,
+      mapping: uncorrected.mapping,
+      measuredAt: null,
+    });
     expect(valueAt(uncorrected.port.engineValues(), TOP + 1, FIRST_NEW + 4)).toBe('no');
     const corrected = await portWithTable(table);
     await addCertificateCheck(corrected.port, await corrected.port.selection(), { ...BASE, mapping: corrected.mapping });
@@ -124,7 +139,10 @@ describe('readings measured at another temperature', () => {
       ['KS-1', 'P', 8000, 12000, 10000, null],
     ];
     const { port, mapping } = await portWithTable(table);
-    const plan = planCertificateCheck({ block: await port.selection(), contents: await port.read(await port.selection()) }, { ...BASE, mapping, resistivityUnit: 'mohm-cm' });
+    const plan = planCertificateCheck(
+      { block: await port.selection(), contents: await port.read(await port.selection()) },
+      { ...BASE, mapping, resistivityUnit: 'mohm-cm' },
+    );
     const at = qualifiedName(findFunction('RESISTIVITYAT')!);
     const row = plan.writes[0].cells[1] as string[];
     const centreFormula = row.find((formula) => formula.includes(at))!;
@@ -139,7 +157,9 @@ describe('readings measured at another temperature', () => {
   it('never writes over filled cells, now that the block is wider', async () => {
     const { port, mapping } = await portWithTable();
     port.put(TOP + 2, FIRST_NEW + 11, [['note']]);
-    await expect(addCertificateCheck(port, await port.selection(), { ...BASE, mapping })).rejects.toThrow(/Nothing was written: Sheet1!L2:W6 must be empty, but W4/);
+    await expect(addCertificateCheck(port, await port.selection(), { ...BASE, mapping })).rejects.toThrow(
+      /Nothing was written: Sheet1!L2:W6 must be empty, but W4/,
+    );
     expect(port.writes).toEqual([]);
   });
 

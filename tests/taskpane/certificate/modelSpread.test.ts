@@ -66,7 +66,9 @@ function rowOf(values: Map<string, ResultElement[][]>, sheetRow: number, from: n
 
 function expectClose(shown: readonly ResultElement[], expected: readonly number[]): void {
   expect(shown.every((cell) => typeof cell === 'number')).toBe(true);
-  (shown as number[]).forEach((cell, k) => (k < 2 ? expect(cell / expected[k]).toBeCloseTo(1, 12) : expect(cell).toBeCloseTo(expected[k], 12)));
+  (shown as number[]).forEach((cell, k) =>
+    k < 2 ? expect(cell / expected[k]).toBeCloseTo(1, 12) : expect(cell).toBeCloseTo(expected[k], 12),
+  );
 }
 
 function codeOf(type: unknown): string {
@@ -88,11 +90,20 @@ describe('model spread columns in the certificate check', () => {
     const { port, mapping } = await portWithTable();
     const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, modelSpread: true });
     expect(plan.headers).toEqual([...CHECK_HEADERS.slice(0, 4), ...SPREAD_HEADERS, ...CHECK_HEADERS.slice(4)]);
-    expect(plan.summary).toBe('Checks 4 wafer rows: 14 new columns in Sheet1!L2:Y6, parameters in AA2:AB5 (change them there to re-check).');
+    expect(plan.summary).toBe(
+      'Checks 4 wafer rows: 14 new columns in Sheet1!L2:Y6, parameters in AA2:AB5 (change them there to re-check).',
+    );
     const firstRow = plan.writes[0].cells[1];
     // Same ρ cell, dopant cell and temperature cell as the doping columns beside it; spill cells left empty.
     expect(firstRow.slice(1, 3)).toEqual(['=DRIFT.DOPING(F3,L3,$AB$5)', '=DRIFT.DOPING(E3,L3,$AB$5)']);
-    expect(firstRow.slice(AT_MAX, AT_MIN + 3)).toEqual([`=${DOPINGSPREAD}(F3,L3,$AB$5)`, null, null, `=${DOPINGSPREAD}(E3,L3,$AB$5)`, null, null]);
+    expect(firstRow.slice(AT_MAX, AT_MIN + 3)).toEqual([
+      `=${DOPINGSPREAD}(F3,L3,$AB$5)`,
+      null,
+      null,
+      `=${DOPINGSPREAD}(E3,L3,$AB$5)`,
+      null,
+      null,
+    ]);
     // The pass/fail formula reads the window check and the readings check only, never the spread.
     expect(firstRow.at(-1)).toBe('=IF(AND(O3="yes",V3<>"no"),"PASS","FAIL")');
 
@@ -106,12 +117,18 @@ describe('model spread columns in the certificate check', () => {
       expectClose(rowOf(values, sheetRow, FIRST_NEW + AT_MAX, 3), atMax);
       expectClose(rowOf(values, sheetRow, FIRST_NEW + AT_MIN, 3), atMin);
       // And, without DOPINGSPREAD: the lowest and highest of DRIFT.DOPING under each model by name.
-      for (const [offset, rho] of [[AT_MAX, rhoMax], [AT_MIN, rhoMin]] as const) {
+      for (const [offset, rho] of [
+        [AT_MAX, rhoMax],
+        [AT_MIN, rhoMin],
+      ] as const) {
         const { lowest, highest, relative } = dopingOverModels(rho, code, 296.15);
         expectClose(rowOf(values, sheetRow, FIRST_NEW + offset, 3), [lowest, highest, relative]);
       }
       // The default model (f723-anchored) is one of the models the spread covers, so its doping lies inside.
-      for (const [end, range] of [[1, atMax], [2, atMin]] as const) {
+      for (const [end, range] of [
+        [1, atMax],
+        [2, atMin],
+      ] as const) {
         const doping = valueAt(values, sheetRow, FIRST_NEW + end) as number;
         expect(doping).toBeGreaterThanOrEqual(range[0] * (1 - 1e-12));
         expect(doping).toBeLessThanOrEqual(range[1] * (1 + 1e-12));
@@ -139,13 +156,26 @@ describe('model spread columns in the certificate check', () => {
   it('formats the densities like the doping columns and the relative spread as a percentage', async () => {
     const { port, mapping } = await portWithTable();
     await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, modelSpread: true });
-    const formatOf = (offset: number) => port.styles.find((style) => style.block.column === FIRST_NEW + offset && style.numberFormat !== undefined)?.numberFormat;
-    expect([AT_MAX, AT_MAX + 1, AT_MAX + 2, AT_MIN, AT_MIN + 1, AT_MIN + 2].map(formatOf)).toEqual(['0.00E+00', '0.00E+00', '0.0%', '0.00E+00', '0.00E+00', '0.0%']);
+    const formatOf = (offset: number) =>
+      port.styles.find((style) => style.block.column === FIRST_NEW + offset && style.numberFormat !== undefined)?.numberFormat;
+    expect([AT_MAX, AT_MAX + 1, AT_MAX + 2, AT_MIN, AT_MIN + 1, AT_MIN + 2].map(formatOf)).toEqual([
+      '0.00E+00',
+      '0.00E+00',
+      '0.0%',
+      '0.00E+00',
+      '0.00E+00',
+      '0.0%',
+    ]);
   });
 
   it('with readings measured at another temperature, is still the certificate’s ρ at the certificate’s temperature', async () => {
     const { port, mapping } = await portWithTable();
-    const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, modelSpread: true, measuredAt: { value: 25, unit: 'C' } });
+    const plan = await addCertificateCheck(port, await port.selection(), {
+      ...BASE,
+      mapping,
+      modelSpread: true,
+      measuredAt: { value: 25, unit: 'C' },
+    });
     const labels = plan.writes[1].cells.map((row) => row[0]);
     const temperatureCell = `$${'AF'}$${TOP + 1 + labels.indexOf('Temperature (K)')}`;
     expect(plan.parameterBlock.column).toBe(30); // AE: 18 new columns (4 corrected readings) and one empty column
@@ -187,12 +217,26 @@ describe('model spread columns in the certificate check', () => {
 
   it('in a material with one resistivity model, shows that model’s doping twice and a spread of 0', async () => {
     // DRIFT.DOPINGSPREAD's help: "another material has one model, so its spread is 0".
-    const table = [['Wafer', 'Rho min', 'Rho max'], ['G1', 1, 3]];
+    const table = [
+      ['Wafer', 'Rho min', 'Rho max'],
+      ['G1', 1, 3],
+    ];
     const { port, mapping } = await portWithTable(table);
-    await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, dopant: 'donor', material: 'GaAs', neededMin: 1e14, neededMax: 1e16, modelSpread: true });
+    await addCertificateCheck(port, await port.selection(), {
+      ...BASE,
+      mapping,
+      dopant: 'donor',
+      material: 'GaAs',
+      neededMin: 1e14,
+      neededMax: 1e16,
+      modelSpread: true,
+    });
     const values = port.engineValues();
     const first = LEFT + table[0].length;
-    for (const [offset, rho] of [[3, 3], [6, 1]] as const) {
+    for (const [offset, rho] of [
+      [3, 3],
+      [6, 1],
+    ] as const) {
       const only = value('DOPING', rho, 'donor', 296.15, undefined, 'GaAs');
       expectClose(rowOf(values, TOP + 1, first + offset, 3), [only, only, 0]);
     }
@@ -201,9 +245,18 @@ describe('model spread columns in the certificate check', () => {
   it('a row whose DOPINGSPREAD is an error (77 K freeze-out) shows the error with its message in all three cells', async () => {
     // At 77 K, ρ of P-doped silicon falls, rises and falls again with doping
     // (tests/physics/inverseAmbiguity.test.ts): 0.30–0.42 Ω·cm has three dopings.
-    const table = [['Wafer', 'Rho min', 'Rho max'], ['A', 0.3, 0.42]];
+    const table = [
+      ['Wafer', 'Rho min', 'Rho max'],
+      ['A', 0.3, 0.42],
+    ];
     const { port, mapping } = await portWithTable(table);
-    await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, dopant: 'phosphorus', temperatureK: 77, modelSpread: true });
+    await addCertificateCheck(port, await port.selection(), {
+      ...BASE,
+      mapping,
+      dopant: 'phosphorus',
+      temperatureK: 77,
+      modelSpread: true,
+    });
     const values = port.engineValues();
     const first = LEFT + table[0].length;
     const direct = evaluate(findFunction('DOPINGSPREAD')!, [0.42, 'phosphorus', 77])[0][0];
@@ -225,7 +278,9 @@ describe('model spread columns in the certificate check', () => {
     const { port, mapping } = await portWithTable();
     port.put(TOP + 2, FIRST_NEW + 12, [['note']]);
     await expect(addCertificateCheck(port, await port.selection(), { ...BASE, mapping, modelSpread: true })).rejects.toThrow(
-      new PaneRefusal('Nothing was written: Sheet1!L2:Y6 must be empty, but X4 holds something. Clear that block or choose another place, then try again.'),
+      new PaneRefusal(
+        'Nothing was written: Sheet1!L2:Y6 must be empty, but X4 holds something. Clear that block or choose another place, then try again.',
+      ),
     );
     expect(port.writes).toEqual([]);
     expect(port.highlights).toEqual([]);

@@ -56,12 +56,23 @@ function numberAt(values: Map<string, ResultElement[][]>, row: number, column: n
 describe('certificate check on the fictional test table', () => {
   it('writes one formula row per wafer that the engine evaluates to the catalog’s numbers', async () => {
     const { port, mapping } = await portWithTable();
-    const plan = await addCertificateCheck(port, (await port.selection()), { ...BASE, mapping });
+    const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping });
     expect(plan.headers).toEqual(CHECK_HEADERS);
     const values = port.engineValues();
     CERTIFICATE_ROWS.forEach((row, index) => {
       const sheetRow = TOP + 1 + index;
-      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [string, string, string, number, number, number, number, number, number, number];
+      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [
+        string,
+        string,
+        string,
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+      ];
       // The certificate's P/N are conductivity types: generic acceptor / donor.
       const code = type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : type;
       expect(valueAt(values, sheetRow, FIRST_NEW)).toBe(code);
@@ -88,7 +99,10 @@ describe('certificate check on the fictional test table', () => {
 
   it('uses catalog names and parameter cells, not pasted numbers', async () => {
     const { port, mapping } = await portWithTable();
-    const plan = planCertificateCheck({ block: await port.selection(), contents: await port.read(await port.selection()) }, { ...BASE, mapping });
+    const plan = planCertificateCheck(
+      { block: await port.selection(), contents: await port.read(await port.selection()) },
+      { ...BASE, mapping },
+    );
     const firstRow = plan.writes[0].cells[1] as string[];
     const doping = qualifiedName(findFunction('DOPING')!);
     expect(firstRow[1]).toBe(`=${doping}(F3,L3,$V$5,$V$6,$V$7)`);
@@ -107,7 +121,9 @@ describe('certificate check on the fictional test table', () => {
     expect(plan.writes[1].block).toEqual({ sheet: 'Sheet1', row: 1, column: 20, rowCount: 6, columnCount: 2 });
     // No literal number in any data formula (other than "no readings" = COUNT()=0): every value comes from a cell.
     const formulas = plan.writes[0].cells.slice(1).flat() as string[];
-    const withoutReferences = formulas.map((formula) => formula.replace(/\$?[A-Z]{1,3}\$?\d+/g, 'REF').replace(/COUNT\(([^)]*)\)=0/g, 'COUNT($1)=ZERO'));
+    const withoutReferences = formulas.map((formula) =>
+      formula.replace(/\$?[A-Z]{1,3}\$?\d+/g, 'REF').replace(/COUNT\(([^)]*)\)=0/g, 'COUNT($1)=ZERO'),
+    );
     expect(withoutReferences.filter((formula) => /\d/.test(formula))).toEqual([]);
   });
 
@@ -129,7 +145,11 @@ describe('certificate check on the fictional test table', () => {
     const { port, mapping } = await portWithTable();
     const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping });
     expect(port.highlights.map((h) => h.text)).toEqual(['PASS', 'FAIL']);
-    expect(port.highlights.every((h) => h.block.column === FIRST_NEW + 7 && h.block.row === TOP + 1 && h.block.rowCount === CERTIFICATE_ROWS.length)).toBe(true);
+    expect(
+      port.highlights.every(
+        (h) => h.block.column === FIRST_NEW + 7 && h.block.row === TOP + 1 && h.block.rowCount === CERTIFICATE_ROWS.length,
+      ),
+    ).toBe(true);
     expect(port.highlights.every((h) => /^#[0-9a-f]{6}$/.test(h.fill) && /^#[0-9a-f]{6}$/.test(h.fontColor))).toBe(true);
     expect(port.styles[0]).toEqual({ block: { ...plan.columnsBlock, rowCount: 1 }, bold: true });
     expect(port.styles.some((s) => s.numberFormat === '0.00E+00' && s.block.column === FIRST_NEW + 1)).toBe(true);
@@ -139,7 +159,9 @@ describe('certificate check on the fictional test table', () => {
     const { port, mapping } = await portWithTable();
     port.put(TOP + 3, FIRST_NEW + 4, [['note']]);
     await expect(addCertificateCheck(port, await port.selection(), { ...BASE, mapping })).rejects.toThrow(
-      new PaneRefusal('Nothing was written: Sheet1!L2:S6 must be empty, but P5 holds something. Clear that block or choose another place, then try again.'),
+      new PaneRefusal(
+        'Nothing was written: Sheet1!L2:S6 must be empty, but P5 holds something. Clear that block or choose another place, then try again.',
+      ),
     );
     expect(port.writes).toEqual([]);
     expect(port.highlights).toEqual([]);
@@ -148,7 +170,9 @@ describe('certificate check on the fictional test table', () => {
   it('refuses when the parameter block is not empty', async () => {
     const { port, mapping } = await portWithTable();
     port.put(TOP + 2, FIRST_NEW + 10, [['x']]);
-    await expect(addCertificateCheck(port, await port.selection(), { ...BASE, mapping })).rejects.toThrow(/Sheet1!U2:V7 must be empty, but V4/);
+    await expect(addCertificateCheck(port, await port.selection(), { ...BASE, mapping })).rejects.toThrow(
+      /Sheet1!U2:V7 must be empty, but V4/,
+    );
   });
 });
 
@@ -156,7 +180,12 @@ describe('options', () => {
   it('a model and material left to their defaults get no cell, and the formulas omit them', async () => {
     const { port, mapping } = await portWithTable();
     const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, model: '', material: '' });
-    expect(plan.writes[1].cells.map((row) => row[0])).toEqual(['Certificate check parameters', 'Needed doping min (cm⁻³)', 'Needed doping max (cm⁻³)', 'Temperature (K)']);
+    expect(plan.writes[1].cells.map((row) => row[0])).toEqual([
+      'Certificate check parameters',
+      'Needed doping min (cm⁻³)',
+      'Needed doping max (cm⁻³)',
+      'Temperature (K)',
+    ]);
     expect(plan.writes[0].cells[1][1]).toBe(`=${qualifiedName(findFunction('DOPING')!)}(F3,L3,$V$5)`);
     const values = port.engineValues();
     expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'acceptor')).toBeCloseTo(1, 12);
@@ -169,12 +198,19 @@ describe('options', () => {
     expect(valueAt(values, TOP + 1, FIRST_NEW)).toBe('phosphorus');
     expect(numberAt(values, TOP + 1, FIRST_NEW + 1) / value('DOPING', 12, 'phosphorus', 300, 'masetti')).toBeCloseTo(1, 12);
     expect(valueAt(values, TOP + 3, FIRST_NEW)).toBe('nitrogen');
-    expect(valueAt(values, TOP + 3, FIRST_NEW + 1)).toMatchObject({ kind: 'error', code: '#VALUE!', message: expect.stringContaining("unknown dopant 'nitrogen' for silicon") });
+    expect(valueAt(values, TOP + 3, FIRST_NEW + 1)).toMatchObject({
+      kind: 'error',
+      code: '#VALUE!',
+      message: expect.stringContaining("unknown dopant 'nitrogen' for silicon"),
+    });
   });
 
   it('reads a lone p or n on the certificate as P or N: the same word in any case, whichever the switch', async () => {
     for (const typeMeansConductivity of [true, false]) {
-      for (const [upper, lower] of [['P', 'p'], ['N', 'n']]) {
+      for (const [upper, lower] of [
+        ['P', 'p'],
+        ['N', 'n'],
+      ]) {
         expect(dopantCodeFor(lower, typeMeansConductivity)).toBe(dopantCodeFor(upper, typeMeansConductivity));
         expect(dopantCodeFor(` ${lower} `, typeMeansConductivity)).toBe(dopantCodeFor(upper, typeMeansConductivity));
       }
@@ -182,7 +218,8 @@ describe('options', () => {
         // Whatever the switch, what reaches the functions is never a lone letter they would refuse.
         expect(dopantCodeProblem(dopantCodeFor(entry, typeMeansConductivity))).toBeNull();
       }
-      for (const entry of ['B', 'boron', 'As', 'n-type', 'P-Type', 'Phosphorus']) expect(dopantCodeFor(entry, typeMeansConductivity)).toBe(entry);
+      for (const entry of ['B', 'boron', 'As', 'n-type', 'P-Type', 'Phosphorus'])
+        expect(dopantCodeFor(entry, typeMeansConductivity)).toBe(entry);
     }
     expect(['P', 'N'].map((entry) => dopantCodeFor(entry, true))).toEqual(['acceptor', 'donor']);
     expect(['P', 'N'].map((entry) => dopantCodeFor(entry, false))).toEqual(['phosphorus', 'nitrogen']);
@@ -216,7 +253,11 @@ describe('options', () => {
   it('a row whose resistivity several dopings give (77 K freeze-out) shows the error listing them, not a number', async () => {
     // At 77 K, ρ of P-doped silicon falls, rises and falls again with doping
     // (tests/physics/inverseAmbiguity.test.ts): 0.30–0.42 Ω·cm has three dopings, 2–6 Ω·cm one.
-    const table = [['Wafer', 'Rho min', 'Rho max'], ['A', 0.3, 0.42], ['B', 2, 6]];
+    const table = [
+      ['Wafer', 'Rho min', 'Rho max'],
+      ['A', 0.3, 0.42],
+      ['B', 2, 6],
+    ];
     const { port, mapping } = await portWithTable(table);
     await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, dopant: 'phosphorus', temperatureK: 77 });
     const values = port.engineValues();
@@ -236,7 +277,14 @@ describe('options', () => {
       ['Z1', 'N', 2, 4, 3, 0.525],
     ];
     const { port, mapping } = await portWithTable(table);
-    const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, neededMin: 1e18, neededMax: 1e20, resistivityUnit: 'mohm-cm', thicknessUnit: 'mm' });
+    const plan = await addCertificateCheck(port, await port.selection(), {
+      ...BASE,
+      mapping,
+      neededMin: 1e18,
+      neededMax: 1e20,
+      resistivityUnit: 'mohm-cm',
+      thicknessUnit: 'mm',
+    });
     const values = port.engineValues();
     const first = LEFT + table[0].length;
     expect(plan.writes[0].cells[1][1]).toMatch(/\(E3\*0\.001,/);
@@ -270,7 +318,13 @@ describe('options', () => {
 
   it('the other window rule: the needed window must lie inside the certified doping', async () => {
     const { port, mapping } = await portWithTable();
-    const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping, windowRule: 'needed-inside-certified', neededMin: 1.2e15, neededMax: 1.5e15 });
+    const plan = await addCertificateCheck(port, await port.selection(), {
+      ...BASE,
+      mapping,
+      windowRule: 'needed-inside-certified',
+      neededMin: 1.2e15,
+      neededMax: 1.5e15,
+    });
     expect(plan.headers[3]).toBe('Needed window inside certified doping');
     const values = port.engineValues();
     CERTIFICATE_ROWS.forEach((row, index) => {
@@ -310,7 +364,9 @@ describe('refusals and warnings', () => {
     const noMin = mapping.map((role) => (role === 'rho-min' ? 'ignore' : role));
     await expect(addCertificateCheck(port, block, { ...BASE, mapping: noMin })).rejects.toThrow(/No column is mapped to 'ρ min'/);
     const twice = mapping.map((role) => (role === 'lot' ? 'wafer' : role));
-    await expect(addCertificateCheck(port, block, { ...BASE, mapping: twice })).rejects.toThrow(/'Wafer' is given to 2 columns \(Lot, Wafer\)/);
+    await expect(addCertificateCheck(port, block, { ...BASE, mapping: twice })).rejects.toThrow(
+      /'Wafer' is given to 2 columns \(Lot, Wafer\)/,
+    );
   });
 
   it('refuses a one-row selection and a selection with no numbers in ρ min/max', async () => {
@@ -319,8 +375,13 @@ describe('refusals and warnings', () => {
     port.select(0, 0, 1, 2);
     await expect(readCertificateTable(port)).rejects.toThrow(/header row included: the selection Sheet1!A1:B1 has only one row/);
     port.select(0, 0, 1_048_576, 2); // whole columns A:B
-    await expect(readCertificateTable(port)).rejects.toThrow(/Sheet1!A1:B1048576 is 1048576 rows × 2 columns; select just the certificate table \(at most 5000 rows/);
-    const error = await attempt({}, [['Rho min', 'Rho max'], ['8-12', 'n/a']]);
+    await expect(readCertificateTable(port)).rejects.toThrow(
+      /Sheet1!A1:B1048576 is 1048576 rows × 2 columns; select just the certificate table \(at most 5000 rows/,
+    );
+    const error = await attempt({}, [
+      ['Rho min', 'Rho max'],
+      ['8-12', 'n/a'],
+    ]);
     expect((error as Error).message).toMatch(/No row of Sheet1!B2:C3 has positive numbers in both the ρ min and ρ max columns/);
   });
 

@@ -9,7 +9,11 @@ import { CERTIFICATE_TABLE } from './fixture';
 
 export async function prepare(page: Page): Promise<void> {
   const table = cells({ row: 1, column: 1, rowCount: CERTIFICATE_TABLE.length, columnCount: CERTIFICATE_TABLE[0].length });
-  await writeBlock(page, table, CERTIFICATE_TABLE.map((row) => [...row]));
+  await writeBlock(
+    page,
+    table,
+    CERTIFICATE_TABLE.map((row) => [...row]),
+  );
   await selectBlock(page, table);
   const panel = page.locator('#panel-certificate');
   await panel.getByRole('button', { name: 'Read selected table' }).click();

@@ -43,7 +43,13 @@ module.exports = (env, argv) => ({
   devtool: 'source-map',
   performance: { hints: false },
   plugins: [
-    new HtmlWebpackPlugin({ filename: 'harness.html', templateContent: harnessPage(), inject: 'body', scriptLoading: 'blocking', minify: false }),
+    new HtmlWebpackPlugin({
+      filename: 'harness.html',
+      templateContent: harnessPage(),
+      inject: 'body',
+      scriptLoading: 'blocking',
+      minify: false,
+    }),
     new CopyWebpackPlugin({ patterns: paneStaticFiles() }),
   ],
 });

@@ -62,7 +62,11 @@ describe('sheet plans', () => {
 
   it('a plan whose cells do not fit its block is a fault, not a refusal', async () => {
     const port = new MemoryPort();
-    const plan = { writes: [{ block: { sheet: 'Sheet1', row: 0, column: 0, rowCount: 1, columnCount: 2 }, cells: [['a']] }], styles: [], highlights: [] };
+    const plan = {
+      writes: [{ block: { sheet: 'Sheet1', row: 0, column: 0, rowCount: 1, columnCount: 2 }, cells: [['a']] }],
+      styles: [],
+      highlights: [],
+    };
     const error = await applySheetPlan(port, plan).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(Error);
     expect(error).not.toBeInstanceOf(PaneRefusal);
@@ -74,6 +78,8 @@ describe('number fields', () => {
     expect(parseNumberField(' 1e15 ', 'Min')).toBe(1e15);
     expect(parseNumberField('2.5E+16', 'Min')).toBe(2.5e16);
     expect(parseNumberField('', 'Min')).toBeNull();
-    expect(() => parseNumberField('1,5e15', 'Needed doping min')).toThrow("Needed doping min: '1,5e15' is not a number; type digits with a point for decimals, e.g. 1e15 or 2.5E+16.");
+    expect(() => parseNumberField('1,5e15', 'Needed doping min')).toThrow(
+      "Needed doping min: '1,5e15' is not a number; type digits with a point for decimals, e.g. 1e15 or 2.5E+16.",
+    );
   });
 });

@@ -22,14 +22,18 @@ function columnIndex(letters: string): number {
 }
 
 function comparable(value: CellOutput | ResultElement): unknown {
-  if (value !== null && typeof value === 'object') return 'code' in value ? { error: value.code } : { error: (value as { code: string }).code };
+  if (value !== null && typeof value === 'object')
+    return 'code' in value ? { error: value.code } : { error: (value as { code: string }).code };
   return value;
 }
 
 describe('example arguments', () => {
   const doping = findFunction('DOPING')!;
   it('reads numbers, text, blanks and inline arrays; marks references and calls as other', () => {
-    expect(exampleArguments('=DRIFT.DOPING(10,"B")', doping)).toEqual([{ kind: 'value', value: 10 }, { kind: 'value', value: 'B' }]);
+    expect(exampleArguments('=DRIFT.DOPING(10,"B")', doping)).toEqual([
+      { kind: 'value', value: 10 },
+      { kind: 'value', value: 'B' },
+    ]);
     expect(exampleArguments('=DRIFT.DOPING(1e-2, "say ""x""", ,TRUE)', doping)).toEqual([
       { kind: 'value', value: 0.01 },
       { kind: 'value', value: 'say "x"' },
@@ -97,13 +101,17 @@ describe('insert at the active cell', () => {
     port.put(1, 1, [['mine']]);
     port.select(0, 0);
     await expect(insertFunction(port, findFunction('SHEETRES')!)).rejects.toThrow(
-      new PaneRefusal('Nothing was written: Sheet1!A1:B3 must be empty, but B2 holds something. Clear that block or choose another place, then try again.'),
+      new PaneRefusal(
+        'Nothing was written: Sheet1!A1:B3 must be empty, but B2 holds something. Clear that block or choose another place, then try again.',
+      ),
     );
     // A tuple's row fits in the block itself (the block is as wide as the result).
     const range = findFunction('DOPINGRANGE')!;
     if (range.kind !== 'tuple') throw new Error('DOPINGRANGE is a tuple entry');
     expect(resultSize(range)).toEqual({ rows: 1, columns: range.columns.length });
-    expect(planInsert(range, { sheet: 'S', row: 0, column: 0, rowCount: 1, columnCount: 1 }).writes[0].block.columnCount).toBe(1 + range.columns.length);
+    expect(planInsert(range, { sheet: 'S', row: 0, column: 0, rowCount: 1, columnCount: 1 }).writes[0].block.columnCount).toBe(
+      1 + range.columns.length,
+    );
     // A table's spill reaches below the block: those cells must be empty too.
     const models = findFunction('MODELS')!;
     const size = resultSize(models);
@@ -131,10 +139,17 @@ describe('insert at the active cell', () => {
       // Excel reads a row entry's arguments from the cells; the headless engine cannot size a row from a
       // reference (src/engine/plugin.ts) and says so. The layout is checked by the same formula with the
       // referenced cells' values typed in, which the engine sizes and computes.
-      expect(valueAt(values, row, column)).toMatchObject({ code: '#VALUE!', message: expect.stringMatching(/needs its arguments typed into the formula/) });
-      const typed = plan.formula.replace(/\b([A-Z]+)(\d+)\b/g, (_, letters: string, digits: string) => formulaLiteral(port.sheets.get('Sheet1')?.[Number(digits) - 1]?.[columnIndex(letters)]));
+      expect(valueAt(values, row, column)).toMatchObject({
+        code: '#VALUE!',
+        message: expect.stringMatching(/needs its arguments typed into the formula/),
+      });
+      const typed = plan.formula.replace(/\b([A-Z]+)(\d+)\b/g, (_, letters: string, digits: string) =>
+        formulaLiteral(port.sheets.get('Sheet1')?.[Number(digits) - 1]?.[columnIndex(letters)]),
+      );
       const shownTyped = evaluateFormula(typed);
-      expect((Array.isArray(shownTyped) ? shownTyped : [[shownTyped]]).map((cells) => cells.map(comparable))).toEqual(expected.map((cells) => cells.map(comparable)));
+      expect((Array.isArray(shownTyped) ? shownTyped : [[shownTyped]]).map((cells) => cells.map(comparable))).toEqual(
+        expected.map((cells) => cells.map(comparable)),
+      );
       expect(resultSize(spec)).toEqual({ rows: 1, columns: expected[0].length });
       expect(plan.writes[0].block.columnCount).toBe(1 + expected[0].length);
     } else {

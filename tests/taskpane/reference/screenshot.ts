@@ -8,5 +8,8 @@ import type { Page } from 'playwright-core';
 export async function prepare(page: Page): Promise<void> {
   const panel = page.locator('#panel-reference');
   await panel.getByRole('searchbox', { name: 'Search functions' }).fill('doping');
-  await panel.getByRole('option', { name: /^DRIFT\.DOPING\b/ }).first().click();
+  await panel
+    .getByRole('option', { name: /^DRIFT\.DOPING\b/ })
+    .first()
+    .click();
 }

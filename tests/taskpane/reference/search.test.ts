@@ -34,7 +34,10 @@ describe('catalog search', () => {
     expect(hits).toContain('SHEETRES');
     for (const name of hits) {
       const spec = findFunction(name)!;
-      const mentions = spec.parameters.some((p) => p.name === 'thickness_um') || spec.help.includes('thickness_um') || spec.summary.includes('thickness_um');
+      const mentions =
+        spec.parameters.some((p) => p.name === 'thickness_um') ||
+        spec.help.includes('thickness_um') ||
+        spec.summary.includes('thickness_um');
       expect(mentions).toBe(true);
     }
   });
@@ -44,7 +47,9 @@ describe('catalog search', () => {
     const ohmCm = names('ohm cm');
     expect(ohmCm).toEqual(expect.arrayContaining(['RESISTIVITY', 'DOPING', 'SHEETRES']));
     // The phrase bonus puts functions with an Ω·cm unit ahead of functions that only mention ohm and cm apart.
-    const withUnit = CATALOG.filter((spec) => [spec.result.unit, ...spec.parameters.map((p) => p.unit)].includes('Ω·cm')).map((spec) => spec.name);
+    const withUnit = CATALOG.filter((spec) => [spec.result.unit, ...spec.parameters.map((p) => p.unit)].includes('Ω·cm')).map(
+      (spec) => spec.name,
+    );
     expect(ohmCm.slice(0, withUnit.length).sort()).toEqual([...withUnit].sort());
     expect(names('cm-3')).toContain('INTRINSIC');
   });
@@ -60,7 +65,9 @@ describe('catalog search', () => {
     const spec = CATALOG.find((entry) => entry.models.length > 0)!;
     const registered = MODEL_REGISTRY.find((entry) => entry.code === spec.models[0])!;
     // A word of the model's name that is not its code, e.g. 'Varshni' in a band-gap model's name.
-    const word = foldSearchText(registered.name).split(/[\s-]+/).find((w) => /^[a-z]{5,}$/.test(w) && w !== registered.code)!;
+    const word = foldSearchText(registered.name)
+      .split(/[\s-]+/)
+      .find((w) => /^[a-z]{5,}$/.test(w) && w !== registered.code)!;
     expect(word).toBeDefined();
     expect(names(word)).toContain(spec.name);
   });

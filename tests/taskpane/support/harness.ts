@@ -45,7 +45,10 @@ export function ensureHarnessBuilt(): void {
   const bundle = path.join(HARNESS_DIR, 'harness.js');
   const built = existsSync(bundle) && existsSync(path.join(HARNESS_DIR, 'harness.html')) ? statSync(bundle).mtimeMs : 0;
   if (built > Math.max(...SOURCES.map(newest))) return;
-  execFileSync(process.execPath, [require.resolve('webpack-cli/bin/cli.js'), '--config', HARNESS_CONFIG, '--mode', 'development'], { cwd: PROJECT_ROOT, stdio: 'pipe' });
+  execFileSync(process.execPath, [require.resolve('webpack-cli/bin/cli.js'), '--config', HARNESS_CONFIG, '--mode', 'development'], {
+    cwd: PROJECT_ROOT,
+    stdio: 'pipe',
+  });
 }
 
 /** How to open the pane. */
@@ -101,7 +104,13 @@ export async function startHarness(): Promise<PaneHarness> {
 
 /** A block on the harness workbook (default sheet 'Sheet1'). */
 export function cells(address: { row: number; column: number; rowCount?: number; columnCount?: number; sheet?: string }): CellBlock {
-  return { sheet: address.sheet ?? 'Sheet1', row: address.row, column: address.column, rowCount: address.rowCount ?? 1, columnCount: address.columnCount ?? 1 };
+  return {
+    sheet: address.sheet ?? 'Sheet1',
+    row: address.row,
+    column: address.column,
+    rowCount: address.rowCount ?? 1,
+    columnCount: address.columnCount ?? 1,
+  };
 }
 
 type Api = {
@@ -122,7 +131,11 @@ export function selectBlock(page: Page, block: CellBlock): Promise<void> {
 
 /** Writes cells into the engine workbook (e.g. a supplier table before a test). */
 export function writeBlock(page: Page, block: CellBlock, values: CellInput[][]): Promise<void> {
-  return page.evaluate(({ b, v, name }) => (window as unknown as Record<string, Api>)[name].write(b, v), { b: block, v: values, name: api });
+  return page.evaluate(({ b, v, name }) => (window as unknown as Record<string, Api>)[name].write(b, v), {
+    b: block,
+    v: values,
+    name: api,
+  });
 }
 
 /** Values (errors as { error }) and formulas of a block, as the engine computed them in the page. */

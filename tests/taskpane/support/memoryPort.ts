@@ -91,12 +91,17 @@ export class MemoryPort implements WorkbookPort {
   engineValues(): Map<string, ResultElement[][]> {
     const names = [...this.sheets.keys()];
     const engine = createEngine(
-      Object.fromEntries(names.map((name) => [name, (this.sheets.get(name) ?? []).map((row) => Array.from(row ?? [], (cell) => cell ?? null))])),
+      Object.fromEntries(
+        names.map((name) => [name, (this.sheets.get(name) ?? []).map((row) => Array.from(row ?? [], (cell) => cell ?? null))]),
+      ),
     );
     const result = new Map<string, ResultElement[][]>();
     names.forEach((name) => {
       const id = engine.getSheetId(name)!;
-      result.set(name, engine.getSheetValues(id).map((row) => row.map((value) => toResultElement(value))));
+      result.set(
+        name,
+        engine.getSheetValues(id).map((row) => row.map((value) => toResultElement(value))),
+      );
     });
     engine.destroy();
     return result;

@@ -1,5 +1,14 @@
 /** Sweep axes: the log doping grid, the linear temperature grid, °C → K, and the messages for bad settings. */
-import { CELSIUS_ZERO_K, fromKelvin, MAX_DOPING_POINTS, dopingAxis, dopingAxisProblems, temperatureAxis, temperatureAxisProblems, toKelvin } from '../../../src/taskpane/sweep/axes';
+import {
+  CELSIUS_ZERO_K,
+  fromKelvin,
+  MAX_DOPING_POINTS,
+  dopingAxis,
+  dopingAxisProblems,
+  temperatureAxis,
+  temperatureAxisProblems,
+  toKelvin,
+} from '../../../src/taskpane/sweep/axes';
 
 describe('dopingAxis', () => {
   it('spaces points evenly in log10, ends exactly at both limits', () => {
@@ -19,9 +28,13 @@ describe('dopingAxis', () => {
     expect(dopingAxisProblems({ from: 0, to: 1e16, pointsPerDecade: 5 })).toEqual([expect.stringMatching(/above 0 cm⁻³/)]);
     expect(dopingAxisProblems({ from: 1e17, to: 1e16, pointsPerDecade: 5 })).toEqual([expect.stringMatching(/must be below "to"/)]);
     expect(dopingAxisProblems({ from: 1e15, to: 1e23, pointsPerDecade: 5 })).toEqual([expect.stringMatching(/at most 1e\+22 cm⁻³/)]);
-    expect(dopingAxisProblems({ from: 1e15, to: 1e16, pointsPerDecade: 2.5 })).toEqual([expect.stringMatching(/whole number from 1 to 100/)]);
+    expect(dopingAxisProblems({ from: 1e15, to: 1e16, pointsPerDecade: 2.5 })).toEqual([
+      expect.stringMatching(/whole number from 1 to 100/),
+    ]);
     expect(dopingAxisProblems({ from: NaN, to: 1e16, pointsPerDecade: 5 })).toEqual([expect.stringMatching(/must be numbers/)]);
-    expect(dopingAxisProblems({ from: 1e10, to: 1e22, pointsPerDecade: 100 })).toEqual([expect.stringMatching(new RegExp(`1201 points; at most ${MAX_DOPING_POINTS}`))]);
+    expect(dopingAxisProblems({ from: 1e10, to: 1e22, pointsPerDecade: 100 })).toEqual([
+      expect.stringMatching(new RegExp(`1201 points; at most ${MAX_DOPING_POINTS}`)),
+    ]);
     expect(() => dopingAxis({ from: 0, to: 1, pointsPerDecade: 1 })).toThrow(RangeError);
   });
 });
@@ -44,6 +57,8 @@ describe('temperatureAxis', () => {
     expect(temperatureAxisProblems({ from: -300, to: 0, step: 10, unit: '°C' })).toEqual([expect.stringMatching(/above absolute zero/)]);
     expect(temperatureAxisProblems({ from: 400, to: 300, step: 10, unit: 'K' })).toEqual([expect.stringMatching(/must be below "to"/)]);
     expect(temperatureAxisProblems({ from: 300, to: 400, step: 0, unit: 'K' })).toEqual([expect.stringMatching(/step must be above 0/)]);
-    expect(temperatureAxisProblems({ from: 300, to: 400, step: 1, unit: 'K' }, 24)).toEqual([expect.stringMatching(/101 points; at most 24/)]);
+    expect(temperatureAxisProblems({ from: 300, to: 400, step: 1, unit: 'K' }, 24)).toEqual([
+      expect.stringMatching(/101 points; at most 24/),
+    ]);
   });
 });

@@ -42,7 +42,13 @@ function resolved(form: Partial<SweepForm>): SweepLayoutInput {
   return result.input;
 }
 
-const at = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({ sheet: 'Sheet1', row, column, rowCount, columnCount });
+const at = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({
+  sheet: 'Sheet1',
+  row,
+  column,
+  rowCount,
+  columnCount,
+});
 
 describe('which quantities compare models', () => {
   it.each([
@@ -60,8 +66,21 @@ describe('which quantities compare models', () => {
 
   it.each(['MAJORITY', 'MINORITY', 'VSAT'])('%s has no model argument, so no comparison', (id) => {
     expect(modelSettingOf(quantity(id))).toBeNull();
-    const result = resolveSweep({ ...BASE, quantityId: id, values: id === 'VSAT' ? {} : { 'inner:dopant': 'B' }, dopingSwept: id !== 'VSAT', temperatureSwept: id === 'VSAT' }, quantities);
-    expect(result).toEqual({ ok: false, problems: [expect.stringMatching(/^Compare models needs a model argument/)], invalid: ['compareModels'] });
+    const result = resolveSweep(
+      {
+        ...BASE,
+        quantityId: id,
+        values: id === 'VSAT' ? {} : { 'inner:dopant': 'B' },
+        dopingSwept: id !== 'VSAT',
+        temperatureSwept: id === 'VSAT',
+      },
+      quantities,
+    );
+    expect(result).toEqual({
+      ok: false,
+      problems: [expect.stringMatching(/^Compare models needs a model argument/)],
+      invalid: ['compareModels'],
+    });
   });
 });
 
@@ -78,7 +97,10 @@ describe('compareModels', () => {
 
   it('a function without a dopant argument asks for any dopant; the material is passed on', () => {
     const ni = compareModels(quantity('INTRINSIC'), { 'inner:material': 'Ge' });
-    expect(ni.ok && ni.comparison).toMatchObject({ codes: applicableModelCodes('intrinsic', 'Ge'), call: 'DRIFT.MODELCODES("intrinsic","Ge")' });
+    expect(ni.ok && ni.comparison).toMatchObject({
+      codes: applicableModelCodes('intrinsic', 'Ge'),
+      call: 'DRIFT.MODELCODES("intrinsic","Ge")',
+    });
   });
 
   it('says what is wrong when the material has no such model', () => {
@@ -92,7 +114,11 @@ describe('compareModels', () => {
 describe('resolveSweep with compare models', () => {
   it('sweeps one axis only, saying how to fix it', () => {
     const result = resolveSweep({ ...BASE, temperatureSwept: true }, quantities);
-    expect(result).toEqual({ ok: false, problems: [expect.stringMatching(/^Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature/)], invalid: ['compareModels'] });
+    expect(result).toEqual({
+      ok: false,
+      problems: [expect.stringMatching(/^Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature/)],
+      invalid: ['compareModels'],
+    });
   });
 
   it('ignores the single model chosen, and says so in the title words', () => {
@@ -112,20 +138,48 @@ describe('planSweep comparing models', () => {
     expect(plan.formulaCell).toEqual(at(3, 2));
     expect(plan.formula).toBe('=DRIFT.RESISTIVITY(B4:B8,"B",300,DRIFT.MODELCODES("resistivity",,"B"))');
     expect(plan.results).toEqual(at(3, 2, 5, codes.length));
-    expect(plan.writes[0].cells).toEqual([['Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, B, 300 K, 6 resistivity models'], ['Doping (cm⁻³) ↓ · Model →']]);
+    expect(plan.writes[0].cells).toEqual([
+      ['Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, B, 300 K, 6 resistivity models'],
+      ['Doping (cm⁻³) ↓ · Model →'],
+    ]);
     // Two formulas in all: the codes and the values; the rest is their spill.
-    expect(plan.writes.flatMap((w) => w.cells.flat()).filter((c) => typeof c === 'string' && c.startsWith('='))).toEqual([plan.modelCodes!.formula, plan.formula]);
+    expect(plan.writes.flatMap((w) => w.cells.flat()).filter((c) => typeof c === 'string' && c.startsWith('='))).toEqual([
+      plan.modelCodes!.formula,
+      plan.formula,
+    ]);
     expect(plan.chart.series.map((s) => s.name)).toEqual(codes);
     expect(plan.chart.series.map((s) => s.emphasised === true)).toEqual(codes.map((_, j) => j === 0));
     expect(plan.chart.series[2]).toMatchObject({ x: at(3, 1, 5, 1), y: at(3, 4, 5, 1) });
-    expect(plan.chart).toMatchObject({ xLogarithmic: true, yLogarithmic: true, title: 'Resistivity ρ (Ω·cm), 6 models', anchor: at(1, 1 + 1 + codes.length + 1) });
+    expect(plan.chart).toMatchObject({
+      xLogarithmic: true,
+      yLogarithmic: true,
+      title: 'Resistivity ρ (Ω·cm), 6 models',
+      anchor: at(1, 1 + 1 + codes.length + 1),
+    });
   });
 
   it('temperature in °C: °C and K columns, the formula takes the K column', () => {
-    const input = resolved({ dopingSwept: false, temperatureSwept: true, temperatureUnit: '°C', temperatureFrom: '0', temperatureTo: '50', temperatureStep: '25' });
+    const input = resolved({
+      dopingSwept: false,
+      temperatureSwept: true,
+      temperatureUnit: '°C',
+      temperatureFrom: '0',
+      temperatureTo: '50',
+      temperatureStep: '25',
+    });
     const plan = planSweep(input, at(0, 0));
-    expect(plan.writes[0].cells).toEqual([[expect.any(String), null], ['Temperature (°C)', 'Temperature (K) ↓ · Model →']]);
-    expect(plan.writes[1]).toEqual({ block: at(2, 0, 3, 2), cells: [[0, 273.15], [25, 298.15], [50, 323.15]] });
+    expect(plan.writes[0].cells).toEqual([
+      [expect.any(String), null],
+      ['Temperature (°C)', 'Temperature (K) ↓ · Model →'],
+    ]);
+    expect(plan.writes[1]).toEqual({
+      block: at(2, 0, 3, 2),
+      cells: [
+        [0, 273.15],
+        [25, 298.15],
+        [50, 323.15],
+      ],
+    });
     expect(plan.modelCodes!.cell).toEqual(at(1, 2));
     expect(plan.formula).toBe('=DRIFT.RESISTIVITY(1E+15,"B",B3:B5,DRIFT.MODELCODES("resistivity",,"B"))');
     expect(plan.chart).toMatchObject({ xLogarithmic: false, xTitle: 'Temperature (K)' });
@@ -133,7 +187,10 @@ describe('planSweep comparing models', () => {
   });
 
   it('SHEETRES: the codes go into the nested RESISTIVITY call', () => {
-    const plan = planSweep(resolved({ quantityId: 'SHEETRES', values: { 'inner:dopant': 'phosphorus', 'outer:thickness_um': '2' } }), at(0, 0));
+    const plan = planSweep(
+      resolved({ quantityId: 'SHEETRES', values: { 'inner:dopant': 'phosphorus', 'outer:thickness_um': '2' } }),
+      at(0, 0),
+    );
     expect(plan.formula).toBe('=DRIFT.SHEETRES(DRIFT.RESISTIVITY(A3:A7,"phosphorus",300,DRIFT.MODELCODES("resistivity",,"phosphorus")),2)');
   });
 });
@@ -141,7 +198,11 @@ describe('planSweep comparing models', () => {
 describe('inserting a comparison into the engine workbook', () => {
   it.each([
     ['RESISTIVITY of B over doping', {}, 'RESISTIVITY'],
-    ['MOBILITY of minority electrons over doping', { quantityId: 'MOBILITY', values: { 'inner:dopant': 'B', 'inner:carrier': 'electron' } }, 'MOBILITY'],
+    [
+      'MOBILITY of minority electrons over doping',
+      { quantityId: 'MOBILITY', values: { 'inner:dopant': 'B', 'inner:carrier': 'electron' } },
+      'MOBILITY',
+    ],
     ['INTRINSIC over temperature', { quantityId: 'INTRINSIC', dopingSwept: false, temperatureSwept: true, values: {} }, 'INTRINSIC'],
   ])('%s: the header shows the codes and every column equals the single-model call of its code', async (_name, form, name) => {
     const input = resolved(form);
@@ -178,7 +239,13 @@ describe('inserting a comparison into the engine workbook', () => {
   });
 
   it('a model that refuses part of the range shows its error there; the others still compute (astm-f723 outside 290–305 K)', async () => {
-    const input = resolved({ dopingSwept: false, temperatureSwept: true, temperatureFrom: '250', temperatureTo: '350', temperatureStep: '25' });
+    const input = resolved({
+      dopingSwept: false,
+      temperatureSwept: true,
+      temperatureFrom: '250',
+      temperatureTo: '350',
+      temperatureStep: '25',
+    });
     const codes = input.models!.codes;
     const f723 = codes.indexOf('astm-f723');
     expect(f723).toBeGreaterThan(0);
@@ -191,7 +258,11 @@ describe('inserting a comparison into the engine workbook', () => {
     values.forEach((row) => row.forEach((v, j) => j !== f723 && expect(typeof v).toBe('number')));
 
     const preview = previewSweep(input);
-    expect(preview.series[f723]).toMatchObject({ name: 'astm-f723', points: [[300, expect.any(Number)]], refused: { count: 4, of: 5, message: expect.stringMatching(/^#VALUE! /) } });
+    expect(preview.series[f723]).toMatchObject({
+      name: 'astm-f723',
+      points: [[300, expect.any(Number)]],
+      refused: { count: 4, of: 5, message: expect.stringMatching(/^#VALUE! /) },
+    });
     // The band still spans the other models at every temperature.
     expect(preview.band!.flat().map((b) => b[0])).toEqual([250, 275, 300, 325, 350]);
     expect(describePreview(preview, 'Resistivity ρ (Ω·cm)')).toMatch(/; astm-f723 refused 4 of 5 values \(#VALUE! .+\)\.$/);
@@ -216,7 +287,13 @@ describe('modelBand', () => {
       [1, { code: '#VALUE!', message: 'x' }, { code: '#VALUE!', message: 'x' }],
       [7, 8, 9],
     ] as const;
-    expect(modelBand([1, 2, 3, 4], grid as never)).toEqual([[[1, 3, 5], [2, 2, 6]], [[4, 7, 9]]]);
+    expect(modelBand([1, 2, 3, 4], grid as never)).toEqual([
+      [
+        [1, 3, 5],
+        [2, 2, 6],
+      ],
+      [[4, 7, 9]],
+    ]);
   });
 });
 
@@ -224,6 +301,8 @@ describe('describePreview of a comparison', () => {
   it('names the models, the default with its end values, and the band’s widest ratio on a log axis', () => {
     const preview = previewSweep(resolved({}));
     const text = describePreview(preview, 'Resistivity ρ (Ω·cm)');
-    expect(text).toMatch(/^Resistivity ρ \(Ω·cm\) against Doping \(cm⁻³\), log x, log y: 6 models \(f723-anchored, masetti, arora, caughey-thomas, klaassen, astm-f723\); default f723-anchored \(heavier line\) .+ at 1\.00e\+14 to .+ at 1\.00e\+16; shaded band from the lowest to the highest model, widest \(a factor [\d.]+\) at .+\.$/);
+    expect(text).toMatch(
+      /^Resistivity ρ \(Ω·cm\) against Doping \(cm⁻³\), log x, log y: 6 models \(f723-anchored, masetti, arora, caughey-thomas, klaassen, astm-f723\); default f723-anchored \(heavier line\) .+ at 1\.00e\+14 to .+ at 1\.00e\+16; shaded band from the lowest to the highest model, widest \(a factor [\d.]+\) at .+\.$/,
+    );
   });
 });

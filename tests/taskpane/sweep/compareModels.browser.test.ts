@@ -13,7 +13,17 @@ import path from 'path';
 import type { Page } from 'playwright-core';
 import { evaluate, findFunction } from '../../../src/catalog';
 import { applicableModelCodes } from '../../../src/catalog/modelCodes';
-import { announced, cells, chartPlans, readBlock, saveScreenshot, SCREENSHOT_DIR, selectBlock, startHarness, type PaneHarness } from '../support/harness';
+import {
+  announced,
+  cells,
+  chartPlans,
+  readBlock,
+  saveScreenshot,
+  SCREENSHOT_DIR,
+  selectBlock,
+  startHarness,
+  type PaneHarness,
+} from '../support/harness';
 
 /** The preview plot itself (the legend's line samples are small SVGs too). */
 const PLOT = '#sw-plot svg[role="img"]';
@@ -52,7 +62,9 @@ describe('Sweep builder: compare models, in Chromium', () => {
     await compareBoronResistivity(page);
     const codes = applicableModelCodes('resistivity', undefined, 'B');
     expect(codes).toContain('astm-f723');
-    expect(await page.locator('#sw-formula-models').textContent()).toBe('=DRIFT.MODELCODES("resistivity",,"B") (header row, one code per column)');
+    expect(await page.locator('#sw-formula-models').textContent()).toBe(
+      '=DRIFT.MODELCODES("resistivity",,"B") (header row, one code per column)',
+    );
     expect(await page.locator('#sw-formula').textContent()).toBe('=DRIFT.RESISTIVITY(A3:A23,"B",300,DRIFT.MODELCODES("resistivity",,"B"))');
     // The single-model list does not apply while every model is drawn.
     expect(await page.locator('#sw-inner-model').isDisabled()).toBe(true);
@@ -60,11 +72,19 @@ describe('Sweep builder: compare models, in Chromium', () => {
     expect(await page.locator(PLOT + ' path.curve').count()).toBe(codes.length);
     expect(await page.locator(PLOT + ' path.band').count()).toBe(1);
     expect(await page.locator(PLOT + ' path.curve.emphasised').getAttribute('data-series')).toBe(codes[0]);
-    const widths = await page.locator(PLOT + ' path.curve').evaluateAll((paths) => paths.map((p) => [p.getAttribute('data-series'), parseFloat(getComputedStyle(p).strokeWidth)]));
+    const widths = await page
+      .locator(PLOT + ' path.curve')
+      .evaluateAll((paths) => paths.map((p) => [p.getAttribute('data-series'), parseFloat(getComputedStyle(p).strokeWidth)]));
     const defaultWidth = widths.find(([name]) => name === codes[0])![1] as number;
     for (const [name, width] of widths) if (name !== codes[0]) expect(width as number).toBeLessThan(defaultWidth);
     // The band is filled and drawn under the curves (earlier in the document).
-    expect(await page.locator(PLOT + ' path.band').evaluate((band) => band.compareDocumentPosition(band.parentElement!.querySelector('path.curve')!) & Node.DOCUMENT_POSITION_FOLLOWING)).toBeTruthy();
+    expect(
+      await page
+        .locator(PLOT + ' path.band')
+        .evaluate(
+          (band) => band.compareDocumentPosition(band.parentElement!.querySelector('path.curve')!) & Node.DOCUMENT_POSITION_FOLLOWING,
+        ),
+    ).toBeTruthy();
     expect(await page.locator(PLOT + ' path.band').evaluate((band) => getComputedStyle(band).fill)).not.toBe('none');
     // Legend as a list: every code, the default marked; the text alternative names the models and the band.
     expect(await page.locator('#sw-legend li .sw-legend-name').allTextContents()).toEqual([`${codes[0]} (default)`, ...codes.slice(1)]);
@@ -86,7 +106,10 @@ describe('Sweep builder: compare models, in Chromium', () => {
     const table = await readBlock(page, cells({ row: 1, column: 1, rowCount: 23, columnCount: 1 + codes.length }));
     expect(table.values[1]).toEqual(['Doping (cm⁻³) ↓ · Model →', ...codes]);
     // Two formulas: the header's codes and the values; everything else is their spill.
-    expect(table.formulas.flat().filter((f) => f !== null)).toEqual(['=DRIFT.MODELCODES("resistivity",,"B")', '=DRIFT.RESISTIVITY(B4:B24,"B",300,DRIFT.MODELCODES("resistivity",,"B"))']);
+    expect(table.formulas.flat().filter((f) => f !== null)).toEqual([
+      '=DRIFT.MODELCODES("resistivity",,"B")',
+      '=DRIFT.RESISTIVITY(B4:B24,"B",300,DRIFT.MODELCODES("resistivity",,"B"))',
+    ]);
     const doping = table.values.slice(2).map((row) => [row[0] as number]);
     expect(doping[0][0]).toBe(1e14);
     expect(doping[doping.length - 1][0]).toBe(1e19);
@@ -103,13 +126,18 @@ describe('Sweep builder: compare models, in Chromium', () => {
     expect(chart).toMatchObject({ xLogarithmic: true, yLogarithmic: true, xTitle: 'Doping (cm⁻³)', yTitle: 'Resistivity ρ (Ω·cm)' });
     expect(chart.series.map((s) => s.name)).toEqual(codes);
     expect(chart.series.map((s) => s.emphasised === true)).toEqual(codes.map((_, j) => j === 0));
-    expect(chart.series[codes.length - 1]).toMatchObject({ x: cells({ row: 3, column: 1, rowCount: 21 }), y: cells({ row: 3, column: 1 + codes.length, rowCount: 21 }) });
+    expect(chart.series[codes.length - 1]).toMatchObject({
+      x: cells({ row: 3, column: 1, rowCount: 21 }),
+      y: cells({ row: 3, column: 1 + codes.length, rowCount: 21 }),
+    });
     await saveScreenshot(page, 'sweep-compare-inserted-500-light');
 
     // A second insert at the same place is refused and writes nothing more.
     await page.getByRole('button', { name: 'Insert table and chart' }).click();
     await page.waitForFunction(() => /Nothing written/.test(document.getElementById('messages')?.textContent ?? ''));
-    expect(await announced(page)).toMatch(/^Nothing written: the table would fill Sheet1!B2:H24 \(23 rows × 7 columns\), but B2, B3, C3 and \d+ more are not empty/);
+    expect(await announced(page)).toMatch(
+      /^Nothing written: the table would fill Sheet1!B2:H24 \(23 rows × 7 columns\), but B2, B3, C3 and \d+ more are not empty/,
+    );
     expect(await chartPlans(page)).toHaveLength(1);
     await page.close();
   });
@@ -148,7 +176,9 @@ describe('Sweep builder: compare models, in Chromium', () => {
     await savePlotScreenshot(page, 'sweep-compare-gaps-plot-500-light');
 
     await page.getByRole('button', { name: 'Insert table and chart' }).click();
-    expect(await inserted(page)).toMatch(/^Inserted at Sheet1!A1:G9: =DRIFT\.RESISTIVITY\(1E\+15,"B",A3:A9,DRIFT\.MODELCODES\("resistivity",,"B"\)\) in B3 spills 7 × 6 values/);
+    expect(await inserted(page)).toMatch(
+      /^Inserted at Sheet1!A1:G9: =DRIFT\.RESISTIVITY\(1E\+15,"B",A3:A9,DRIFT\.MODELCODES\("resistivity",,"B"\)\) in B3 spills 7 × 6 values/,
+    );
     const table = await readBlock(page, cells({ row: 2, column: 0, rowCount: 7, columnCount: 1 + codes.length }));
     expect(table.values.map((row) => row[0])).toEqual([270, 280, 290, 300, 310, 320, 330]);
     expect(table.values.map((row) => typeof row[1 + f723] === 'number')).toEqual([false, false, true, true, false, false, false]);
@@ -161,7 +191,9 @@ describe('Sweep builder: compare models, in Chromium', () => {
     const page = await harness.openPane();
     await compareBoronResistivity(page);
     await page.getByLabel('Sweep temperature').check();
-    expect(await page.locator('#sw-problems li').allTextContents()).toEqual([expect.stringMatching(/^Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature/)]);
+    expect(await page.locator('#sw-problems li').allTextContents()).toEqual([
+      expect.stringMatching(/^Compare models sweeps one axis: uncheck Sweep doping or Sweep temperature/),
+    ]);
     expect(await page.locator('#sw-compare-models').getAttribute('aria-invalid')).toBe('true');
     expect(await page.locator('#sw-plot svg').count()).toBe(0);
     await page.getByLabel('Quantity').selectOption('MAJORITY');

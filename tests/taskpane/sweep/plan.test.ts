@@ -37,7 +37,13 @@ function resolved(form: Partial<SweepForm>): SweepLayoutInput {
   return result.input;
 }
 
-const at = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({ sheet: 'Sheet1', row, column, rowCount, columnCount });
+const at = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({
+  sheet: 'Sheet1',
+  row,
+  column,
+  rowCount,
+  columnCount,
+});
 
 describe('availableQuantities', () => {
   it('lists the curated functions the catalog has, with the catalog’s labels and units', () => {
@@ -59,7 +65,11 @@ describe('availableQuantities', () => {
   it('sweeps SHEETRES over doping through RESISTIVITY, asking only for the thickness besides', () => {
     const sheet = quantities.find((q) => q.id === 'SHEETRES')!;
     expect(sheet.inner.name).toBe('RESISTIVITY');
-    expect(settingParameters(sheet).filter((s) => s.owner === 'outer').map((s) => s.spec.name)).toEqual(['thickness_um']);
+    expect(
+      settingParameters(sheet)
+        .filter((s) => s.owner === 'outer')
+        .map((s) => s.spec.name),
+    ).toEqual(['thickness_um']);
   });
 });
 
@@ -82,7 +92,10 @@ describe('resolveSweep', () => {
     const axis = resolveSweep({ ...BASE, dopingFrom: '0x10' }, quantities);
     expect(axis.ok).toBe(false);
     if (!axis.ok) expect(axis.problems).toEqual(['Doping from and to must be numbers in cm⁻³, e.g. 1e14 and 1e19.']);
-    const setting = resolveSweep({ ...BASE, quantityId: 'SHEETRES', values: { 'inner:dopant': 'B', 'outer:thickness_um': '0b11' } }, quantities);
+    const setting = resolveSweep(
+      { ...BASE, quantityId: 'SHEETRES', values: { 'inner:dopant': 'B', 'outer:thickness_um': '0b11' } },
+      quantities,
+    );
     expect(setting.ok).toBe(false);
     if (!setting.ok) {
       expect(setting.problems).toEqual(['thickness_um must be a number in µm (got "0b11").']);
@@ -90,7 +103,8 @@ describe('resolveSweep', () => {
     }
     const temperature = resolveSweep({ ...BASE, fixedTemperature: '0o17' }, quantities);
     expect(temperature.ok).toBe(false);
-    if (!temperature.ok) expect(temperature.problems).toEqual(['Fixed temperature must be a number above absolute zero in K (got "0o17").']);
+    if (!temperature.ok)
+      expect(temperature.problems).toEqual(['Fixed temperature must be a number above absolute zero in K (got "0o17").']);
   });
 
   it('needs an axis', () => {
@@ -108,12 +122,21 @@ describe('planSweep', () => {
     expect(plan.formula).toBe('=DRIFT.RESISTIVITY(B4:B8,"B",300)');
     expect(plan.writes[0].cells[1]).toEqual(['Doping (cm⁻³)', 'Resistivity ρ (Ω·cm)']);
     expect(plan.writes.filter((w) => w.cells.flat().some((c) => typeof c === 'string' && c.startsWith('=')))).toHaveLength(1);
-    expect(plan.chart).toMatchObject({ xLogarithmic: true, yLogarithmic: true, xTitle: 'Doping (cm⁻³)', yTitle: 'Resistivity ρ (Ω·cm)', anchor: at(1, 4) });
+    expect(plan.chart).toMatchObject({
+      xLogarithmic: true,
+      yLogarithmic: true,
+      xTitle: 'Doping (cm⁻³)',
+      yTitle: 'Resistivity ρ (Ω·cm)',
+      anchor: at(1, 4),
+    });
     expect(plan.chart.series).toEqual([{ name: 'Resistivity ρ', x: at(3, 1, 5, 1), y: at(3, 2, 5, 1) }]);
   });
 
   it('both axes: doping down, kelvin across (°C shown above), the formula spills a table, one series per temperature', () => {
-    const plan = planSweep(resolved({ temperatureSwept: true, temperatureUnit: '°C', temperatureFrom: '0', temperatureTo: '100', temperatureStep: '50' }), at(0, 0));
+    const plan = planSweep(
+      resolved({ temperatureSwept: true, temperatureUnit: '°C', temperatureFrom: '0', temperatureTo: '100', temperatureStep: '50' }),
+      at(0, 0),
+    );
     expect(plan.writes[0].cells[1]).toEqual(['Temperature (°C) →', 0, 50, 100]);
     expect(plan.writes[0].cells[2]).toEqual(['Doping (cm⁻³) ↓ · Temperature (K) →', 273.15, 323.15, 373.15]);
     expect(plan.formula).toBe('=DRIFT.RESISTIVITY(A4:A8,"B",B3:D3)');
@@ -147,7 +170,10 @@ describe('insertSweep on the engine workbook', () => {
 
   it.each([
     ['RESISTIVITY over doping', {}],
-    ['RESISTIVITY over doping × °C', { temperatureSwept: true, temperatureUnit: '°C' as const, temperatureFrom: '0', temperatureTo: '100', temperatureStep: '50' }],
+    [
+      'RESISTIVITY over doping × °C',
+      { temperatureSwept: true, temperatureUnit: '°C' as const, temperatureFrom: '0', temperatureTo: '100', temperatureStep: '50' },
+    ],
     ['MOBILITY of minority electrons', { quantityId: 'MOBILITY', values: { 'inner:dopant': 'B', 'inner:carrier': 'electron' } }],
     ['SHEETRES of a 2 µm layer', { quantityId: 'SHEETRES', values: { 'inner:dopant': 'phosphorus', 'outer:thickness_um': '2' } }],
     ['INTRINSIC over temperature', { quantityId: 'INTRINSIC', dopingSwept: false, temperatureSwept: true, values: {} }],
@@ -170,7 +196,11 @@ describe('insertSweep on the engine workbook', () => {
     const port = createEnginePort();
     const { plan } = await insertSweep(port, resolved({ values: { 'inner:dopant': 'phosphorus' } }));
     const { values } = await port.read(plan.results);
-    const direct = evaluate(findFunction('RESISTIVITY')!, [[[1e14], [316227766017000], [1e15], [3162277660170000], [1e16]], 'phosphorus', 300]);
+    const direct = evaluate(findFunction('RESISTIVITY')!, [
+      [[1e14], [316227766017000], [1e15], [3162277660170000], [1e16]],
+      'phosphorus',
+      300,
+    ]);
     expect(values).toEqual(direct);
   });
 
@@ -182,21 +212,30 @@ describe('insertSweep on the engine workbook', () => {
     expect((await port.read(plan.formulaCell)).formulas).toEqual([[plan.formula]]);
   });
 
-  it.each(quantities.map((q) => [q.id, q] as const))('%s with its defaults (required numbers set to 1): engine cells equal the catalog', async (_id, quantity) => {
-    const values: Record<string, string> = {};
-    for (const { owner, spec } of settingParameters(quantity)) {
-      if (spec.optional) continue;
-      values[`${owner}:${spec.name}`] = spec.choices?.()[0] ?? '1';
-    }
-    const input = resolved({ quantityId: quantity.id, dopingSwept: quantity.hasDoping, temperatureSwept: !quantity.hasDoping, values });
-    const port = createEnginePort();
-    const { plan } = await insertSweep(port, input);
-    const { values: shown } = await port.read(plan.results);
-    const expected = previewSweep(input).grid;
-    expect(shown.flat().some((v) => typeof v === 'number')).toBe(true);
-    shown.forEach((row, r) => row.forEach((v, c) => (typeof expected[r][c] === 'number' ? expect(v as number).toBeCloseTo(expected[r][c] as number, 10) : expect(v).toEqual({ error: (expected[r][c] as { code: string }).code }))));
-    expect(plan.chart.yLogarithmic).toBe(QUANTITY_ENTRIES.find((e) => e.name === quantity.id)!.logValues);
-  });
+  it.each(quantities.map((q) => [q.id, q] as const))(
+    '%s with its defaults (required numbers set to 1): engine cells equal the catalog',
+    async (_id, quantity) => {
+      const values: Record<string, string> = {};
+      for (const { owner, spec } of settingParameters(quantity)) {
+        if (spec.optional) continue;
+        values[`${owner}:${spec.name}`] = spec.choices?.()[0] ?? '1';
+      }
+      const input = resolved({ quantityId: quantity.id, dopingSwept: quantity.hasDoping, temperatureSwept: !quantity.hasDoping, values });
+      const port = createEnginePort();
+      const { plan } = await insertSweep(port, input);
+      const { values: shown } = await port.read(plan.results);
+      const expected = previewSweep(input).grid;
+      expect(shown.flat().some((v) => typeof v === 'number')).toBe(true);
+      shown.forEach((row, r) =>
+        row.forEach((v, c) =>
+          typeof expected[r][c] === 'number'
+            ? expect(v as number).toBeCloseTo(expected[r][c] as number, 10)
+            : expect(v).toEqual({ error: (expected[r][c] as { code: string }).code }),
+        ),
+      );
+      expect(plan.chart.yLogarithmic).toBe(QUANTITY_ENTRIES.find((e) => e.name === quantity.id)!.logValues);
+    },
+  );
 
   it('refuses to overwrite, naming the block and the cells in the way, and writes nothing', async () => {
     const port = createEnginePort({ Sheet1: [[], [], [], [], [null, null, 'mine']] });

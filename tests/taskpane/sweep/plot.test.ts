@@ -38,7 +38,15 @@ describe('makeScale', () => {
 
 describe('describePreview', () => {
   const preview: Preview = {
-    series: [{ name: '300 K', points: [[1e14, 100], [1e16, 1]] }],
+    series: [
+      {
+        name: '300 K',
+        points: [
+          [1e14, 100],
+          [1e16, 1],
+        ],
+      },
+    ],
     xLabel: 'Doping (cm⁻³)',
     xLogarithmic: true,
     yLogarithmic: true,
@@ -47,10 +55,14 @@ describe('describePreview', () => {
   };
 
   it('names the axes, their scales and the end values', () => {
-    expect(describePreview(preview, 'Resistivity ρ (Ω·cm)')).toBe('Resistivity ρ (Ω·cm) against Doping (cm⁻³), log x, log y: 100 at 1.00e+14 to 1 at 1.00e+16.');
+    expect(describePreview(preview, 'Resistivity ρ (Ω·cm)')).toBe(
+      'Resistivity ρ (Ω·cm) against Doping (cm⁻³), log x, log y: 100 at 1.00e+14 to 1 at 1.00e+16.',
+    );
   });
 
   it('says why nothing is drawn', () => {
-    expect(describePreview({ ...preview, series: [{ name: 'x', points: [] }], firstError: '#VALUE! bad' }, 'y')).toBe('No values to plot: #VALUE! bad.');
+    expect(describePreview({ ...preview, series: [{ name: 'x', points: [] }], firstError: '#VALUE! bad' }, 'y')).toBe(
+      'No values to plot: #VALUE! bad.',
+    );
   });
 });

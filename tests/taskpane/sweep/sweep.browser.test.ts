@@ -52,7 +52,9 @@ describe('Sweep builder in Chromium', () => {
     await selectBlock(page, cells({ row: 1, column: 1 }));
     await page.getByRole('button', { name: 'Insert table and chart' }).click();
     await page.waitForFunction(() => /Inserted|Nothing written|Not inserted/.test(document.getElementById('messages')?.textContent ?? ''));
-    expect(await announced(page)).toMatch(/^Inserted at Sheet1!B2:F17: =DRIFT\.RESISTIVITY\(B5:B17,"phosphorus",C4:F4\) in C5 spills 13 × 4 values; chart added \(log x, log y\)\.$/);
+    expect(await announced(page)).toMatch(
+      /^Inserted at Sheet1!B2:F17: =DRIFT\.RESISTIVITY\(B5:B17,"phosphorus",C4:F4\) in C5 spills 13 × 4 values; chart added \(log x, log y\)\.$/,
+    );
 
     const table = await readBlock(page, cells({ row: 1, column: 1, rowCount: 16, columnCount: 5 }));
     expect(table.values[0][0]).toBe('Resistivity ρ (Ω·cm): DRIFT.RESISTIVITY, phosphorus');
@@ -74,12 +76,17 @@ describe('Sweep builder in Chromium', () => {
     expect(charts).toHaveLength(1);
     expect(charts[0]).toMatchObject({ xLogarithmic: true, yLogarithmic: true, xTitle: 'Doping (cm⁻³)', yTitle: 'Resistivity ρ (Ω·cm)' });
     expect(charts[0].series.map((s) => s.name)).toEqual(['248.15 K', '298.15 K', '348.15 K', '398.15 K']);
-    expect(charts[0].series[0]).toMatchObject({ x: cells({ row: 4, column: 1, rowCount: 13 }), y: cells({ row: 4, column: 2, rowCount: 13 }) });
+    expect(charts[0].series[0]).toMatchObject({
+      x: cells({ row: 4, column: 1, rowCount: 13 }),
+      y: cells({ row: 4, column: 2, rowCount: 13 }),
+    });
 
     // A second insert at the same place is refused, naming the block, and writes nothing.
     await page.getByRole('button', { name: 'Insert table and chart' }).click();
     await page.waitForFunction(() => /Nothing written/.test(document.getElementById('messages')?.textContent ?? ''));
-    expect(await announced(page)).toMatch(/Nothing written: the table would fill Sheet1!B2:F17 \(16 rows × 5 columns\), but B2, B3, C3 and \d+ more are not empty/);
+    expect(await announced(page)).toMatch(
+      /Nothing written: the table would fill Sheet1!B2:F17 \(16 rows × 5 columns\), but B2, B3, C3 and \d+ more are not empty/,
+    );
     expect(await chartPlans(page)).toHaveLength(1);
     await page.close();
   });
@@ -90,7 +97,11 @@ describe('Sweep builder in Chromium', () => {
     await page.getByLabel('To (cm⁻³)').fill('1e16');
     expect(await page.locator('#sw-problems li').allTextContents()).toEqual(['Doping "from" (1e+19) must be below "to" (1e+16).']);
     expect(await page.locator('#sw-plot svg').count()).toBe(0);
-    expect(await page.locator('[aria-invalid="true"]').evaluateAll((els) => els.map((e) => e.id))).toEqual(['sw-doping-from', 'sw-doping-to', 'sw-doping-ppd']);
+    expect(await page.locator('[aria-invalid="true"]').evaluateAll((els) => els.map((e) => e.id))).toEqual([
+      'sw-doping-from',
+      'sw-doping-to',
+      'sw-doping-ppd',
+    ]);
     await page.getByRole('button', { name: 'Insert table and chart' }).click();
     expect(await announced(page)).toMatch(/^Not inserted\. Doping "from"/);
     await page.close();
@@ -140,7 +151,9 @@ describe('Sweep builder in Chromium', () => {
     await tabTo(page, 'sw-insert');
     await page.keyboard.press('Enter');
     await page.waitForFunction(() => /Inserted/.test(document.getElementById('messages')?.textContent ?? ''));
-    expect(await announced(page)).toMatch(/^Inserted at Sheet1!A1:B12: =DRIFT\.SHEETRES\(DRIFT\.RESISTIVITY\(A3:A12,"As",300\),2\) in B3 spills 10 × 1 values; chart added \(log x, log y\)\.$/);
+    expect(await announced(page)).toMatch(
+      /^Inserted at Sheet1!A1:B12: =DRIFT\.SHEETRES\(DRIFT\.RESISTIVITY\(A3:A12,"As",300\),2\) in B3 spills 10 × 1 values; chart added \(log x, log y\)\.$/,
+    );
     const table = await readBlock(page, cells({ row: 1, column: 0, rowCount: 11, columnCount: 2 }));
     expect(table.values[0]).toEqual(['Doping (cm⁻³)', 'Sheet resistance Rs (Ω/sq)']);
     const doping = table.values.slice(1).map((row) => [row[0] as number]);
