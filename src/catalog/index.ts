@@ -97,6 +97,19 @@ export function findFunction(name: string): FunctionSpec | undefined {
   return BY_NAME.get(bare);
 }
 
+/**
+ * The functions whose help pages cite a model: from a registry entry's code
+ * (MODEL_REGISTRY, src/physics/models.ts) to the catalog entries that use it.
+ *
+ * @param code - a model code, any case, e.g. 'Masetti'
+ * @returns function names without the DRIFT. prefix, in catalog order (empty for a code no function cites)
+ * @example functionsCiting('sproul-green') // → ['INTRINSIC']
+ */
+export function functionsCiting(code: string): readonly string[] {
+  const wanted = code.trim().toLowerCase();
+  return CATALOG.filter((spec) => spec.models.some((cited) => cited.toLowerCase() === wanted)).map((spec) => spec.name);
+}
+
 export { evaluate, toFailure, unwrapSingle } from './broadcast';
 export { NAMESPACE, qualifiedName } from './naming';
 export type { FunctionSpec, ParameterSpec, ElementwiseSpec, TableSpec, TupleSpec, RowSpec } from './types';
