@@ -64,6 +64,7 @@ export {
   freeCarrierMobility,
   diffusivity,
 } from './mobility';
+export { ARORA_FITTED_TEMPERATURES } from './mobility/arora';
 export {
   RESISTIVITY_MODEL_CODES,
   ALL_RESISTIVITY_MODEL_CODES,

@@ -1,4 +1,4 @@
-import { SILICON, carrierFor, fitMobility, mobility, mobilityModelCodes } from '../../physics';
+import { ARORA_FITTED_TEMPERATURES, SILICON, carrierFor, fitMobility, mobility, mobilityModelCodes } from '../../physics';
 import { carrier, counterDoping, dopant, doping, material, mobilityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { MOBILITY_MODELS, otherMaterialDefaults } from '../citedModels';
@@ -33,7 +33,7 @@ export const MOBILITY = elementwise({
     and as klaassen for minority carriers.
 
     masetti (Masetti et al. 1983) is dopant-specific for As, P and B and takes its temperature dependence from
-    Arora's fit (200–500 K); see the model table for each model's range.
+    Arora's fit (${ARORA_FITTED_TEMPERATURES.min}–${ARORA_FITTED_TEMPERATURES.max} K); see the model table for each model's range.
 
     klaassen (Klaassen 1992, silicon) is one model for majority and minority carriers. Unlike the other
     silicon models, which take the total impurity density, it treats donors, acceptors and the free carriers

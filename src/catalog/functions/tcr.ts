@@ -1,4 +1,4 @@
-import { SILICON, TCR_RELATIVE_STEP, resistivityTemperatureCoefficient, type Sample } from '../../physics';
+import { ARORA_FITTED_TEMPERATURES, SILICON, TCR_RELATIVE_STEP, resistivityTemperatureCoefficient, type Sample } from '../../physics';
 import { TEMPERATURE_RANGE_K, dopant, doping, material, resistivityModel, sampleOf, temperature } from '../common';
 import { elementwise } from '../types';
 import { RESISTIVITY_MODELS } from '../citedModels';
@@ -46,9 +46,9 @@ export const TCR = elementwise({
     (checks in tests/physics/reference). No published ρ(T) table near 1e18 cm⁻³ (such as Li and Thurber's NBS
     measurements) could be checked, so the small negative values near 1e18 cm⁻³ are unverified against data:
     treat the sign there as uncertain, and the magnitude everywhere as an estimate. The validity is that of
-    the resistivity model (see DRIFT.MODELS; e.g. Arora's temperature dependence is fitted over 250–500 K and
-    extrapolated outside). 'astm-f723' is a 290–305 K conversion without temperature dependence and is
-    refused.`,
+    the resistivity model (see DRIFT.MODELS; e.g. Arora's temperature dependence is fitted over
+    ${ARORA_FITTED_TEMPERATURES.min}–${ARORA_FITTED_TEMPERATURES.max} K and extrapolated outside). 'astm-f723'
+    is a 290–305 K conversion without temperature dependence and is refused.`,
   result: { unit: 'ppm/K', description: 'Temperature coefficient of resistivity' },
   parameters: [doping, dopant, temperature, resistivityModel, material] as const,
   examples: [

@@ -14,13 +14,18 @@
 import type { Carrier } from '../sample';
 import { memoize } from '../memo';
 
+/** Temperatures over which Arora et al. fitted their expressions, K (abstract). */
+export const ARORA_FITTED_TEMPERATURES = { min: 250, max: 500 } as const;
+
 /** Citation and validity of the Arora fit, for the model registry. */
 export const ARORA_SOURCE = {
   citation:
     'N. D. Arora, J. R. Hauser, D. J. Roulston, IEEE Trans. Electron Devices 29, 292 (1982) ' +
     "(parameter values from memory, checked against the transcription in Sandia's Charon simulator, " +
     'github tcadsoftware/charon, src/Charon_Material_Properties.cpp)',
-  validity: '250–500 K, up to about 1e20 cm⁻³, within ±13 % of the data (abstract); extrapolated outside',
+  validity:
+    `${ARORA_FITTED_TEMPERATURES.min}–${ARORA_FITTED_TEMPERATURES.max} K, up to about 1e20 cm⁻³, within ±13 % of the data (abstract); ` +
+    'extrapolated outside',
 } as const;
 
 /** A coefficient scaled by a power of temperature: value · T^exponent. */
@@ -60,9 +65,6 @@ export const ARORA_TABLE: Readonly<Record<Carrier, AroraParameters>> = {
 
 /** Normalising temperature of Arora's reduced temperature Tn = T/300 K. */
 export const ARORA_REFERENCE_TEMPERATURE = 300;
-
-/** Temperatures over which Arora et al. fitted their expressions, K (abstract). */
-export const ARORA_FITTED_TEMPERATURES = { min: 250, max: 500 } as const;
 
 /**
  * Arora et al. (1982) mobility.
