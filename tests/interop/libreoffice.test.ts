@@ -195,7 +195,10 @@ function expectShownAs(shown: Shown, cell: Expected): void {
   expect({ where, text, close }).toEqual({ where, text, close: true });
 }
 
-/** A workbook with single-cell, spilled and legacy-array DRIFT results, DRIFT calls in every form, and dependents. */
+/**
+ * A workbook with single-cell, spilled and legacy-array DRIFT results, DRIFT calls in every form, and
+ * dependents; and a sheet of DRIFT.MODELCODES rows (text spill, and a number spill with the codes as its argument).
+ */
 async function interopInput(path: string): Promise<void> {
   const workbook = new ExcelJS.Workbook();
   const lots = workbook.addWorksheet('Lots');
@@ -213,6 +216,10 @@ async function interopInput(path: string): Promise<void> {
   summary.getCell('A1').value = 'twice C1';
   summary.getCell('B1').value = f('Lots!C1*2');
   summary.getCell('B2').value = f('Lots!F2*2');
+  // One column per applicable model: the code list as a text row, and a result row spilled by it.
+  const models = workbook.addWorksheet('Models');
+  models.getCell('A1').value = f('DRIFT.MODELCODES("resistivity","Si","B")');
+  models.getCell('A2').value = f('DRIFT.RESISTIVITY(1e16,"B",300,DRIFT.MODELCODES("resistivity","Si","B"))');
   await workbook.xlsx.writeFile(path);
 }
 
@@ -232,8 +239,15 @@ describe('LibreOffice Calc reading what recalc writes', () => {
 
   it('shows every number and text of the values form, also when it recalculates on load', () => {
     for (const profile of [profiles.normal, profiles.recalcOnLoad]) {
-      const shown = libreOffice(values, ['Lots', 'Summary', 'Formulas'], profile);
-      expect(expected.filter((c) => c.formula === 'array' && c.drift).length).toBe(12);
+      const shown = libreOffice(values, ['Lots', 'Summary', 'Models', 'Formulas'], profile);
+      const arrays = expected.filter((c) => c.formula === 'array' && c.drift);
+      expect(arrays.filter((c) => c.sheet === 'Lots').length).toBe(12);
+      // Silicon, boron: f723-anchored, masetti, arora, caughey-thomas, klaassen, astm-f723 (DRIFT.MODELCODES' help).
+      const modelCells = arrays.filter((c) => c.sheet === 'Models').map((c) => [c.row, c.column]);
+      expect(modelCells.sort((a, b) => a[0] - b[0] || a[1] - b[1])).toEqual(
+        [1, 2].flatMap((row) => [1, 2, 3, 4, 5, 6].map((column) => [row, column])),
+      );
+      expect(shownAt(shown, 'Models', 1, 1)).toBe('f723-anchored');
       for (const cell of expected) expectShownAs(shown, cell);
       // The formulas are there to read, DRIFT calls as typed in Excel.
       const listing = shown.get('Formulas') ?? [];
@@ -242,11 +256,17 @@ describe('LibreOffice Calc reading what recalc writes', () => {
       expect(listing).toContainEqual(['Lots', 'I1', 'I1:I3', '=DRIFT.SHEETRES(C1:C3,10)']);
       expect(listing).toContainEqual(['Lots', 'C3', 'C3', '=DRIFT.RESISTIVITY(A3,$B$1)']);
       expect(listing).toContainEqual(['Summary', 'B2', 'B2', '=Lots!F2*2']);
+      expect(listing).toContainEqual([
+        'Models',
+        'A2',
+        'A2:F2',
+        '=DRIFT.RESISTIVITY(1e16,"B",300,DRIFT.MODELCODES("resistivity","Si","B"))',
+      ]);
     }
   });
 
   it('shows single-cell results of the live form, and #NAME? for spilled and array DRIFT results', () => {
-    const shown = libreOffice(live, ['Lots', 'Summary'], profiles.normal);
+    const shown = libreOffice(live, ['Lots', 'Summary', 'Models'], profiles.normal);
     for (const cell of expected) {
       if (cell.formula === 'array' && cell.drift)
         expect({ cell, text: shownAt(shown, cell.sheet, cell.row, cell.column) }).toEqual({ cell, text: '#NAME?' });
@@ -255,7 +275,7 @@ describe('LibreOffice Calc reading what recalc writes', () => {
   });
 
   it('shows #NAME? for every DRIFT result and its dependents in the live form when it recalculates on load', () => {
-    const shown = libreOffice(live, ['Lots', 'Summary'], profiles.recalcOnLoad);
+    const shown = libreOffice(live, ['Lots', 'Summary', 'Models'], profiles.recalcOnLoad);
     for (const cell of expected) {
       // Every formula of this workbook is a DRIFT call or depends on one, except K1.
       const fails = cell.formula !== 'none' && !(cell.sheet === 'Lots' && cell.row === 1 && cell.column === 11);
