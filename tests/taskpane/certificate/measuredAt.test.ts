@@ -8,18 +8,13 @@
  */
 import { findFunction, qualifiedName } from '../../../src/catalog';
 import { planCertificateCheck, type CertificateSettings } from '../../../src/taskpane/certificate/plan';
-import { addCertificateCheck, readCertificateTable } from '../../../src/taskpane/certificate/session';
+import { addCertificateCheck } from '../../../src/taskpane/certificate/session';
 import { kelvinOf } from '../../../src/taskpane/certificate/units';
 import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
-import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
-import type { ResultElement } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
-import { MemoryPort, valueAt } from '../support/memoryPort';
+import { valueAt } from '../support/memoryPort';
 import { CERTIFICATE_ROWS, CERTIFICATE_TABLE } from './fixture';
-
-const TOP = 1;
-const LEFT = 1;
-const FIRST_NEW = LEFT + CERTIFICATE_TABLE[0].length;
+import { FIRST_NEW, TOP, numberAt, portWithTable } from './tablePort';
 
 const BASE: Omit<CertificateSettings, 'mapping'> = {
   neededMin: 1e15,
@@ -35,20 +30,6 @@ const BASE: Omit<CertificateSettings, 'mapping'> = {
   radialLimitPercent: null,
   measuredAt: { value: 25, unit: 'C' },
 };
-
-async function portWithTable(table = CERTIFICATE_TABLE): Promise<{ port: MemoryPort; mapping: readonly ColumnRole[] }> {
-  const port = new MemoryPort();
-  port.put(TOP, LEFT, table);
-  port.select(TOP, LEFT, table.length, table[0].length);
-  const { guess } = await readCertificateTable(port);
-  return { port, mapping: guess.mapping };
-}
-
-function numberAt(values: Map<string, ResultElement[][]>, row: number, column: number): number {
-  const shown = valueAt(values, row, column);
-  if (typeof shown !== 'number') throw new Error(`cell (${row}, ${column}) shows ${JSON.stringify(shown)}`);
-  return shown;
-}
 
 describe('readings measured at another temperature', () => {
   it('°C and K are read by the chosen unit, never from the number', () => {

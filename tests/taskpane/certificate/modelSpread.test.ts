@@ -7,18 +7,15 @@
  */
 import { evaluate, findFunction, isFailure, qualifiedName, type ArgumentInput } from '../../../src/catalog';
 import { planCertificateCheck, type CertificateSettings } from '../../../src/taskpane/certificate/plan';
-import { addCertificateCheck, readCertificateTable } from '../../../src/taskpane/certificate/session';
+import { addCertificateCheck } from '../../../src/taskpane/certificate/session';
 import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
-import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
 import type { ResultElement, ResultError } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
-import { MemoryPort, valueAt } from '../support/memoryPort';
+import { valueAt } from '../support/memoryPort';
 import { dopingOverModels } from './dopingOverModels';
-import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './fixture';
+import { CERTIFICATE_ROWS, CHECK_HEADERS } from './fixture';
+import { FIRST_NEW, LEFT, TOP, portWithTable } from './tablePort';
 
-const TOP = 1; // table at B2
-const LEFT = 1;
-const FIRST_NEW = LEFT + CERTIFICATE_TABLE[0].length; // column L
 const DOPINGSPREAD = qualifiedName(findFunction('DOPINGSPREAD')!);
 
 const BASE: Omit<CertificateSettings, 'mapping'> = {
@@ -44,14 +41,6 @@ const SPREAD_HEADERS = ['ρmax', 'ρmin'].flatMap((end) => [
 /** Offsets (from the first new column) of the two spilled formulas with the fixture fully mapped. */
 const AT_MAX = 4;
 const AT_MIN = 7;
-
-async function portWithTable(table = CERTIFICATE_TABLE): Promise<{ port: MemoryPort; mapping: readonly ColumnRole[] }> {
-  const port = new MemoryPort();
-  port.put(TOP, LEFT, table);
-  port.select(TOP, LEFT, table.length, table[0].length);
-  const { guess } = await readCertificateTable(port);
-  return { port, mapping: guess.mapping };
-}
 
 /** DRIFT.DOPINGSPREAD called directly: [lowest, highest, relative spread]. */
 function spread(...args: ArgumentInput[]): [number, number, number] {

@@ -11,15 +11,11 @@ import { dopantCodeFor, dopantCodeFormula } from '../../../src/taskpane/certific
 import { planCertificateCheck, type CertificateSettings } from '../../../src/taskpane/certificate/plan';
 import { addCertificateCheck, readCertificateTable } from '../../../src/taskpane/certificate/session';
 import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
-import type { ColumnRole } from '../../../src/taskpane/certificate/roles';
-import type { ResultElement, ResultError } from '../../../src/engine/engine';
+import type { ResultError } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
 import { MemoryPort, valueAt } from '../support/memoryPort';
 import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './fixture';
-
-const TOP = 1; // table at B2: row 1, column 1 (0-based)
-const LEFT = 1;
-const FIRST_NEW = LEFT + CERTIFICATE_TABLE[0].length; // first column right of the table
+import { FIRST_NEW, LEFT, TOP, numberAt, portWithTable } from './tablePort';
 
 const BASE: Omit<CertificateSettings, 'mapping'> = {
   neededMin: 1e15,
@@ -35,22 +31,8 @@ const BASE: Omit<CertificateSettings, 'mapping'> = {
   radialLimitPercent: null,
 };
 
-async function portWithTable(table = CERTIFICATE_TABLE): Promise<{ port: MemoryPort; mapping: readonly ColumnRole[] }> {
-  const port = new MemoryPort();
-  port.put(TOP, LEFT, table);
-  port.select(TOP, LEFT, table.length, table[0].length);
-  const { guess } = await readCertificateTable(port);
-  return { port, mapping: guess.mapping };
-}
-
 function mean(values: readonly number[]): number {
   return values.reduce((sum, v) => sum + v, 0) / values.length;
-}
-
-function numberAt(values: Map<string, ResultElement[][]>, row: number, column: number): number {
-  const shown = valueAt(values, row, column);
-  if (typeof shown !== 'number') throw new Error(`cell (${row}, ${column}) shows ${JSON.stringify(shown)}`);
-  return shown;
 }
 
 describe('certificate check on the fictional test table', () => {
