@@ -34,6 +34,20 @@ export function element<K extends keyof HTMLElementTagNameMap>(
 }
 
 /**
+ * A text input for a number: typed as text so that 1e15 stays as typed
+ * (parseNumberField reads it), with the decimal keypad on touch screens and
+ * neither autocomplete nor spell checking.
+ *
+ * @param doc - the pane's document
+ * @param id - the input's id (its label's `for`)
+ * @param placeholder - optional hint shown while the field is empty
+ * @example numberInput(document, 'dc-certificate-needed-min', 'e.g. 1e15')
+ */
+export function numberInput(doc: Document, id: string, placeholder?: string): HTMLInputElement {
+  return element(doc, 'input', { type: 'text', id, inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', placeholder });
+}
+
+/**
  * A labelled field: `<div class="dc-field"><label for=id>…</label>control</div>`.
  *
  * @param doc - document

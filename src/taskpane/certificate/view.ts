@@ -10,7 +10,7 @@ import { F723_ANCHOR_TEMPERATURE } from '../../catalog/physicsFacade';
 import { columnName, sheetAddress, type CellBlock } from '../port';
 import type { ToolContext } from '../tool';
 import { parameterNamed } from '../reference/callText';
-import { checkField, element, labelledControl, parseNumberField, selectOf } from '../dom';
+import { checkField, element, labelledControl, numberInput, parseNumberField, selectOf } from '../dom';
 import { PaneRefusal } from '../sheetPlan';
 import type { CertificateSettings, MeasuredAt, TemperatureUnit, WindowRule } from './plan';
 import { COLUMN_ROLES, ROLE_LABELS, type ColumnRole } from './roles';
@@ -93,37 +93,16 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
   const dopantField = labelledControl(doc, 'Dopant (no type column mapped)', dopantSelect);
 
   // Window and options.
-  const neededMin = element(doc, 'input', {
-    type: 'text',
-    id: `${ID}-needed-min`,
-    inputmode: 'decimal',
-    autocomplete: 'off',
-    spellcheck: 'false',
-    placeholder: 'e.g. 1e15',
-  });
-  const neededMax = element(doc, 'input', {
-    type: 'text',
-    id: `${ID}-needed-max`,
-    inputmode: 'decimal',
-    autocomplete: 'off',
-    spellcheck: 'false',
-    placeholder: 'e.g. 2e15',
-  });
+  const neededMin = numberInput(doc, `${ID}-needed-min`, 'e.g. 1e15');
+  const neededMax = numberInput(doc, `${ID}-needed-max`, 'e.g. 2e15');
   const windowRule = selectOf(doc, `${ID}-window-rule`, WINDOW_RULES, WINDOW_RULES[0][0]);
-  const temperature = element(doc, 'input', { type: 'text', id: `${ID}-temperature`, inputmode: 'decimal', autocomplete: 'off' });
+  const temperature = numberInput(doc, `${ID}-temperature`);
   // Certificates state resistivity at 23 °C (the temperature of ASTM F723 and F84), so the check starts
   // there rather than at DRIFT.DOPING's blank 300 K; the default model then gives F723's own numbers.
   const defaultTemperature = String(F723_ANCHOR_TEMPERATURE);
   temperature.value = defaultTemperature;
   // Readings taken at the lab's temperature: optional; its unit is chosen by the user, never read from the number.
-  const measuredAt = element(doc, 'input', {
-    type: 'text',
-    id: `${ID}-measured-at`,
-    inputmode: 'decimal',
-    autocomplete: 'off',
-    spellcheck: 'false',
-    placeholder: 'blank: at the certificate temperature',
-  });
+  const measuredAt = numberInput(doc, `${ID}-measured-at`, 'blank: at the certificate temperature');
   const measuredUnit = selectOf(
     doc,
     `${ID}-measured-unit`,
@@ -151,13 +130,7 @@ export function mountCertificateCheck(panel: HTMLElement, context: ToolContext):
       'Adds DRIFT.DOPINGSPREAD at ρmax and at ρmin over every resistivity model of the material, whichever ' +
       'doping model is chosen (a material with one model shows 0 %). Pass/fail does not use it.',
   );
-  const radialLimit = element(doc, 'input', {
-    type: 'text',
-    id: `${ID}-radial-limit`,
-    inputmode: 'decimal',
-    autocomplete: 'off',
-    placeholder: 'no limit',
-  });
+  const radialLimit = numberInput(doc, `${ID}-radial-limit`, 'no limit');
   const addButton = element(doc, 'button', { type: 'button', id: `${ID}-add`, class: 'dc-button dc-primary', text: 'Add check columns' });
 
   const roleSelects: HTMLSelectElement[] = [];

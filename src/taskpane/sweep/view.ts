@@ -7,6 +7,7 @@
  */
 import { parseDecimalText } from '../../catalog/parameters';
 import type { ParameterSpec } from '../../catalog/types';
+import { numberInput } from '../dom';
 import { blockAddress, sheetAddress } from '../port';
 import { PaneRefusal } from '../sheetPlan';
 import type { ToolContext } from '../tool';
@@ -50,11 +51,7 @@ function field(doc: Document, id: string, label: string, value: string, hint?: s
   const wrap = make(doc, 'div', { className: 'sw-field' });
   const labelNode = make(doc, 'label', { textContent: label });
   labelNode.htmlFor = id;
-  const input = make(doc, 'input', { id });
-  input.type = 'text';
-  input.inputMode = 'decimal';
-  input.autocomplete = 'off';
-  input.spellcheck = false;
+  const input = numberInput(doc, id);
   input.value = value;
   wrap.append(labelNode, input);
   if (hint !== undefined) {
