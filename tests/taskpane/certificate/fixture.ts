@@ -20,13 +20,30 @@ export const CERTIFICATE_HEADERS = [
   'Thickness (um)',
 ] as const;
 
-/** Invented wafer rows: [lot, wafer, type, ρmin, ρmax, centre, edge1, edge2, edge3, thickness µm]. */
-export const CERTIFICATE_ROWS: readonly (readonly CellInput[])[] = [
+/** One invented wafer row, in the order of CERTIFICATE_HEADERS (ρ in Ω·cm, thickness in µm). */
+export type WaferRow = readonly [
+  lot: string,
+  wafer: string,
+  type: string,
+  rhoMin: number,
+  rhoMax: number,
+  centre: number,
+  edge1: number,
+  edge2: number,
+  edge3: number,
+  thickness: number,
+];
+
+/** Invented wafer rows, typed (tests destructure them); CERTIFICATE_ROWS is the same rows as sheet cells. */
+export const WAFER_ROWS: readonly WaferRow[] = [
   ['KS-2301', 'W01', 'P', 8, 12, 10.1, 10.4, 10.6, 10.3, 525],
   ['KS-2301', 'W02', 'P', 8, 12, 9.8, 10.9, 11.2, 10.8, 525],
   ['KS-2302', 'W01', 'N', 1, 3, 2.1, 2.2, 2.0, 2.3, 525],
   ['KS-2303', 'W07', 'Boron', 9, 11, 12.5, 12.9, 13.1, 12.7, 675],
 ];
+
+/** The wafer rows as cell inputs for a sheet. */
+export const CERTIFICATE_ROWS: readonly (readonly CellInput[])[] = WAFER_ROWS;
 
 /** The whole table, header row first. */
 export const CERTIFICATE_TABLE: readonly (readonly CellInput[])[] = [CERTIFICATE_HEADERS, ...CERTIFICATE_ROWS];
@@ -42,3 +59,11 @@ export const CHECK_HEADERS: readonly string[] = [
   'Radial variation (%)',
   'Pass/fail',
 ];
+
+/**
+ * The dopant code the check should read a certificate's type as, with "P/N are conductivity
+ * types" on (the tests' default): P the generic acceptor, N the generic donor, anything else as written.
+ */
+export function expectedDopantOfType(type: unknown): string {
+  return type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : String(type);
+}

@@ -13,7 +13,7 @@ import { kelvinOf } from '../../../src/taskpane/certificate/units';
 import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
 import { value } from '../../catalog/support/call';
 import { valueAt } from '../support/memoryPort';
-import { CERTIFICATE_ROWS, CERTIFICATE_TABLE } from './fixture';
+import { CERTIFICATE_TABLE, WAFER_ROWS, expectedDopantOfType } from './fixture';
 import { FIRST_NEW, TOP, numberAt, portWithTable } from './tablePort';
 
 const BASE: Omit<CertificateSettings, 'mapping'> = {
@@ -72,21 +72,10 @@ describe('readings measured at another temperature', () => {
     expect(firstRow[10]).toBe(`=${qualifiedName(findFunction('RADIALVARIATION')!)}(P3,Q3:S3)`);
 
     const values = port.engineValues();
-    CERTIFICATE_ROWS.forEach((row, index) => {
+    WAFER_ROWS.forEach((row, index) => {
       const sheetRow = TOP + 1 + index;
-      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [
-        string,
-        string,
-        string,
-        number,
-        number,
-        number,
-        number,
-        number,
-        number,
-        number,
-      ];
-      const code = type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : type;
+      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row;
+      const code = expectedDopantOfType(type);
       const corrected = [centre, e1, e2, e3].map((reading) => value('RESISTIVITYAT', reading, code, 298.15, 296.15));
       corrected.forEach((expected, k) => expect(numberAt(values, sheetRow, FIRST_NEW + 4 + k) / expected).toBeCloseTo(1, 12));
       // A warmer lab reads higher ρ where the TCR is positive (these light dopings): the correction lowers them.

@@ -13,7 +13,7 @@ import type { ResultElement, ResultError } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
 import { valueAt } from '../support/memoryPort';
 import { dopingOverModels } from './dopingOverModels';
-import { CERTIFICATE_ROWS, CHECK_HEADERS } from './fixture';
+import { CERTIFICATE_ROWS, CHECK_HEADERS, expectedDopantOfType } from './fixture';
 import { FIRST_NEW, LEFT, TOP, portWithTable } from './tablePort';
 
 const DOPINGSPREAD = qualifiedName(findFunction('DOPINGSPREAD')!);
@@ -60,10 +60,6 @@ function expectClose(shown: readonly ResultElement[], expected: readonly number[
   );
 }
 
-function codeOf(type: unknown): string {
-  return type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : String(type);
-}
-
 describe('model spread columns in the certificate check', () => {
   it('are off by default: without the option, or with it false, the check is exactly as before', async () => {
     const { port, mapping } = await portWithTable();
@@ -99,7 +95,7 @@ describe('model spread columns in the certificate check', () => {
     const values = port.engineValues();
     CERTIFICATE_ROWS.forEach((row, index) => {
       const sheetRow = TOP + 1 + index;
-      const code = codeOf(row[2]);
+      const code = expectedDopantOfType(row[2]);
       const [rhoMin, rhoMax] = [row[3], row[4]] as number[];
       const atMax = spread(rhoMax, code, 296.15);
       const atMin = spread(rhoMin, code, 296.15);
@@ -172,7 +168,7 @@ describe('model spread columns in the certificate check', () => {
     expect(plan.writes[0].cells[1][AT_MAX]).toBe(`=${DOPINGSPREAD}(F3,L3,${temperatureCell})`);
     const values = port.engineValues();
     const [row] = CERTIFICATE_ROWS;
-    expectClose(rowOf(values, TOP + 1, FIRST_NEW + AT_MIN, 3), spread(row[3] as number, codeOf(row[2]), 296.15));
+    expectClose(rowOf(values, TOP + 1, FIRST_NEW + AT_MIN, 3), spread(row[3] as number, expectedDopantOfType(row[2]), 296.15));
   });
 
   it('passes the chosen material and the resistivity unit’s factor, not the chosen model (the spread covers every model)', async () => {

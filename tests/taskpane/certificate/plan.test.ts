@@ -14,7 +14,7 @@ import { PaneRefusal } from '../../../src/taskpane/sheetPlan';
 import type { ResultError } from '../../../src/engine/engine';
 import { value } from '../../catalog/support/call';
 import { MemoryPort, valueAt } from '../support/memoryPort';
-import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS } from './fixture';
+import { CERTIFICATE_ROWS, CERTIFICATE_TABLE, CHECK_HEADERS, WAFER_ROWS, expectedDopantOfType } from './fixture';
 import { FIRST_NEW, LEFT, TOP, numberAt, portWithTable } from './tablePort';
 
 const BASE: Omit<CertificateSettings, 'mapping'> = {
@@ -41,22 +41,11 @@ describe('certificate check on the fictional test table', () => {
     const plan = await addCertificateCheck(port, await port.selection(), { ...BASE, mapping });
     expect(plan.headers).toEqual(CHECK_HEADERS);
     const values = port.engineValues();
-    CERTIFICATE_ROWS.forEach((row, index) => {
+    WAFER_ROWS.forEach((row, index) => {
       const sheetRow = TOP + 1 + index;
-      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row as [
-        string,
-        string,
-        string,
-        number,
-        number,
-        number,
-        number,
-        number,
-        number,
-        number,
-      ];
+      const [, , type, rhoMin, rhoMax, centre, e1, e2, e3, thickness] = row;
       // The certificate's P/N are conductivity types: generic acceptor / donor.
-      const code = type === 'P' ? 'acceptor' : type === 'N' ? 'donor' : type;
+      const code = expectedDopantOfType(type);
       expect(valueAt(values, sheetRow, FIRST_NEW)).toBe(code);
       const atMax = value('DOPING', rhoMax, code, 300, 'masetti', 'Si');
       const atMin = value('DOPING', rhoMin, code, 300, 'masetti', 'Si');

@@ -8,47 +8,21 @@
 import { evaluate, findFunction } from '../../../src/catalog';
 import { applicableModelCodes } from '../../../src/catalog/modelCodes';
 import { createEnginePort } from '../../../src/taskpane/enginePort';
-import type { CellBlock } from '../../../src/taskpane/port';
 import { compareModels, modelSettingOf } from '../../../src/taskpane/sweep/compare';
 import { insertSweep, SweepRefusal } from '../../../src/taskpane/sweep/insert';
 import { planSweep, type SweepLayoutInput } from '../../../src/taskpane/sweep/plan';
 import { describePreview } from '../../../src/taskpane/sweep/plot';
 import { modelBand, previewSweep } from '../../../src/taskpane/sweep/preview';
-import { availableQuantities } from '../../../src/taskpane/sweep/quantities';
 import { resolveSweep, type SweepForm } from '../../../src/taskpane/sweep/settings';
+import { BASE_FORM, at, quantities, resolvedFrom } from './form';
 
-const quantities = availableQuantities();
 const quantity = (id: string) => quantities.find((q) => q.id === id)!;
-const BASE: SweepForm = {
-  quantityId: 'RESISTIVITY',
-  dopingSwept: true,
-  dopingFrom: '1e14',
-  dopingTo: '1e16',
-  pointsPerDecade: '2',
-  fixedDoping: '1e15',
-  temperatureSwept: false,
-  temperatureUnit: 'K',
-  temperatureFrom: '250',
-  temperatureTo: '350',
-  temperatureStep: '25',
-  fixedTemperature: '300',
-  values: { 'inner:dopant': 'B' },
-  compareModels: true,
-};
+/** The base sweep with compare models on, in 25 K steps. */
+const BASE: SweepForm = { ...BASE_FORM, temperatureStep: '25', compareModels: true };
 
 function resolved(form: Partial<SweepForm>): SweepLayoutInput {
-  const result = resolveSweep({ ...BASE, ...form }, quantities);
-  if (!result.ok) throw new Error(result.problems.join(' '));
-  return result.input;
+  return resolvedFrom(BASE, form);
 }
-
-const at = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({
-  sheet: 'Sheet1',
-  row,
-  column,
-  rowCount,
-  columnCount,
-});
 
 describe('which quantities compare models', () => {
   it.each([

@@ -6,44 +6,17 @@
  */
 import { CATALOG, evaluate, findFunction } from '../../../src/catalog';
 import { createEnginePort } from '../../../src/taskpane/enginePort';
-import type { CellBlock } from '../../../src/taskpane/port';
 import { insertSweep, SweepRefusal } from '../../../src/taskpane/sweep/insert';
 import { planSweep } from '../../../src/taskpane/sweep/plan';
 import { previewSweep } from '../../../src/taskpane/sweep/preview';
 import { availableQuantities, QUANTITY_ENTRIES, settingParameters } from '../../../src/taskpane/sweep/quantities';
 import { resolveSweep, type SweepForm } from '../../../src/taskpane/sweep/settings';
 import type { SweepLayoutInput } from '../../../src/taskpane/sweep/plan';
-
-const quantities = availableQuantities();
-const BASE: SweepForm = {
-  quantityId: 'RESISTIVITY',
-  dopingSwept: true,
-  dopingFrom: '1e14',
-  dopingTo: '1e16',
-  pointsPerDecade: '2',
-  fixedDoping: '1e15',
-  temperatureSwept: false,
-  temperatureUnit: 'K',
-  temperatureFrom: '250',
-  temperatureTo: '350',
-  temperatureStep: '50',
-  fixedTemperature: '300',
-  values: { 'inner:dopant': 'B' },
-};
+import { BASE_FORM, at, quantities, resolvedFrom } from './form';
 
 function resolved(form: Partial<SweepForm>): SweepLayoutInput {
-  const result = resolveSweep({ ...BASE, ...form }, quantities);
-  if (!result.ok) throw new Error(result.problems.join(' '));
-  return result.input;
+  return resolvedFrom(BASE_FORM, form);
 }
-
-const at = (row: number, column: number, rowCount = 1, columnCount = 1): CellBlock => ({
-  sheet: 'Sheet1',
-  row,
-  column,
-  rowCount,
-  columnCount,
-});
 
 describe('availableQuantities', () => {
   it('lists the curated functions the catalog has, with the catalog’s labels and units', () => {
@@ -75,7 +48,7 @@ describe('availableQuantities', () => {
 
 describe('resolveSweep', () => {
   it('lists every problem with what is allowed', () => {
-    const result = resolveSweep({ ...BASE, dopingFrom: '0', quantityId: 'SHEETRES' }, quantities);
+    const result = resolveSweep({ ...BASE_FORM, dopingFrom: '0', quantityId: 'SHEETRES' }, quantities);
     expect(result.ok).toBe(false);
     if (result.ok) return;
     expect(result.problems).toEqual([expect.stringMatching(/above 0 cm⁻³/), expect.stringMatching(/Enter thickness_um \(µm\)/)]);
@@ -83,17 +56,17 @@ describe('resolveSweep', () => {
   });
 
   it('refuses hex, binary and octal text such as "0x10" instead of reading it as 16', () => {
-    const fixed = resolveSweep({ ...BASE, dopingSwept: false, temperatureSwept: true, fixedDoping: '0x10' }, quantities);
+    const fixed = resolveSweep({ ...BASE_FORM, dopingSwept: false, temperatureSwept: true, fixedDoping: '0x10' }, quantities);
     expect(fixed.ok).toBe(false);
     if (!fixed.ok) {
       expect(fixed.problems).toEqual(['Fixed doping must be a number above 0 in cm⁻³, e.g. 1e15 (got "0x10").']);
       expect(fixed.invalid).toEqual(['fixedDoping']);
     }
-    const axis = resolveSweep({ ...BASE, dopingFrom: '0x10' }, quantities);
+    const axis = resolveSweep({ ...BASE_FORM, dopingFrom: '0x10' }, quantities);
     expect(axis.ok).toBe(false);
     if (!axis.ok) expect(axis.problems).toEqual(['Doping from and to must be numbers in cm⁻³, e.g. 1e14 and 1e19.']);
     const setting = resolveSweep(
-      { ...BASE, quantityId: 'SHEETRES', values: { 'inner:dopant': 'B', 'outer:thickness_um': '0b11' } },
+      { ...BASE_FORM, quantityId: 'SHEETRES', values: { 'inner:dopant': 'B', 'outer:thickness_um': '0b11' } },
       quantities,
     );
     expect(setting.ok).toBe(false);
@@ -101,14 +74,14 @@ describe('resolveSweep', () => {
       expect(setting.problems).toEqual(['thickness_um must be a number in µm (got "0b11").']);
       expect(setting.invalid).toEqual(['outer:thickness_um']);
     }
-    const temperature = resolveSweep({ ...BASE, fixedTemperature: '0o17' }, quantities);
+    const temperature = resolveSweep({ ...BASE_FORM, fixedTemperature: '0o17' }, quantities);
     expect(temperature.ok).toBe(false);
     if (!temperature.ok)
       expect(temperature.problems).toEqual(['Fixed temperature must be a number above absolute zero in K (got "0o17").']);
   });
 
   it('needs an axis', () => {
-    const result = resolveSweep({ ...BASE, dopingSwept: false }, quantities);
+    const result = resolveSweep({ ...BASE_FORM, dopingSwept: false }, quantities);
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.problems).toEqual(['Sweep doping, temperature or both.']);
   });
