@@ -53,6 +53,19 @@ const TEMPERATURE_BY_ARORA =
   `${ARORA_FITTED_TEMPERATURES.min}–${ARORA_FITTED_TEMPERATURES.max} K, extrapolated outside).`;
 
 /**
+ * A 300 K silicon fit at the sample's temperature: the fit at the sample's total impurity
+ * density times Arora's temperature ratio (TEMPERATURE_BY_ARORA says so in the notes).
+ */
+function carriedByArora(
+  fitAt300K: (carrier: Carrier, density: number, sample: Sample) => number,
+): (carrier: Carrier, sample: Sample) => number {
+  return (carrier, sample) => {
+    const density = totalImpurityDensity(sample);
+    return fitAt300K(carrier, density, sample) * aroraTemperatureRatio(carrier, density, sample.temperature);
+  };
+}
+
+/**
  * Masetti row for a carrier in a sample: electrons use the named dopant's own
  * row when it is a donor (dopant.mobilitySpecies, 'As' or 'P'), otherwise the
  * P row; holes always use the B row (Masetti gives no other hole row).
@@ -76,11 +89,9 @@ const MASETTI: MobilityModel<typeof MASETTI_TABLE> = {
   equation: 'src/physics/mobility/masetti.ts',
   parameterTable: 'src/physics/mobility/masetti.ts',
   tests: ['tests/physics/reference/masetti-1983.reference.test.ts', 'tests/physics/mobility/masetti.test.ts'],
-  compute: (carrier, sample) => {
-    const density = totalImpurityDensity(sample);
-    const row = MASETTI_TABLE[masettiSpecies(carrier, sample)].parameters;
-    return masettiMobility(row, density) * aroraTemperatureRatio(carrier, density, sample.temperature);
-  },
+  compute: carriedByArora((carrier, density, sample) =>
+    masettiMobility(MASETTI_TABLE[masettiSpecies(carrier, sample)].parameters, density),
+  ),
 };
 
 const ARORA: MobilityModel<typeof ARORA_TABLE> = {
@@ -112,10 +123,7 @@ const CAUGHEY_THOMAS: MobilityModel<typeof CAUGHEY_THOMAS_TABLE> = {
   equation: 'src/physics/mobility/caugheyThomas.ts',
   parameterTable: 'src/physics/mobility/caugheyThomas.ts',
   tests: ['tests/physics/reference/caughey-thomas-1967.reference.test.ts', 'tests/physics/mobility/caugheyThomas.test.ts'],
-  compute: (carrier, sample) => {
-    const density = totalImpurityDensity(sample);
-    return caugheyThomasMobility(carrier, density) * aroraTemperatureRatio(carrier, density, sample.temperature);
-  },
+  compute: carriedByArora((carrier, density) => caugheyThomasMobility(carrier, density)),
 };
 
 /** Klaassen's fitted parameter tables, as klaassen/parameters.ts exports them. */
