@@ -116,7 +116,7 @@ export const BAND_MODELS: readonly ModelInfo[] = [
       'P, As, B fitted; Sb, Al, Ga, In use their own Sze & Ng ionization energy with the density ' +
       'dependence of P (Sb) or B (Al, Ga, In): assumption.',
     equation: 'src/physics/ionization.ts',
-    parameterTable: 'src/physics/materials/siliconDopants.ts',
+    parameterTable: SILICON.dopantTable,
     tests: ['tests/physics/reference/altermatt-2006.reference.test.ts', 'tests/physics/ionization.test.ts'],
   },
 ];

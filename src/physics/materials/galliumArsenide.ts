@@ -88,5 +88,6 @@ export const GALLIUM_ARSENIDE: Material = {
   densityOfStates: SZE_NG_2007_GALLIUM_ARSENIDE_DENSITY_OF_STATES,
   intrinsicFits: [],
   dopants: GALLIUM_ARSENIDE_DOPANTS,
+  dopantTable: 'src/physics/materials/galliumArsenideDopants.ts',
   genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

@@ -85,5 +85,6 @@ export const GERMANIUM: Material = {
   densityOfStates: SZE_NG_2007_GERMANIUM_DENSITY_OF_STATES,
   intrinsicFits: [],
   dopants: GERMANIUM_DOPANTS,
+  dopantTable: 'src/physics/materials/germaniumDopants.ts',
   genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

@@ -41,20 +41,6 @@ function dopantSummary(material: Material): string {
     .join(', ');
 }
 
-/** The file of each host's dopant table (isolated ionization energies), by material code. */
-const DOPANT_TABLE_FILES: Readonly<Record<string, string>> = {
-  Ge: 'src/physics/materials/germaniumDopants.ts',
-  GaAs: 'src/physics/materials/galliumArsenideDopants.ts',
-  '4H-SiC': 'src/physics/materials/siliconCarbide4HDopants.ts',
-};
-
-/** A host's dopant-table file; a host added without one is refused when the registry loads. */
-function dopantTableFile(material: Material): string {
-  const file = DOPANT_TABLE_FILES[material.code];
-  if (file === undefined) throw new Error(`materials/modelInfo.ts: no dopant table file named for ${material.code}`);
-  return file;
-}
-
 function hostModels(material: Material): ModelInfo[] {
   const { bandgap, densityOfStates } = material;
   return [
@@ -91,7 +77,7 @@ function hostModels(material: Material): ModelInfo[] {
         'estimate within about a factor of 2, not a fit',
       notes: `εr = ${material.relativePermittivity}. ${dopantSummary(material)}.`,
       equation: 'src/physics/materials/ionizationScaling.ts',
-      parameterTable: dopantTableFile(material),
+      parameterTable: material.dopantTable,
       tests: ['tests/physics/materials/hosts.test.ts'],
     },
   ];

@@ -159,5 +159,6 @@ export const SILICON: Material = {
   densityOfStates: GREEN_1990_DENSITY_OF_STATES,
   intrinsicFits: [MISIAKOS_TSAMAKIS_1993_FIT, SPROUL_GREEN_1991_FIT],
   dopants: SILICON_DOPANTS,
+  dopantTable: 'src/physics/materials/siliconDopants.ts',
   genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

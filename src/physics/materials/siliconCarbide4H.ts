@@ -83,5 +83,6 @@ export const SILICON_CARBIDE_4H: Material = {
   densityOfStates: LEVINSHTEIN_2001_SILICON_CARBIDE_4H_DENSITY_OF_STATES,
   intrinsicFits: [],
   dopants: SILICON_CARBIDE_4H_DOPANTS,
+  dopantTable: 'src/physics/materials/siliconCarbide4HDopants.ts',
   genericDopants: { donor: 'donor', acceptor: 'acceptor' },
 };

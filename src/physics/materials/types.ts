@@ -136,6 +136,8 @@ export interface Material {
   readonly intrinsicFits: readonly IntrinsicDensityFit[];
   /** Dopants in the order users see them. */
   readonly dopants: readonly Dopant[];
+  /** The file holding `dopants` (repository path), for the model registry's locations. */
+  readonly dopantTable: string;
   /** Symbols of the generic donor and acceptor ('donor', 'acceptor'). */
   readonly genericDopants: { readonly donor: string; readonly acceptor: string };
 }
